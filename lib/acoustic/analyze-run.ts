@@ -1,0 +1,89 @@
+// Full analysis of one duct run: resonances, reflections, echoes and warnings.
+import { DEFAULT_MAX_HZ, DEFAULT_MIN_HZ } from './constants';
+import { buildScatteringGraph } from './echoes/scattering-graph';
+import { echoTrain } from './echoes/echo-train';
+import { compileNetwork } from './network/compile';
+import { NetworkEvaluator } from './network/evaluator';
+import { discontinuityReflections } from './reflections';
+import { modeShape } from './resonances/mode-shape';
+import { findNaturalFrequencies } from './resonances/natural-frequencies';
+import { cutoffHz } from './section';
+import type { Resonance, RunAnalysis, RunInput, Segment } from './types';
+import { validateRun } from './validate-run';
+
+const DEFAULT_MAX_ECHOES = 40;
+const DEFAULT_ECHO_THRESHOLD = 1e-3;
+const MAX_ECHO_WAVEFRONTS = 200000;
+/** Scan points per mean mode spacing c / (2 L). */
+const SCAN_POINTS_PER_MODE_SPACING = 3;
+/** Modes whose damping is below this fraction of their frequency count as undamped (Q null). */
+const UNDAMPED_FRACTION = 1e-9;
+
+function lowestCutoffHz(segments: Segment[], speedOfSoundMps: number): number {
+  let lowest = Infinity;
+  for (const segment of segments) {
+    lowest = Math.min(lowest, cutoffHz(segment.section, speedOfSoundMps));
+    for (const branch of segment.branches ?? []) lowest = Math.min(lowest, lowestCutoffHz(branch.segments, speedOfSoundMps));
+  }
+  return lowest;
+}
+
+const formatHz = (hz: number): string => `${hz.toFixed(1)} Hz`;
+
+export function analyzeRun(input: RunInput): RunAnalysis {
+  validateRun(input);
+  const network = compileNetwork(input);
+  const evaluator = new NetworkEvaluator(network);
+  const speedOfSoundMps = network.speedOfSoundMps;
+  const runCutoffHz = lowestCutoffHz(input.segments, speedOfSoundMps);
+  const minHz = input.minHz ?? DEFAULT_MIN_HZ;
+  const maxHz = input.maxHz ?? Math.min(DEFAULT_MAX_HZ, runCutoffHz);
+  const warnings: string[] = [];
+  if (maxHz > runCutoffHz) {
+    warnings.push(
+      `maxHz (${formatHz(maxHz)}) is above the plane-wave cut-off (${formatHz(runCutoffHz)}): ` +
+        'higher-order modes propagate there and the plane-wave model is not valid',
+    );
+  }
+  let resonances: Resonance[] = [];
+  if (maxHz > minHz) {
+    const endCorrectionsM = network.terminations.reduce((sum, termination) => sum + termination.lowFrequencyEndCorrectionM, 0);
+    const scanStepHz = speedOfSoundMps / (2 * (network.totalLengthM + endCorrectionsM)) / SCAN_POINTS_PER_MODE_SPACING;
+    resonances = findNaturalFrequencies(evaluator, { minHz, maxHz, scanStepHz }).map((zero, index) => {
+      const damped = zero.dampingHz > UNDAMPED_FRACTION * zero.frequencyHz;
+      const shape = modeShape(evaluator, zero.frequencyHz);
+      return {
+        order: index + 1,
+        frequencyHz: zero.frequencyHz,
+        // Q = fr / (2 fi) and the -3 dB bandwidth 2 fi of a single pole at fr + j fi (Kinsler & Frey, ch. 1, damped oscillator)
+        q: damped ? zero.frequencyHz / (2 * zero.dampingHz) : null,
+        bandwidthHz: damped ? 2 * zero.dampingHz : null,
+        antinodesM: shape.antinodesM,
+        nodesM: shape.nodesM,
+        dampingHz: zero.dampingHz,
+      };
+    });
+  } else {
+    warnings.push(`no frequency range to analyse: maxHz (${formatHz(maxHz)}) is not above minHz (${formatHz(minHz)})`);
+  }
+  const echoes = echoTrain(buildScatteringGraph(input), {
+    maxEchoes: input.maxEchoes ?? DEFAULT_MAX_ECHOES,
+    threshold: input.echoThreshold ?? DEFAULT_ECHO_THRESHOLD,
+    maxWavefronts: MAX_ECHO_WAVEFRONTS,
+  });
+  return {
+    speedOfSoundMps,
+    lengthM: network.mainLengthM,
+    cutoffHz: runCutoffHz,
+    endCorrectionM: {
+      start: network.terminations[network.startTermination].lowFrequencyEndCorrectionM,
+      end: network.terminations[network.endTermination].lowFrequencyEndCorrectionM,
+    },
+    reflections: discontinuityReflections(evaluator, runCutoffHz),
+    resonances,
+    echoes,
+    warnings,
+    minHz,
+    maxHz,
+  };
+}

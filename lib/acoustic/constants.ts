@@ -1,0 +1,65 @@
+// Shared numeric constants of the acoustic engine, each with its source.
+
+/** 0 °C in kelvin. SI definition (BIPM, SI Brochure, 9th ed., 2019). */
+export const ZERO_CELSIUS_K = 273.15;
+
+/** Reference temperature of ISO 9613-1 (1993), 20 °C, in kelvin. */
+export const ISO_9613_REFERENCE_TEMPERATURE_K = 293.15;
+
+/** Speed of sound in dry air at 20 °C, ISO 9613-1 (1993), eq. (A.3) reference value, m/s. */
+export const ISO_9613_REFERENCE_SPEED_OF_SOUND_MPS = 343.2;
+
+/** Standard atmospheric pressure, ISO 2533 (1975), Pa. */
+export const STANDARD_PRESSURE_PA = 101325;
+
+/** Specific gas constant of dry air, J/(kg·K). ISO 2533 (1975) gives 287.05287 (value rounded, from memory). */
+export const DRY_AIR_GAS_CONSTANT_J_PER_KG_K = 287.05;
+
+/** Ratio of specific heats of air (Kinsler & Frey, Fundamentals of Acoustics, 4th ed., appendix A10). */
+export const AIR_HEAT_CAPACITY_RATIO = 1.4;
+
+/** Prandtl number of air near 20 °C (Kinsler & Frey, Fundamentals of Acoustics, 4th ed., appendix A10). */
+export const AIR_PRANDTL_NUMBER = 0.71;
+
+/** Sutherland's law reference viscosity of air at 273.15 K, Pa·s (White, Viscous Fluid Flow, 3rd ed., Table 1-2; from memory). */
+export const SUTHERLAND_REFERENCE_VISCOSITY_PA_S = 1.716e-5;
+
+/** Sutherland's law reference temperature, K (White, Viscous Fluid Flow, 3rd ed., Table 1-2; from memory). */
+export const SUTHERLAND_REFERENCE_TEMPERATURE_K = 273.15;
+
+/** Sutherland constant of air, K (White, Viscous Fluid Flow, 3rd ed., Table 1-2; from memory). */
+export const SUTHERLAND_CONSTANT_K = 110.4;
+
+/** First zero of the Bessel derivative J1'(x): cut-off of the (1,1) mode in a round duct (Abramowitz & Stegun, Table 9.5). */
+export const BESSEL_J1_PRIME_FIRST_ZERO = 1.84118;
+
+/** Low-frequency end correction of an unflanged pipe, times the radius: Levine & Schwinger (1948), Phys. Rev. 73, 383. */
+export const UNFLANGED_END_CORRECTION_PER_RADIUS = 0.6133;
+
+/** Low-frequency end correction of a pipe in an infinite flange, times the radius: Norris & Sheng (1989), J. Sound Vib. 135, 85. */
+export const FLANGED_END_CORRECTION_PER_RADIUS = 0.8216;
+
+/** Smallest section dimension (diameter, width or height) the engine accepts, m. Product rule. */
+export const MIN_SECTION_DIMENSION_M = 0.01;
+
+/** Defaults of RunInput (engine contract). */
+export const DEFAULT_TEMPERATURE_C = 20;
+export const DEFAULT_MIN_HZ = 20;
+export const DEFAULT_MAX_HZ = 2000;
+
+/** Nominal octave-band centre frequencies from 63 Hz to 8 kHz (IEC 61260-1 (2014), Annex E nominal values). */
+export const OCTAVE_BANDS_HZ: readonly number[] = [63, 125, 250, 500, 1000, 2000, 4000, 8000];
+
+/** Decibels per neper for amplitude: 20 / ln 10 (definition of the neper, ISO 80000-3). */
+export const DB_PER_NEPER = 20 / Math.LN10;
+
+/** Sabine's lined-duct attenuation coefficient in 1.05·α^1.4·P/S dB/m (Sabine 1940; 12.6 dB/ft with P/S in 1/in; from memory). */
+export const SABINE_LINED_DUCT_COEFFICIENT_DB = 1.05;
+
+/** Sabine's lined-duct absorption exponent (Sabine 1940; from memory). */
+export const SABINE_LINED_DUCT_ABSORPTION_EXPONENT = 1.4;
+
+/** End reflection loss coefficients a1 (flush, free) and a2 (ASHRAE RP-1314, 2007; from memory). */
+export const END_REFLECTION_LOSS_A1_FLUSH = 0.7;
+export const END_REFLECTION_LOSS_A1_FREE = 1.0;
+export const END_REFLECTION_LOSS_A2 = 2;

@@ -1,0 +1,172 @@
+// Compiles a run (main path plus nested side branches) into flat arrays and a small stack program
+// that the evaluator runs at each frequency without allocating.
+import { airProperties, type AirProperties } from '../air';
+import { DEFAULT_TEMPERATURE_C } from '../constants';
+import { lowFrequencyEndCorrectionM } from '../terminations';
+import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
+import { sabineLinedDuctNpPerM } from '../lining-attenuation';
+import { kirchhoffAttenuationPerSqrtHz } from '../wall-losses';
+import type { RunInput, Segment, Termination } from '../types';
+
+/** Push the state of a termination (an outward end) onto the stack. Operand: termination index. */
+export const OP_TERMINATION = 0;
+/** Carry the top state inward (towards the start) through one segment. Operand: segment index. */
+export const OP_SEGMENT = 1;
+/** Pop a side branch's state and join it, as a shunt, to the state below it. Operand unused. */
+export const OP_SHUNT = 2;
+
+export interface CompiledTermination {
+  termination: Termination;
+  radiusM: number;
+  /** Acoustic characteristic impedance rho c / S of the segment it closes, Pa·s/m³. */
+  characteristicImpedance: number;
+  lowFrequencyEndCorrectionM: number;
+}
+
+/** A side branch as it hangs off a junction: where its program lies, and its description for reports. */
+export interface CompiledBranch {
+  programStart: number;
+  programEnd: number;
+  segments: number[];
+  endTermination: number;
+}
+
+export interface CompiledNetwork {
+  air: AirProperties;
+  speedOfSoundMps: number;
+  segmentLengthM: Float64Array;
+  segmentAreaM2: Float64Array;
+  segmentImpedance: Float64Array;
+  segmentKirchhoffPerSqrtHz: Float64Array;
+  segmentLiningNpPerM: Float64Array;
+  segmentLiningDbPerM: Float64Array;
+  terminations: CompiledTermination[];
+  /** Pairs (opcode, operand), post-order: evaluates the main path from its end back to the start. */
+  program: Int32Array;
+  stackDepth: number;
+  /** Index into terminations of the start and end terminations of the main path. */
+  startTermination: number;
+  endTermination: number;
+  /** Main-path segment indices, start to end, and the branches at each one's far end. */
+  mainSegments: number[];
+  mainBranches: CompiledBranch[][];
+  /** Nested branches of each branch segment (index by segment). */
+  branchesAtSegment: Map<number, CompiledBranch[]>;
+  mainLengthM: number;
+  totalLengthM: number;
+}
+
+interface Builder {
+  network: CompiledNetwork;
+  ops: number[];
+  lengths: number[];
+  areas: number[];
+  impedances: number[];
+  kirchhoff: number[];
+  liningNp: number[];
+  liningDb: number[];
+}
+
+function addTermination(builder: Builder, termination: Termination, lastSegment: Segment): number {
+  const radiusM = equivalentRadiusM(lastSegment.section);
+  const air = builder.network.air;
+  builder.network.terminations.push({
+    termination,
+    radiusM,
+    characteristicImpedance: (air.densityKgM3 * air.speedOfSoundMps) / sectionArea(lastSegment.section),
+    lowFrequencyEndCorrectionM: lowFrequencyEndCorrectionM(termination, radiusM),
+  });
+  return builder.network.terminations.length - 1;
+}
+
+function addSegment(builder: Builder, segment: Segment, wallLosses: boolean): number {
+  const air = builder.network.air;
+  const areaM2 = sectionArea(segment.section);
+  const perimeterM = sectionPerimeter(segment.section);
+  builder.lengths.push(segment.lengthM);
+  builder.areas.push(areaM2);
+  builder.impedances.push((air.densityKgM3 * air.speedOfSoundMps) / areaM2);
+  builder.kirchhoff.push(wallLosses ? kirchhoffAttenuationPerSqrtHz(perimeterM, areaM2, air) : 0);
+  const liningNp = segment.lining ? sabineLinedDuctNpPerM(segment.lining.absorption, perimeterM, areaM2) : 0;
+  builder.liningNp.push(liningNp);
+  builder.liningDb.push(liningNp * (20 / Math.LN10));
+  builder.network.totalLengthM += segment.lengthM;
+  return builder.lengths.length - 1;
+}
+
+interface CompiledChain {
+  depth: number;
+  segments: number[];
+  endTermination: number;
+  branches: CompiledBranch[][];
+}
+
+/** Emits the program of one chain (main path or branch), outermost end first. */
+function compileChain(builder: Builder, segments: Segment[], end: Termination, wallLosses: boolean): CompiledChain {
+  const indices = segments.map((segment) => addSegment(builder, segment, wallLosses));
+  const endTermination = addTermination(builder, end, segments[segments.length - 1]);
+  const branchLists: CompiledBranch[][] = segments.map(() => []);
+  builder.ops.push(OP_TERMINATION, endTermination);
+  let depth = 1;
+  for (let position = segments.length - 1; position >= 0; position--) {
+    for (const branch of segments[position].branches ?? []) {
+      const programStart = builder.ops.length;
+      const chain = compileChain(builder, branch.segments, branch.end, wallLosses);
+      chain.segments.forEach((segmentIndex, nestedPosition) =>
+        builder.network.branchesAtSegment.set(segmentIndex, chain.branches[nestedPosition]),
+      );
+      branchLists[position].push({
+        programStart,
+        programEnd: builder.ops.length,
+        segments: chain.segments,
+        endTermination: chain.endTermination,
+      });
+      builder.ops.push(OP_SHUNT, 0);
+      depth = Math.max(depth, 1 + chain.depth);
+    }
+    builder.ops.push(OP_SEGMENT, indices[position]);
+  }
+  return { depth, segments: indices, endTermination, branches: branchLists };
+}
+
+/** Compiles a validated run. */
+export function compileNetwork(input: RunInput): CompiledNetwork {
+  const air = airProperties(input.temperatureC ?? DEFAULT_TEMPERATURE_C);
+  const network: CompiledNetwork = {
+    air,
+    speedOfSoundMps: air.speedOfSoundMps,
+    segmentLengthM: new Float64Array(0),
+    segmentAreaM2: new Float64Array(0),
+    segmentImpedance: new Float64Array(0),
+    segmentKirchhoffPerSqrtHz: new Float64Array(0),
+    segmentLiningNpPerM: new Float64Array(0),
+    segmentLiningDbPerM: new Float64Array(0),
+    terminations: [],
+    program: new Int32Array(0),
+    stackDepth: 0,
+    startTermination: 0,
+    endTermination: 0,
+    mainSegments: [],
+    mainBranches: [],
+    branchesAtSegment: new Map(),
+    mainLengthM: 0,
+    totalLengthM: 0,
+  };
+  const builder: Builder = { network, ops: [], lengths: [], areas: [], impedances: [], kirchhoff: [], liningNp: [], liningDb: [] };
+  network.startTermination = addTermination(builder, input.start, input.segments[0]);
+  const wallLosses = input.wallLosses ?? true;
+  const mainChain = compileChain(builder, input.segments, input.end, wallLosses);
+  network.stackDepth = mainChain.depth;
+  network.mainSegments = mainChain.segments;
+  network.mainBranches = mainChain.branches;
+  network.endTermination = mainChain.endTermination;
+  network.program = Int32Array.from(builder.ops);
+  network.segmentLengthM = Float64Array.from(builder.lengths);
+  network.segmentAreaM2 = Float64Array.from(builder.areas);
+  network.segmentImpedance = Float64Array.from(builder.impedances);
+  network.segmentKirchhoffPerSqrtHz = Float64Array.from(builder.kirchhoff);
+  network.segmentLiningNpPerM = Float64Array.from(builder.liningNp);
+  network.segmentLiningDbPerM = Float64Array.from(builder.liningDb);
+  network.mainLengthM = input.segments.reduce((sum, segment) => sum + segment.lengthM, 0);
+  return network;
+}

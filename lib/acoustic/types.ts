@@ -1,0 +1,109 @@
+// Public types of the acoustic engine (engine contract). SI units; unit names in field names.
+
+export type Section =
+  | { shape: 'round'; diameterM: number }
+  | { shape: 'rect'; widthM: number; heightM: number };
+
+export type Termination =
+  | { kind: 'closed' }
+  | { kind: 'open'; flange: 'flanged' | 'unflanged' }
+  | { kind: 'lined'; absorption: number }
+  | { kind: 'anechoic' };
+
+export interface Lining {
+  thicknessM: number;
+  absorption: number;
+}
+
+export interface Segment {
+  lengthM: number;
+  section: Section;
+  /** Lined inside; the section given is the free airway inside the lining. */
+  lining?: Lining;
+  /** Tees at this segment's far end. */
+  branches?: Branch[];
+}
+
+export interface Branch {
+  segments: Segment[];
+  end: Termination;
+}
+
+export interface RunInput {
+  temperatureC?: number;
+  segments: Segment[];
+  start: Termination;
+  end: Termination;
+  minHz?: number;
+  maxHz?: number;
+  /** Kirchhoff visco-thermal wall losses in the segments (default true). */
+  wallLosses?: boolean;
+  /** Echo train: stop after this many arrivals (default 40). */
+  maxEchoes?: number;
+  /** Echo train: drop wavefronts weaker than this amplitude (default 1e-3, i.e. -60 dB). */
+  echoThreshold?: number;
+}
+
+export interface Resonance {
+  order: number;
+  frequencyHz: number;
+  q: number | null;
+  bandwidthHz: number | null;
+  antinodesM: number[];
+  nodesM: number[];
+  /** Imaginary part of the complex natural frequency (decay rate / 2π), Hz. */
+  dampingHz: number;
+}
+
+export interface ReflectionBand {
+  hz: number;
+  magnitude: number;
+  phaseRad: number;
+}
+
+export interface Reflection {
+  atM: number;
+  kind: string;
+  bands: ReflectionBand[];
+  /** For a tee: the same reflection with the side branch's own computed input impedance instead of an anechoic branch. */
+  bandsWithBranch?: ReflectionBand[];
+}
+
+export interface Echo {
+  delayS: number;
+  amplitude: number;
+  path: string;
+}
+
+export interface RunAnalysis {
+  speedOfSoundMps: number;
+  lengthM: number;
+  cutoffHz: number;
+  endCorrectionM: { start: number; end: number };
+  reflections: Reflection[];
+  resonances: Resonance[];
+  echoes: Echo[];
+  warnings: string[];
+  /** Frequency range analysed, after defaults. */
+  minHz: number;
+  maxHz: number;
+}
+
+export interface RoomBox {
+  lengthM: number;
+  widthM: number;
+  heightM: number;
+  temperatureC?: number;
+  /** Overrides the speed of sound derived from temperatureC. */
+  speedOfSoundMps?: number;
+}
+
+export type RoomModeType = 'axial' | 'tangential' | 'oblique';
+
+export interface RoomMode {
+  frequencyHz: number;
+  indices: [number, number, number];
+  type: RoomModeType;
+}
+
+export type Mounting = 'flush' | 'free';
