@@ -1,0 +1,25 @@
+import { Lucia, TimeSpan } from 'lucia';
+import type { UnitSystem } from '@/models/user';
+import { sequelizeSessionAdapter } from './adapter';
+
+export const SESSION_COOKIE = 'antinode_session';
+
+export const lucia = new Lucia(sequelizeSessionAdapter, {
+  sessionExpiresIn: new TimeSpan(30, 'd'),
+  sessionCookie: {
+    name: SESSION_COOKIE,
+    expires: false,
+    attributes: { secure: process.env.NODE_ENV === 'production', sameSite: 'lax' },
+  },
+  getUserAttributes: (attributes) => ({ email: attributes.email, name: attributes.name, unitSystem: attributes.unitSystem }),
+  getSessionAttributes: (attributes) => ({ activeTeamId: attributes.activeTeamId }),
+});
+
+declare module 'lucia' {
+  interface Register {
+    Lucia: typeof lucia;
+    UserId: string;
+    DatabaseUserAttributes: { email: string; name: string; unitSystem: UnitSystem };
+    DatabaseSessionAttributes: { activeTeamId: string | null };
+  }
+}

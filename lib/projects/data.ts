@@ -1,0 +1,27 @@
+// Projects of a team. Every query is scoped by team id: one team never sees another's.
+import { Project } from '@/models';
+import type { ProjectInput } from './schemas';
+
+export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; updatedAt: string }
+
+function toSummary(row: Project): ProjectSummary {
+  return { id: row.id, name: row.name, site: row.site, archived: row.archived, updatedAt: row.updatedAt.toISOString() };
+}
+
+export async function listProjects(teamId: string, options: { includeArchived?: boolean } = {}): Promise<ProjectSummary[]> {
+  const rows = await Project.findAll({
+    where: options.includeArchived ? { teamId } : { teamId, archived: false },
+    order: [['updatedAt', 'DESC']],
+  });
+  return rows.map(toSummary);
+}
+
+export async function getProject(teamId: string, projectId: string): Promise<ProjectSummary | null> {
+  const row = await Project.findOne({ where: { teamId, id: projectId } });
+  return row ? toSummary(row) : null;
+}
+
+export async function createProject(teamId: string, userId: string, input: Required<ProjectInput>): Promise<ProjectSummary> {
+  const row = await Project.create({ teamId, createdById: userId, name: input.name, site: input.site });
+  return toSummary(row);
+}

@@ -1,0 +1,27 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
+import { sequelize } from '@/lib/db';
+
+export type UnitSystem = 'si' | 'imperial';
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<string>;
+  declare email: string;
+  declare name: string;
+  declare passwordHash: string;
+  declare unitSystem: CreationOptional<UnitSystem>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+User.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    email: { type: DataTypes.STRING(320), allowNull: false, unique: true },
+    name: { type: DataTypes.STRING(120), allowNull: false },
+    passwordHash: { type: DataTypes.STRING(255), allowNull: false },
+    unitSystem: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'si' },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'users', modelName: 'User' },
+);

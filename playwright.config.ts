@@ -1,0 +1,35 @@
+import { defineConfig } from '@playwright/test';
+
+// Browser tests drive Debian's Chromium (nothing is downloaded) against a production build
+// served on loopback with the test database. `npm test` builds first and sets DATABASE_URL.
+const PORT = Number(process.env.ANTINODE_E2E_PORT ?? 3100);
+
+export default defineConfig({
+  testDir: 'tests/e2e',
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  reporter: [['list'], ['html', { open: 'never', outputFolder: 'playwright-report' }]],
+  use: {
+    baseURL: `http://localhost:${PORT}`,
+    viewport: { width: 1440, height: 900 },
+    trace: 'retain-on-failure',
+    screenshot: 'only-on-failure',
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+    },
+  },
+  projects: [{ name: 'chromium', use: { browserName: 'chromium' } }],
+  webServer: {
+    command: `node node_modules/next/dist/bin/next start -p ${PORT} -H 127.0.0.1`,
+    url: `http://127.0.0.1:${PORT}/api/v1/health`,
+    reuseExistingServer: false,
+    timeout: 60_000,
+    stdout: 'ignore',
+    stderr: 'pipe',
+    env: { NEXT_TELEMETRY_DISABLED: '1', ANTINODE_BASE_URL: `http://localhost:${PORT}` },
+  },
+});

@@ -1,0 +1,46 @@
+#!/usr/bin/env bash
+# npm start: install what is missing, start PostgreSQL on loopback, migrate, seed the demo,
+# build and serve Antinode on http://localhost:${PORT:-3000}.
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+
+APP_PORT="${PORT:-3000}"
+cd "$ROOT"
+ensure_node
+ensure_node_modules
+prepare_database antinode
+
+if [ "${NODE_ENV:-}" = production ]; then
+  step "NODE_ENV=production: the demo data is not seeded"
+else
+  step "Seeding the demo team (only into an empty database)"
+  node node_modules/tsx/dist/cli.mjs scripts/migrate.ts seed || fail "seeding failed" "read the error above"
+fi
+
+step "Building the app (next build)"
+node node_modules/next/dist/bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log" >&2; fail "the build failed (full log in .data/build.log)"; }
+
+stop_pid_file "$DATA_DIR/server.pid" "the previous web server"
+export ANTINODE_BASE_URL="${ANTINODE_BASE_URL:-http://localhost:$APP_PORT}"
+step "Serving Antinode"
+node node_modules/next/dist/bin/next start -p "$APP_PORT" -H "${HOST:-127.0.0.1}" &
+SERVER_PID=$!
+echo "$SERVER_PID" > "$DATA_DIR/server.pid"
+trap 'kill $SERVER_PID 2>/dev/null; rm -f "$DATA_DIR/server.pid"; printf "\nThe web server stopped. PostgreSQL keeps running: npm run stop stops it.\n"; exit 0' INT TERM
+
+wait_for_health "http://127.0.0.1:$APP_PORT/api/v1/health" "$SERVER_PID"
+
+cat <<MSG
+
+  Antinode is running at $ANTINODE_BASE_URL
+
+  Demo sign-ins (password: antinode-demo)
+    admin@antinode.test          team admin
+    acoustician@antinode.test    acoustician
+    engineer@antinode.test       mechanical engineer
+    architect@antinode.test      architect
+    viewer@antinode.test         viewer
+
+  Ctrl-C stops the web server; npm run stop stops everything npm start started.
+
+MSG
+wait "$SERVER_PID"

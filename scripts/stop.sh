@@ -1,0 +1,7 @@
+#!/usr/bin/env bash
+# npm run stop: stop what npm start (or npm test) started.
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+stop_pid_file "$DATA_DIR/server.pid" "the web server"
+stop_pid_file "$DATA_DIR/test-server.pid" "the test web server"
+stop_postgres
+step "Stopped"

@@ -1,0 +1,29 @@
+#!/usr/bin/env bash
+# npm test: its own set-up (packages, PostgreSQL, a fresh test database, Chromium), then
+# unit tests, integration tests against the real database, and browser tests against a
+# production build served on loopback.
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+cd "$ROOT"
+ensure_node
+ensure_node_modules
+ensure_chromium
+ensure_postgres_installed
+ensure_cluster
+start_postgres
+reset_database antinode_test
+prepare_database antinode_test
+export ANTINODE_DIST_DIR=.next-test
+
+step "Unit tests"
+node node_modules/vitest/vitest.mjs run --project unit || fail "unit tests failed"
+
+step "Integration tests (database antinode_test)"
+node node_modules/vitest/vitest.mjs run --project integration || fail "integration tests failed"
+
+step "Building the app for the browser tests"
+node node_modules/next/dist/bin/next build >"$DATA_DIR/test-build.log" 2>&1 || { tail -n 40 "$DATA_DIR/test-build.log" >&2; fail "the build failed (log in .data/test-build.log)"; }
+
+step "Browser tests (Chromium)"
+node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/"
+
+step "All tests passed"

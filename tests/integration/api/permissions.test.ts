@@ -1,0 +1,99 @@
+// Walks every route handler under app/api with no session and with each role, and checks
+// each answer against the one permission map in lib/permissions.ts.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { sequelize } from '@/lib/db';
+import { can, ROLES, type Action } from '@/lib/permissions';
+import { createProject } from '@/lib/projects/data';
+import { createTestTeam, type TestTeam } from '../helpers/people';
+import { call, listRouteFiles, loadHandlers, type Method } from '../helpers/routes';
+
+// What each route handler must require. A new handler fails the walk until it is listed here.
+const EXPECTED_ACCESS: Record<string, string> = {
+  'GET /api/v1/health': 'public',
+  'GET /api/v1/me': 'signed-in',
+  'GET /api/v1/projects': 'project.read',
+  'POST /api/v1/projects': 'project.create',
+  'POST /api/v1/sessions': 'public',
+  'PUT /api/v1/sessions/current': 'signed-in',
+  'DELETE /api/v1/sessions/current': 'signed-in',
+};
+
+const WRITE_METHODS = new Set<Method>(['POST', 'PUT', 'PATCH', 'DELETE']);
+let testTeam: TestTeam;
+let fixtureParams: Record<string, string>;
+
+beforeAll(async () => {
+  testTeam = await createTestTeam('walk');
+  const project = await createProject(testTeam.team.id, testTeam.members.acoustician.id, { name: 'Walk project', site: '' });
+  // Every dynamic segment a route may use needs a value from this team.
+  fixtureParams = { projectId: project.id };
+});
+afterAll(async () => { await sequelize.close(); });
+
+function expectErrorShape(body: unknown, code: string) {
+  expect(body).toMatchObject({ error: { code, message: expect.any(String) } });
+}
+
+describe('every route handler', () => {
+  const routes = listRouteFiles();
+
+  it('finds the route handlers', () => {
+    expect(routes.map((route) => route.urlPath)).toEqual(expect.arrayContaining(['/api/v1/health', '/api/v1/me', '/api/v1/projects', '/api/v1/sessions']));
+  });
+
+  for (const route of routes) {
+    it(`${route.urlPath}: every method declares its access and honours the permission map`, async () => {
+      const handlers = await loadHandlers(route);
+      expect(Object.keys(handlers).length, `${route.file} exports no handler`).toBeGreaterThan(0);
+      const params: Record<string, string> = {};
+      for (const name of route.params) {
+        expect(fixtureParams[name], `add a fixture value for [${name}] in ${__filename}`).toBeDefined();
+        params[name] = fixtureParams[name];
+      }
+      const urlPath = route.urlPath.replace(/\[+\.*(\w+)\]+/g, (_, name: string) => params[name]);
+      for (const [method, handler] of Object.entries(handlers) as [Method, NonNullable<(typeof handlers)[Method]>][]) {
+        expect(handler.access, `${method} ${route.urlPath} must be listed in EXPECTED_ACCESS`).toBe(EXPECTED_ACCESS[`${method} ${route.urlPath}`]);
+        const body = WRITE_METHODS.has(method) ? {} : undefined;
+        if (handler.access === 'public') continue;
+
+        const anonymous = await call(handler, method, urlPath, { body, params });
+        expect(anonymous.status, `${method} ${urlPath} without a session`).toBe(401);
+        expectErrorShape(anonymous.body, 'not_signed_in');
+
+        for (const role of ROLES) {
+          const answer = await call(handler, method, urlPath, { body, params, cookie: await testTeam.cookieFor(role) });
+          const allowed = handler.access === 'signed-in' || can(role, handler.access as Action);
+          if (allowed) {
+            expect([401, 403], `${method} ${urlPath} as ${role} should be allowed (got ${answer.status})`).not.toContain(answer.status);
+          } else {
+            expect(answer.status, `${method} ${urlPath} as ${role} should be refused`).toBe(403);
+            expectErrorShape(answer.body, 'forbidden');
+          }
+        }
+      }
+    });
+  }
+});
+
+describe('cross-site writes', () => {
+  it('refuses a write whose Origin is another site', async () => {
+    const { POST } = await import('@/app/api/v1/projects/route');
+    const answer = await call(POST, 'POST', '/api/v1/projects', {
+      cookie: await testTeam.cookieFor('acoustician'),
+      body: { name: 'From elsewhere' },
+      headers: { origin: 'https://elsewhere.example' },
+    });
+    expect(answer.status).toBe(403);
+    expectErrorShape(answer.body, 'forbidden');
+  });
+
+  it('accepts the same write from its own origin', async () => {
+    const { POST } = await import('@/app/api/v1/projects/route');
+    const answer = await call(POST, 'POST', '/api/v1/projects', {
+      cookie: await testTeam.cookieFor('acoustician'),
+      body: { name: 'Same origin' },
+      headers: { origin: 'http://localhost' },
+    });
+    expect(answer.status).toBe(201);
+  });
+});

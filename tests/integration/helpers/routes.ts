@@ -1,0 +1,54 @@
+// Finds every route handler under app/api and calls it directly, as Next would.
+import { readdirSync, statSync } from 'node:fs';
+import path from 'node:path';
+import type { RouteHandler } from '@/lib/http/route';
+
+export const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
+export type Method = (typeof METHODS)[number];
+
+export interface RouteFile { urlPath: string; file: string; params: string[] }
+
+export function listRouteFiles(root = path.resolve('app/api')): RouteFile[] {
+  const found: RouteFile[] = [];
+  const walk = (dir: string) => {
+    for (const name of readdirSync(dir)) {
+      const full = path.join(dir, name);
+      if (statSync(full).isDirectory()) walk(full);
+      else if (name === 'route.ts') {
+        const relative = path.relative(path.resolve('app'), path.dirname(full)).split(path.sep);
+        found.push({
+          file: full,
+          urlPath: '/' + relative.filter((part) => !part.startsWith('(')).join('/'),
+          params: relative.filter((part) => part.startsWith('[')).map((part) => part.replace(/^\[+\.*|\]+$/g, '')),
+        });
+      }
+    }
+  };
+  walk(root);
+  return found.sort((a, b) => a.urlPath.localeCompare(b.urlPath));
+}
+
+export async function loadHandlers(route: RouteFile): Promise<Partial<Record<Method, RouteHandler>>> {
+  const module = (await import(route.file)) as Record<string, unknown>;
+  const handlers: Partial<Record<Method, RouteHandler>> = {};
+  for (const method of METHODS) if (typeof module[method] === 'function') handlers[method] = module[method] as RouteHandler;
+  return handlers;
+}
+
+export async function call(
+  handler: RouteHandler,
+  method: Method,
+  urlPath: string,
+  options: { cookie?: string; body?: unknown; params?: Record<string, string>; headers?: Record<string, string> } = {},
+): Promise<{ status: number; body: unknown; headers: Headers }> {
+  const headers: Record<string, string> = { host: 'localhost', ...options.headers };
+  if (options.cookie) headers.cookie = options.cookie;
+  let body: string | undefined;
+  if (options.body !== undefined) { body = JSON.stringify(options.body); headers['content-type'] = 'application/json'; }
+  const request = new Request(`http://localhost${urlPath}`, { method, headers, body });
+  const response = await handler(request, { params: Promise.resolve(options.params ?? {}) });
+  const text = await response.text();
+  let parsed: unknown = text;
+  try { parsed = text ? JSON.parse(text) : null; } catch { /* not JSON */ }
+  return { status: response.status, body: parsed, headers: response.headers };
+}
