@@ -29,8 +29,12 @@ const MAX_NEWTON_ITERATIONS = 40;
 const MAX_NEWTON_STEP_IN_SCAN_STEPS = 1.5;
 const CONVERGED_HZ = 1e-8;
 const DEFLATION_WINDOW_STEPS = 12;
-/** Zeros with Q below 1/2 (fi > fr) are overdamped, not resonances. */
-const MIN_QUALITY_FACTOR = 0.5;
+/**
+ * Zeros with Q below 1 (fi > fr / 2) are overdamped, not resonances; the search also stays inside that
+ * region because far from the real axis the state's terms grow as exp(|Im kL|) and D cancels into rounding noise.
+ */
+const MIN_QUALITY_FACTOR = 1;
+const MAX_DAMPING_RATIO = 1 / (2 * MIN_QUALITY_FACTOR);
 
 function refineZero(
   evaluator: NetworkEvaluator,
@@ -49,7 +53,10 @@ function refineZero(
     const valueRe = evaluator.valueRe;
     const valueIm = evaluator.valueIm;
     const valueNorm = valueRe * valueRe + valueIm * valueIm;
-    if (valueNorm === 0) return { frequencyHz: zRe, dampingHz: zIm };
+    if (valueNorm === 0) {
+      const exact = evaluator.derivativeRe !== 0 || evaluator.derivativeIm !== 0;
+      return exact ? { frequencyHz: zRe, dampingHz: zIm } : null;
+    }
     // Logarithmic derivative D'/D, deflated by the zeros already found nearby.
     let ratioRe = (evaluator.derivativeRe * valueRe + evaluator.derivativeIm * valueIm) / valueNorm;
     let ratioIm = (evaluator.derivativeIm * valueRe - evaluator.derivativeRe * valueIm) / valueNorm;
@@ -73,7 +80,7 @@ function refineZero(
     }
     zRe += stepRe;
     zIm += stepIm;
-    if (zRe < lowHz || zRe > highHz || zIm > zRe || zIm < -scanStepHz) return null;
+    if (zRe < lowHz || zRe > highHz || zIm > MAX_DAMPING_RATIO * zRe || zIm < -scanStepHz) return null;
     if (stepSize < CONVERGED_HZ * Math.max(1, zRe / 1000)) return { frequencyHz: zRe, dampingHz: zIm };
   }
   return null;
@@ -100,7 +107,7 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
     const predictedRe = frequencyHz - quotientRe;
     const predictedIm = -quotientIm;
     if (Math.abs(predictedRe - frequencyHz) > CLAIM_WINDOW_STEPS * scanStepHz) continue;
-    if (predictedIm < -scanStepHz || predictedIm > predictedRe) continue;
+    if (predictedIm < -scanStepHz || predictedIm > MAX_DAMPING_RATIO * predictedRe) continue;
     seedsRe.push(predictedRe);
     seedsIm.push(Math.max(0, predictedIm));
   }
@@ -116,6 +123,6 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
   }
   return found
     .filter((zero) => zero.frequencyHz >= minHz && zero.frequencyHz <= maxHz)
-    .filter((zero) => zero.dampingHz <= zero.frequencyHz / (2 * MIN_QUALITY_FACTOR))
+    .filter((zero) => zero.dampingHz <= MAX_DAMPING_RATIO * zero.frequencyHz)
     .sort((first, second) => first.frequencyHz - second.frequencyHz);
 }
