@@ -2,6 +2,8 @@
 export { speedOfSound, airDensity, characteristicImpedance, dynamicViscosity, airProperties } from './air';
 export type { AirProperties } from './air';
 export { analyzeRun } from './analyze-run';
+export { startAdmittanceSweep, createAdmittanceSweeper } from './network/sweep';
+export type { AdmittanceSweeper } from './network/sweep';
 export { roomModes } from './room-modes';
 export { endReflectionLoss } from './end-reflection-loss';
 export { ncRating } from './nc-rating';

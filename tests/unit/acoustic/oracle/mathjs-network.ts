@@ -76,10 +76,11 @@ function inverseMatrix(segment: Segment, frequencyHz: Complex, air: OracleAir, w
   const zc = (air.densityKgM3 * air.speedMps) / area(segment.section);
   const cs = cos(kl);
   const sn = sin(kl);
-  return matrix([
-    [cs, multiply(sn, c(0, zc))],
-    [multiply(sn, c(0, 1 / zc)), cs],
-  ]);
+  const entries: Complex[][] = [
+    [cs, multiply(sn, c(0, zc)) as Complex],
+    [multiply(sn, c(0, 1 / zc)) as Complex, cs],
+  ];
+  return matrix(entries);
 }
 
 /** Admittance U/p looking into a chain from its near end (U into the chain). */

@@ -1,0 +1,46 @@
+// fast-check generators of valid runs, shared by the oracle and property tests.
+import fc from 'fast-check';
+import type { Branch, RunInput, Section, Segment, Termination } from '@/lib/acoustic';
+
+export const sectionArbitrary: fc.Arbitrary<Section> = fc.oneof(
+  fc.record({ shape: fc.constant('round' as const), diameterM: fc.double({ min: 0.05, max: 0.6, noNaN: true }) }),
+  fc.record({
+    shape: fc.constant('rect' as const),
+    widthM: fc.double({ min: 0.05, max: 0.6, noNaN: true }),
+    heightM: fc.double({ min: 0.05, max: 0.6, noNaN: true }),
+  }),
+);
+
+export const terminationArbitrary: fc.Arbitrary<Termination> = fc.oneof(
+  fc.constant({ kind: 'closed' as const }),
+  fc.constant({ kind: 'anechoic' as const }),
+  fc.record({ kind: fc.constant('open' as const), flange: fc.constantFrom('flanged' as const, 'unflanged' as const) }),
+  fc.record({ kind: fc.constant('lined' as const), absorption: fc.double({ min: 0, max: 1, noNaN: true }) }),
+);
+
+const plainSegment: fc.Arbitrary<Segment> = fc.record(
+  {
+    lengthM: fc.double({ min: 0.1, max: 3, noNaN: true }),
+    section: sectionArbitrary,
+    lining: fc.record({ thicknessM: fc.constant(0.025), absorption: fc.double({ min: 0, max: 1, noNaN: true }) }),
+  },
+  { requiredKeys: ['lengthM', 'section'] },
+);
+
+const branchArbitrary: fc.Arbitrary<Branch> = fc.record({
+  segments: fc.array(plainSegment, { minLength: 1, maxLength: 2 }),
+  end: terminationArbitrary,
+});
+
+const segmentArbitrary: fc.Arbitrary<Segment> = fc
+  .tuple(plainSegment, fc.option(fc.array(branchArbitrary, { minLength: 1, maxLength: 2 }), { freq: 3 }))
+  .map(([segment, branches]) => (branches ? { ...segment, branches } : segment));
+
+export const runArbitrary: fc.Arbitrary<RunInput> = fc.record({
+  segments: fc.array(segmentArbitrary, { minLength: 1, maxLength: 5 }),
+  start: terminationArbitrary,
+  end: terminationArbitrary,
+  temperatureC: fc.double({ min: -20, max: 40, noNaN: true }),
+  minHz: fc.constant(20),
+  maxHz: fc.double({ min: 60, max: 300, noNaN: true }),
+});
