@@ -177,3 +177,22 @@ reset_database() {
   step "Recreating database $name"
   psql -h 127.0.0.1 -p "$DB_PORT" -U "$DB_USER" -d postgres -qc "drop database if exists \"$name\" with (force)" >/dev/null
 }
+
+# Local fakes of outside services (mail, file storage), on loopback; see scripts/fakes.ts.
+start_fakes() {
+  local profile="$1" pid_file="$DATA_DIR/fakes-$1.pid" log="$DATA_DIR/fakes-$1.log"
+  eval "$(node node_modules/tsx/dist/cli.mjs scripts/fakes.ts env "$profile")"
+  if [ -f "$pid_file" ] && kill -0 "$(cat "$pid_file")" 2>/dev/null; then
+    step "Local fakes ($profile) are already running"
+    return 0
+  fi
+  step "Starting the local fakes ($profile): mail inbox $MAIL_INBOX_URL, file storage $S3_ENDPOINT"
+  nohup node node_modules/tsx/dist/cli.mjs scripts/fakes.ts run "$profile" >"$log" 2>&1 &
+  echo $! > "$pid_file"
+  for _ in $(seq 1 100); do
+    grep -q 'fakes ready' "$log" 2>/dev/null && return 0
+    kill -0 "$(cat "$pid_file")" 2>/dev/null || { cat "$log" >&2; fail "the local fakes did not start (log in .data/fakes-$profile.log)" "is another program using their ports?"; }
+    sleep 0.2
+  done
+  fail "the local fakes did not report ready within 20 s (log in .data/fakes-$profile.log)"
+}

@@ -8,6 +8,7 @@ cd "$ROOT"
 ensure_node
 ensure_node_modules
 prepare_database antinode
+start_fakes app
 
 if [ "${NODE_ENV:-}" = production ]; then
   step "NODE_ENV=production: the demo data is not seeded"
@@ -39,6 +40,8 @@ cat <<MSG
     engineer@antinode.test       mechanical engineer
     architect@antinode.test      architect
     viewer@antinode.test         viewer
+
+  Mail sent by the app lands in the local inbox: $MAIL_INBOX_URL
 
   Ctrl-C stops the web server; npm run stop stops everything npm start started.
 

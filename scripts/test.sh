@@ -12,6 +12,7 @@ ensure_cluster
 start_postgres
 reset_database antinode_test
 prepare_database antinode_test
+start_fakes test
 export ANTINODE_DIST_DIR=.next-test
 
 step "Unit tests"
@@ -26,4 +27,5 @@ node node_modules/next/dist/bin/next build >"$DATA_DIR/test-build.log" 2>&1 || {
 step "Browser tests (Chromium)"
 node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/"
 
+stop_pid_file "$DATA_DIR/fakes-test.pid" "the local fakes (test)"
 step "All tests passed"

@@ -9,6 +9,7 @@ import { call, listRouteFiles, loadHandlers, type Method } from '../helpers/rout
 
 // What each route handler must require. A new handler fails the walk until it is listed here.
 const EXPECTED_ACCESS: Record<string, string> = {
+  'POST /api/v1/analyze': 'signed-in',
   'GET /api/v1/health': 'public',
   'GET /api/v1/me': 'signed-in',
   'GET /api/v1/projects': 'project.read',

@@ -1,0 +1,35 @@
+// Ports and folders of the local fakes that stand in for outside services, one profile for
+// `npm start` (app) and one for `npm test` (test) so both can run side by side.
+import path from 'node:path';
+
+export interface FakeProfile {
+  smtpPort: number;
+  mailWebPort: number;
+  s3Port: number;
+  s3Directory: string;
+}
+
+const ROOT = path.resolve(__dirname, '..', '..');
+
+export const PROFILES: Record<'app' | 'test', FakeProfile> = {
+  app: { smtpPort: 1025, mailWebPort: 1080, s3Port: 4569, s3Directory: path.join(ROOT, '.data', 's3') },
+  test: { smtpPort: 1026, mailWebPort: 1081, s3Port: 4570, s3Directory: path.join(ROOT, '.data', 's3-test') },
+};
+
+export const S3_BUCKET = 'antinode-uploads';
+// s3rver accepts this fixed key pair; it guards nothing, as the fake listens on loopback only.
+export const S3_FAKE_KEY = 'S3RVER';
+
+// The environment the app reads (lib/config.ts) for a profile.
+export function environmentFor(profile: FakeProfile): Record<string, string> {
+  return {
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(profile.smtpPort),
+    MAIL_INBOX_URL: `http://127.0.0.1:${profile.mailWebPort}`,
+    S3_ENDPOINT: `http://127.0.0.1:${profile.s3Port}`,
+    S3_REGION: 'us-east-1',
+    S3_BUCKET,
+    S3_ACCESS_KEY_ID: S3_FAKE_KEY,
+    S3_SECRET_ACCESS_KEY: S3_FAKE_KEY,
+  };
+}
