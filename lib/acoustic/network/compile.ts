@@ -2,7 +2,7 @@
 // that the evaluator runs at each frequency without allocating.
 import { airProperties, type AirProperties } from '../air';
 import { DEFAULT_TEMPERATURE_C } from '../constants';
-import { lowFrequencyEndCorrectionM } from '../terminations';
+import { lowFrequencyEndCorrectionM, terminationReflection } from '../terminations';
 import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
 import { sabineLinedDuctNpPerM } from '../lining-attenuation';
 import { kirchhoffAttenuationPerSqrtHz } from '../wall-losses';
@@ -21,6 +21,8 @@ export interface CompiledTermination {
   /** Acoustic characteristic impedance rho c / S of the segment it closes, Pa·s/m³. */
   characteristicImpedance: number;
   lowFrequencyEndCorrectionM: number;
+  /** Reflection coefficient of a frequency-independent (closed, lined, anechoic) termination; NaN for an open end. */
+  constantReflection: number;
 }
 
 /** A side branch as it hangs off a junction: where its program lies, and its description for reports. */
@@ -41,6 +43,11 @@ export interface CompiledNetwork {
   segmentLiningNpPerM: Float64Array;
   segmentLiningDbPerM: Float64Array;
   terminations: CompiledTermination[];
+  /** Segment constants indexed by op position (op / 2) for the inner loop; unused entries are 0. */
+  opLengthM: Float64Array;
+  opImpedance: Float64Array;
+  opKirchhoffPerSqrtHz: Float64Array;
+  opLiningNpPerM: Float64Array;
   /** Pairs (opcode, operand), post-order: evaluates the main path from its end back to the start. */
   program: Int32Array;
   stackDepth: number;
@@ -75,6 +82,7 @@ function addTermination(builder: Builder, termination: Termination, lastSegment:
     radiusM,
     characteristicImpedance: (air.densityKgM3 * air.speedOfSoundMps) / sectionArea(lastSegment.section),
     lowFrequencyEndCorrectionM: lowFrequencyEndCorrectionM(termination, radiusM),
+    constantReflection: termination.kind === 'open' ? NaN : terminationReflection(termination, { re: 0, im: 0 }, radiusM, air.speedOfSoundMps).re,
   });
   return builder.network.terminations.length - 1;
 }
@@ -143,6 +151,10 @@ export function compileNetwork(input: RunInput): CompiledNetwork {
     segmentLiningDbPerM: new Float64Array(0),
     terminations: [],
     program: new Int32Array(0),
+    opLengthM: new Float64Array(0),
+    opImpedance: new Float64Array(0),
+    opKirchhoffPerSqrtHz: new Float64Array(0),
+    opLiningNpPerM: new Float64Array(0),
     stackDepth: 0,
     startTermination: 0,
     endTermination: 0,
@@ -167,6 +179,14 @@ export function compileNetwork(input: RunInput): CompiledNetwork {
   network.segmentKirchhoffPerSqrtHz = Float64Array.from(builder.kirchhoff);
   network.segmentLiningNpPerM = Float64Array.from(builder.liningNp);
   network.segmentLiningDbPerM = Float64Array.from(builder.liningDb);
+  const byOp = (values: Float64Array): Float64Array =>
+    Float64Array.from({ length: builder.ops.length / 2 }, (_, position) =>
+      builder.ops[2 * position] === OP_SEGMENT ? values[builder.ops[2 * position + 1]] : 0,
+    );
+  network.opLengthM = byOp(network.segmentLengthM);
+  network.opImpedance = byOp(network.segmentImpedance);
+  network.opKirchhoffPerSqrtHz = byOp(network.segmentKirchhoffPerSqrtHz);
+  network.opLiningNpPerM = byOp(network.segmentLiningNpPerM);
   network.mainLengthM = input.segments.reduce((sum, segment) => sum + segment.lengthM, 0);
   return network;
 }

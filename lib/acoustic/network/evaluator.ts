@@ -11,6 +11,7 @@
 // vanishes exactly at the natural frequencies of the whole network (complex f, time convention exp(+j omega t)).
 import { terminationReflection } from '../terminations';
 import { OP_SEGMENT, OP_SHUNT, OP_TERMINATION, type CompiledNetwork } from './compile';
+import { propagateSegments, propagateSegmentsWithDerivative, type WaveFactors } from './propagate-segments';
 
 const SLOT = 8;
 const RELATIVE_DERIVATIVE_STEP = 1e-6;
@@ -35,6 +36,14 @@ export class NetworkEvaluator {
   private terminationAt(index: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): void {
     const compiled = this.network.terminations[index];
     const out = this.reflection;
+    if (compiled.termination.kind !== 'open') {
+      // Frequency-independent reflection, precomputed at compile time.
+      out[0] = compiled.constantReflection;
+      out[1] = 0;
+      out[2] = 0;
+      out[3] = 0;
+      return;
+    }
     const speed = this.network.speedOfSoundMps;
     const value = terminationReflection(compiled.termination, { re: frequencyRe, im: frequencyIm }, compiled.radiusM, speed);
     out[0] = value.re;
@@ -55,110 +64,65 @@ export class NetworkEvaluator {
    * resulting state (p, U, dp/df, dU/df as re/im pairs).
    */
   run(opStart: number, opEnd: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): number {
-    const network = this.network;
-    const program = network.program;
-    const lengths = network.segmentLengthM;
-    const impedances = network.segmentImpedance;
-    const kirchhoff = network.segmentKirchhoffPerSqrtHz;
-    const lining = network.segmentLiningNpPerM;
-    const stack = this.stack;
-    const wavenumberPerHz = (2 * Math.PI) / network.speedOfSoundMps;
-    // Free-field wavenumber k0 = 2 pi f / c and the boundary-layer factor (1 - j) sqrt(f).
-    const freeRe = wavenumberPerHz * frequencyRe;
-    const freeIm = wavenumberPerHz * frequencyIm;
-    const magnitude = Math.hypot(frequencyRe, frequencyIm);
-    const sqrtRe = Math.sqrt((magnitude + frequencyRe) / 2);
-    const sqrtImAbs = Math.sqrt(Math.max(0, (magnitude - frequencyRe) / 2));
-    const sqrtIm = frequencyIm < 0 ? -sqrtImAbs : sqrtImAbs;
-    const layerRe = sqrtRe + sqrtIm;
-    const layerIm = sqrtIm - sqrtRe;
-    // d/df of (1 - j) sqrt(f) = (1 - j) / (2 sqrt(f))
-    const sqrtNorm = 2 * (sqrtRe * sqrtRe + sqrtIm * sqrtIm);
-    const halfInvRe = sqrtRe / sqrtNorm;
-    const halfInvIm = -sqrtIm / sqrtNorm;
-    const layerSlopeRe = halfInvRe + halfInvIm;
-    const layerSlopeIm = halfInvIm - halfInvRe;
+    const program = this.network.program;
+    this.prepareFrequency(frequencyRe, frequencyIm);
     let top = -SLOT;
-    for (let op = opStart; op < opEnd; op += 2) {
+    let op = opStart;
+    while (op < opEnd) {
       const code = program[op];
-      const operand = program[op + 1];
       if (code === OP_SEGMENT) {
-        const lengthM = lengths[operand];
-        const impedance = impedances[operand];
-        const loss = kirchhoff[operand];
-        const phase = (freeRe + loss * layerRe) * lengthM;
-        const growth = (freeIm + loss * layerIm - lining[operand]) * lengthM;
-        const cosPhase = Math.cos(phase);
-        const sinPhase = Math.sin(phase);
-        const expGrowth = Math.exp(growth);
-        const coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
-        const sinhGrowth = coshGrowth - 1 / expGrowth;
-        // cos(kL) and sin(kL) for complex kL
-        const cosRe = cosPhase * coshGrowth;
-        const cosIm = -sinPhase * sinhGrowth;
-        const sinRe = sinPhase * coshGrowth;
-        const sinIm = cosPhase * sinhGrowth;
-        // Inverse transfer matrix [[cos, j Zc sin], [j sin / Zc, cos]] (Munjal, Acoustics of Ducts and Mufflers, ch. 2)
-        const upperRe = -impedance * sinIm;
-        const upperIm = impedance * sinRe;
-        const lowerRe = -sinIm / impedance;
-        const lowerIm = sinRe / impedance;
-        const pRe = stack[top];
-        const pIm = stack[top + 1];
-        const uRe = stack[top + 2];
-        const uIm = stack[top + 3];
-        stack[top] = cosRe * pRe - cosIm * pIm + upperRe * uRe - upperIm * uIm;
-        stack[top + 1] = cosRe * pIm + cosIm * pRe + upperRe * uIm + upperIm * uRe;
-        stack[top + 2] = lowerRe * pRe - lowerIm * pIm + cosRe * uRe - cosIm * uIm;
-        stack[top + 3] = lowerRe * pIm + lowerIm * pRe + cosRe * uIm + cosIm * uRe;
-        if (withDerivative) {
-          // d(kL)/df, then d cos = -sin d(kL), d sin = cos d(kL)
-          const slopeRe = (wavenumberPerHz + loss * layerSlopeRe) * lengthM;
-          const slopeIm = loss * layerSlopeIm * lengthM;
-          const dCosRe = -(sinRe * slopeRe - sinIm * slopeIm);
-          const dCosIm = -(sinRe * slopeIm + sinIm * slopeRe);
-          const dSinRe = cosRe * slopeRe - cosIm * slopeIm;
-          const dSinIm = cosRe * slopeIm + cosIm * slopeRe;
-          const dUpperRe = -impedance * dSinIm;
-          const dUpperIm = impedance * dSinRe;
-          const dLowerRe = -dSinIm / impedance;
-          const dLowerIm = dSinRe / impedance;
-          const dpRe = stack[top + 4];
-          const dpIm = stack[top + 5];
-          const duRe = stack[top + 6];
-          const duIm = stack[top + 7];
-          stack[top + 4] =
-            cosRe * dpRe - cosIm * dpIm + upperRe * duRe - upperIm * duIm +
-            dCosRe * pRe - dCosIm * pIm + dUpperRe * uRe - dUpperIm * uIm;
-          stack[top + 5] =
-            cosRe * dpIm + cosIm * dpRe + upperRe * duIm + upperIm * duRe +
-            dCosRe * pIm + dCosIm * pRe + dUpperRe * uIm + dUpperIm * uRe;
-          stack[top + 6] =
-            lowerRe * dpRe - lowerIm * dpIm + cosRe * duRe - cosIm * duIm +
-            dLowerRe * pRe - dLowerIm * pIm + dCosRe * uRe - dCosIm * uIm;
-          stack[top + 7] =
-            lowerRe * dpIm + lowerIm * dpRe + cosRe * duIm + cosIm * duRe +
-            dLowerRe * pIm + dLowerIm * pRe + dCosRe * uIm + dCosIm * uRe;
-        }
-      } else if (code === OP_TERMINATION) {
+        op = withDerivative
+          ? propagateSegmentsWithDerivative(this.network, this.stack, this.wave, op, opEnd, top)
+          : propagateSegments(this.network, this.stack, this.wave, op, opEnd, top);
+        continue;
+      }
+      if (code === OP_TERMINATION) {
         top += SLOT;
-        this.terminationAt(operand, frequencyRe, frequencyIm, withDerivative);
-        const impedance = network.terminations[operand].characteristicImpedance;
-        const reflection = this.reflection;
-        stack[top] = impedance * (1 + reflection[0]);
-        stack[top + 1] = impedance * reflection[1];
-        stack[top + 2] = 1 - reflection[0];
-        stack[top + 3] = -reflection[1];
-        stack[top + 4] = impedance * reflection[2];
-        stack[top + 5] = impedance * reflection[3];
-        stack[top + 6] = -reflection[2];
-        stack[top + 7] = -reflection[3];
+        this.pushTermination(program[op + 1], top, frequencyRe, frequencyIm, withDerivative);
       } else if (code === OP_SHUNT) {
         this.joinBranch(top - SLOT, top, withDerivative);
         top -= SLOT;
       }
+      op += 2;
     }
     return top;
+  }
+
+  // Per-frequency quantities shared by all segments: k0 = 2 pi f / c, the boundary-layer factor
+  // (1 - j) sqrt(f) and its derivative (1 - j) / (2 sqrt(f)).
+  private readonly wave: WaveFactors = { freeRe: 0, freeIm: 0, layerRe: 0, layerIm: 0, layerSlopeRe: 0, layerSlopeIm: 0 };
+
+  private prepareFrequency(frequencyRe: number, frequencyIm: number): void {
+    const wavenumberPerHz = (2 * Math.PI) / this.network.speedOfSoundMps;
+    const wave = this.wave;
+    wave.freeRe = wavenumberPerHz * frequencyRe;
+    wave.freeIm = wavenumberPerHz * frequencyIm;
+    const magnitude = Math.hypot(frequencyRe, frequencyIm);
+    const sqrtRe = Math.sqrt((magnitude + frequencyRe) / 2);
+    const sqrtImAbs = Math.sqrt(Math.max(0, (magnitude - frequencyRe) / 2));
+    const sqrtIm = frequencyIm < 0 ? -sqrtImAbs : sqrtImAbs;
+    wave.layerRe = sqrtRe + sqrtIm;
+    wave.layerIm = sqrtIm - sqrtRe;
+    const sqrtNorm = 2 * (sqrtRe * sqrtRe + sqrtIm * sqrtIm) || 1;
+    const halfInvRe = sqrtRe / sqrtNorm;
+    const halfInvIm = -sqrtIm / sqrtNorm;
+    wave.layerSlopeRe = halfInvRe + halfInvIm;
+    wave.layerSlopeIm = halfInvIm - halfInvRe;
+  }
+
+  private pushTermination(index: number, top: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): void {
+    const stack = this.stack;
+    this.terminationAt(index, frequencyRe, frequencyIm, withDerivative);
+    const impedance = this.network.terminations[index].characteristicImpedance;
+    const reflection = this.reflection;
+    stack[top] = impedance * (1 + reflection[0]);
+    stack[top + 1] = impedance * reflection[1];
+    stack[top + 2] = 1 - reflection[0];
+    stack[top + 3] = -reflection[1];
+    stack[top + 4] = impedance * reflection[2];
+    stack[top + 5] = impedance * reflection[3];
+    stack[top + 6] = -reflection[2];
+    stack[top + 7] = -reflection[3];
   }
 
   /** (p, U) <- (p pb, U pb + Ub p), with the product rule for the derivatives; rescales if large. */

@@ -7,7 +7,8 @@
 // falls within 0.75 of a scan step of it. Each claimed prediction is then refined by Newton's method on
 // D with Maehly's deflation of the zeros already found (the step is 1 / (D'/D - sum 1/(f - z_i))),
 // so a second seed near a known zero is driven to its neighbour instead of back to it: close pairs are
-// neither doubled nor, as long as both are claimed, missed. D and D' come from one pass along the
+// neither doubled nor, as long as both are claimed, missed. A prediction that lands on a zero already
+// found (within 0.05 scan steps) is not refined again. D and D' come from one pass along the
 // chain that reuses each segment's sin/cos for the derivative. Newton converges quadratically, to
 // better than 1e-7 Hz.
 
@@ -25,7 +26,9 @@ export interface NaturalFrequencySearch {
 }
 
 const CLAIM_WINDOW_STEPS = 0.75;
-const MAX_NEWTON_ITERATIONS = 40;
+const MAX_NEWTON_ITERATIONS = 16;
+/** A prediction this close (in scan steps) to a zero already found is that zero again: not refined. */
+const SAME_ZERO_STEPS = 0.05;
 const MAX_NEWTON_STEP_IN_SCAN_STEPS = 1.5;
 const CONVERGED_HZ = 1e-8;
 const DEFLATION_WINDOW_STEPS = 12;
@@ -113,6 +116,10 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
   }
   const found: NaturalFrequency[] = [];
   for (let index = 0; index < seedsRe.length; index++) {
+    const known = found.some(
+      (zero) => Math.hypot(zero.frequencyHz - seedsRe[index], zero.dampingHz - seedsIm[index]) < SAME_ZERO_STEPS * scanStepHz,
+    );
+    if (known) continue;
     const zero = refineZero(evaluator, seedsRe[index], seedsIm[index], found, scanStepHz, lowHz, highHz);
     if (zero === null) continue;
     const tolerance = 1e-6 * Math.max(1, zero.frequencyHz);

@@ -59,9 +59,9 @@ describe('input validation (RangeError naming the field by its path)', () => {
     throwsNaming((input) => ((input as Record<string, unknown>).start = { kind: 'open-ish' }), "start.kind must be 'closed', 'open', 'lined' or 'anechoic'");
     throwsNaming((input) => {
       const branch = input.segments[1].branches?.[0];
-      if (branch) (branch as Record<string, unknown>).end = { kind: 'open', flange: 'sideways' };
+      if (branch) (branch as unknown as Record<string, unknown>).end = { kind: 'open', flange: 'sideways' };
     }, "segments[1].branches[0].end.flange must be 'flanged' or 'unflanged'");
-    throwsNaming((input) => ((input.segments[0] as Record<string, unknown>).section = { shape: 'oval', diameterM: 0.2 }), "segments[0].section.shape must be 'round' or 'rect'");
+    throwsNaming((input) => ((input.segments[0] as unknown as Record<string, unknown>).section = { shape: 'oval', diameterM: 0.2 }), "segments[0].section.shape must be 'round' or 'rect'");
   });
 
   it('property: any valid random run analyses without throwing and returns finite numbers', () => {

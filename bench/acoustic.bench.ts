@@ -1,0 +1,138 @@
+// Benchmark of the acoustic engine: full analysis of a long branched run, the transfer-matrix sweep,
+// a plain-loop baseline of the same chain, and the mathjs oracle on the same sweep.
+import { complex } from 'mathjs';
+import { analyzeRun, createAdmittanceSweeper, speedOfSound, type RunInput, type Segment } from '../lib/acoustic';
+import { chainAdmittance, oracleAir } from '../tests/unit/acoustic/oracle/mathjs-network';
+
+/** 200 segments, about 60 m, 10 tees each with a two-segment closed side branch. */
+export function benchRun(): RunInput {
+  const segments: Segment[] = [];
+  for (let index = 0; index < 200; index++) {
+    const segment: Segment = {
+      lengthM: 0.24 + 0.12 * ((index * 7) % 5) / 4,
+      section: index % 40 < 20 ? { shape: 'rect', widthM: 0.3, heightM: 0.2 } : { shape: 'round', diameterM: 0.25 },
+    };
+    if (index % 20 === 10) {
+      segment.branches = [
+        {
+          segments: [
+            { lengthM: 0.6 + index / 400, section: { shape: 'round', diameterM: 0.15 } },
+            { lengthM: 0.4, section: { shape: 'round', diameterM: 0.1 } },
+          ],
+          end: { kind: 'closed' },
+        },
+      ];
+    }
+    segments.push(segment);
+  }
+  return { segments, start: { kind: 'closed' }, end: { kind: 'open', flange: 'unflanged' }, minHz: 20, maxHz: 400 };
+}
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((first, second) => first - second);
+  return sorted[Math.floor(sorted.length / 2)];
+}
+
+function timeMs(action: () => void, repeats: number): number {
+  const times: number[] = [];
+  for (let index = 0; index < repeats; index++) {
+    const startMs = performance.now();
+    action();
+    times.push(performance.now() - startMs);
+  }
+  return median(times);
+}
+
+/** Flattened chain for the baseline: every segment of the run (branches appended), no tees. */
+export function flatChain(run: RunInput) {
+  const all: Segment[] = [];
+  const visit = (segments: Segment[]) => {
+    for (const segment of segments) {
+      all.push(segment);
+      for (const branch of segment.branches ?? []) visit(branch.segments);
+    }
+  };
+  visit(run.segments);
+  const rhoC = 413.26;
+  const lengths = Float64Array.from(all.map((segment) => segment.lengthM));
+  const impedances = Float64Array.from(
+    all.map((segment) => rhoC / (segment.section.shape === 'round' ? (Math.PI * segment.section.diameterM ** 2) / 4 : segment.section.widthM * segment.section.heightM)),
+  );
+  const losses = Float64Array.from(all.map(() => 3e-4));
+  return { lengths, impedances, losses };
+}
+
+/** The plain loop: hand-written complex arithmetic over Float64Array, no allocation, same chain physics. */
+export function plainSweep(chain: ReturnType<typeof flatChain>, frequencies: Float64Array, out: Float64Array, speedMps: number): void {
+  const { lengths, impedances, losses } = chain;
+  for (let index = 0; index < frequencies.length; index++) {
+    const hz = frequencies[index];
+    const free = (2 * Math.PI * hz) / speedMps;
+    const root = Math.sqrt(hz);
+    let pRe = impedances[lengths.length - 1] * 2, pIm = 0, uRe = 0, uIm = 0;
+    for (let segment = lengths.length - 1; segment >= 0; segment--) {
+      const lengthM = lengths[segment];
+      const impedance = impedances[segment];
+      const phase = (free + losses[segment] * root) * lengthM;
+      const growth = -losses[segment] * root * lengthM;
+      const cosPhase = Math.cos(phase), sinPhase = Math.sin(phase);
+      const expGrowth = Math.exp(growth);
+      const coshGrowth = 0.5 * (expGrowth + 1 / expGrowth), sinhGrowth = coshGrowth - 1 / expGrowth;
+      const cosRe = cosPhase * coshGrowth, cosIm = -sinPhase * sinhGrowth;
+      const sinRe = sinPhase * coshGrowth, sinIm = cosPhase * sinhGrowth;
+      const upperRe = -impedance * sinIm, upperIm = impedance * sinRe;
+      const lowerRe = -sinIm / impedance, lowerIm = sinRe / impedance;
+      const nextPRe = cosRe * pRe - cosIm * pIm + upperRe * uRe - upperIm * uIm;
+      const nextPIm = cosRe * pIm + cosIm * pRe + upperRe * uIm + upperIm * uRe;
+      const nextURe = lowerRe * pRe - lowerIm * pIm + cosRe * uRe - cosIm * uIm;
+      const nextUIm = lowerRe * pIm + lowerIm * pRe + cosRe * uIm + cosIm * uRe;
+      pRe = nextPRe; pIm = nextPIm; uRe = nextURe; uIm = nextUIm;
+    }
+    const norm = pRe * pRe + pIm * pIm;
+    out[2 * index] = (uRe * pRe + uIm * pIm) / norm;
+    out[2 * index + 1] = (uIm * pRe - uRe * pIm) / norm;
+  }
+}
+
+export function runAcousticBench(): void {
+  const run = benchRun();
+  const lengthM = run.segments.reduce((sum, segment) => sum + segment.lengthM, 0);
+  for (let warm = 0; warm < 5; warm++) analyzeRun(run);
+  const analysis = analyzeRun(run);
+  const analysisMs = timeMs(() => analyzeRun(run), 21);
+
+  const sweeper = createAdmittanceSweeper(run);
+  const frequencyCount = 2000;
+  const frequencies = Float64Array.from({ length: frequencyCount }, (_, index) => 20 + (380 * index) / (frequencyCount - 1));
+  const out = new Float64Array(2 * frequencyCount);
+  for (let warm = 0; warm < 5; warm++) sweeper.sweep(frequencies, out);
+  const sweepMs = timeMs(() => sweeper.sweep(frequencies, out), 15);
+  const work = sweeper.segmentCount * frequencyCount;
+  const sweepNs = (sweepMs * 1e6) / work;
+
+  const chain = flatChain(run);
+  const speedMps = speedOfSound(20);
+  for (let warm = 0; warm < 5; warm++) plainSweep(chain, frequencies, out, speedMps);
+  const plainMs = timeMs(() => plainSweep(chain, frequencies, out, speedMps), 15);
+  const plainNs = (plainMs * 1e6) / (chain.lengths.length * frequencyCount);
+
+  const air = oracleAir(20);
+  const oracleFrequencies = 10;
+  const oracleMs = timeMs(() => {
+    for (let index = 0; index < oracleFrequencies; index++) chainAdmittance(run.segments, run.end, complex(frequencies[index * 100], 0), air, true);
+  }, 3);
+  const oracleNs = (oracleMs * 1e6) / (sweeper.segmentCount * oracleFrequencies);
+
+  const rows: Array<[string, string]> = [
+    ['run', `${run.segments.length} segments, ${lengthM.toFixed(1)} m, 10 tees with two-segment branches, ${run.minHz}-${run.maxHz} Hz`],
+    ['resonances found', `${analysis.resonances.length}`],
+    ['analyzeRun, median of 21 warm runs', `${analysisMs.toFixed(2)} ms`],
+    ['sweep (engine)', `${sweepNs.toFixed(1)} ns per segment·frequency (${sweeper.segmentCount} segments x ${frequencyCount} frequencies)`],
+    ['sweep (plain Float64Array loop)', `${plainNs.toFixed(1)} ns per segment·frequency`],
+    ['engine / plain loop', `${(sweepNs / plainNs).toFixed(2)}x`],
+    ['sweep (mathjs oracle)', `${oracleNs.toFixed(0)} ns per segment·frequency`],
+    ['oracle / engine', `${(oracleNs / sweepNs).toFixed(0)}x`],
+  ];
+  console.log('acoustic engine');
+  for (const [label, value] of rows) console.log(`  ${label.padEnd(38)} ${value}`);
+}

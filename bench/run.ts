@@ -1,0 +1,13 @@
+// `npm run bench`: runs every registered benchmark in turn. Add a new one by appending to BENCHES.
+import { runAcousticBench } from './acoustic.bench';
+
+const BENCHES: Array<{ name: string; run: () => void | Promise<void> }> = [{ name: 'acoustic', run: runAcousticBench }];
+
+async function main(): Promise<void> {
+  for (const bench of BENCHES) {
+    await bench.run();
+    console.log('');
+  }
+}
+
+void main();

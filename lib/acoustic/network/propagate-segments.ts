@@ -1,0 +1,139 @@
+// Inner loops of the transfer-matrix chain: carry the state inward through a run of consecutive
+// segment ops, holding it in locals, with hand-written complex arithmetic and no allocation.
+import { OP_SEGMENT, type CompiledNetwork } from './compile';
+
+/** Per-frequency factors shared by all segments: k0 = 2 pi f / c, (1 - j) sqrt(f) and its derivative (1 - j) / (2 sqrt(f)). */
+export interface WaveFactors {
+  freeRe: number;
+  freeIm: number;
+  layerRe: number;
+  layerIm: number;
+  layerSlopeRe: number;
+  layerSlopeIm: number;
+}
+
+/** Carries the top state inward through consecutive segment ops, in locals; returns the next op. */
+export function propagateSegments(network: CompiledNetwork, stack: Float64Array, wave: WaveFactors, opStart: number, opEnd: number, top: number): number {
+  const program = network.program;
+  // Segment constants laid out by op position (op / 2), so the loop reads them in program order.
+  const lengths = network.opLengthM;
+  const impedances = network.opImpedance;
+  const kirchhoff = network.opKirchhoffPerSqrtHz;
+  const lining = network.opLiningNpPerM;
+  const freeRe = wave.freeRe, freeIm = wave.freeIm, layerRe = wave.layerRe, layerIm = wave.layerIm;
+  let pRe = stack[top], pIm = stack[top + 1], uRe = stack[top + 2], uIm = stack[top + 3];
+  let op = opStart;
+  for (; op < opEnd && program[op] === OP_SEGMENT; op += 2) {
+    const segment = op >> 1;
+    const lengthM = lengths[segment];
+    const impedance = impedances[segment];
+    const loss = kirchhoff[segment];
+    const phase = (freeRe + loss * layerRe) * lengthM;
+    const growth = (freeIm + loss * layerIm - lining[segment]) * lengthM;
+    const cosPhase = Math.cos(phase);
+    const sinPhase = Math.sin(phase);
+    const expGrowth = Math.exp(growth);
+    const coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
+    const sinhGrowth = coshGrowth - 1 / expGrowth;
+    // cos(kL) and sin(kL) for complex kL
+    const cosRe = cosPhase * coshGrowth;
+    const cosIm = -sinPhase * sinhGrowth;
+    const sinRe = sinPhase * coshGrowth;
+    const sinIm = cosPhase * sinhGrowth;
+    // Inverse transfer matrix [[cos, j Zc sin], [j sin / Zc, cos]] (Munjal, Acoustics of Ducts and Mufflers, ch. 2)
+    const upperRe = -impedance * sinIm;
+    const upperIm = impedance * sinRe;
+    const lowerRe = -sinIm / impedance;
+    const lowerIm = sinRe / impedance;
+    const nextPRe = cosRe * pRe - cosIm * pIm + upperRe * uRe - upperIm * uIm;
+    const nextPIm = cosRe * pIm + cosIm * pRe + upperRe * uIm + upperIm * uRe;
+    const nextURe = lowerRe * pRe - lowerIm * pIm + cosRe * uRe - cosIm * uIm;
+    uIm = lowerRe * pIm + lowerIm * pRe + cosRe * uIm + cosIm * uRe;
+    pRe = nextPRe;
+    pIm = nextPIm;
+    uRe = nextURe;
+  }
+  stack[top] = pRe;
+  stack[top + 1] = pIm;
+  stack[top + 2] = uRe;
+  stack[top + 3] = uIm;
+  return op;
+}
+
+/** As segmentsPlain, also carrying d/df of the state; d cos kL = -sin kL d(kL), d sin kL = cos kL d(kL). */
+export function propagateSegmentsWithDerivative(
+network: CompiledNetwork,
+stack: Float64Array,
+wave: WaveFactors,
+opStart: number,
+opEnd: number,
+top: number,
+): number {
+  const program = network.program;
+  // Segment constants laid out by op position (op / 2), so the loop reads them in program order.
+  const lengths = network.opLengthM;
+  const impedances = network.opImpedance;
+  const kirchhoff = network.opKirchhoffPerSqrtHz;
+  const lining = network.opLiningNpPerM;
+  const wavenumberPerHz = (2 * Math.PI) / network.speedOfSoundMps;
+  const freeRe = wave.freeRe, freeIm = wave.freeIm, layerRe = wave.layerRe, layerIm = wave.layerIm;
+  const layerSlopeRe = wave.layerSlopeRe, layerSlopeIm = wave.layerSlopeIm;
+  let pRe = stack[top], pIm = stack[top + 1], uRe = stack[top + 2], uIm = stack[top + 3];
+  let dpRe = stack[top + 4], dpIm = stack[top + 5], duRe = stack[top + 6], duIm = stack[top + 7];
+  let op = opStart;
+  for (; op < opEnd && program[op] === OP_SEGMENT; op += 2) {
+    const segment = op >> 1;
+    const lengthM = lengths[segment];
+    const impedance = impedances[segment];
+    const loss = kirchhoff[segment];
+    const phase = (freeRe + loss * layerRe) * lengthM;
+    const growth = (freeIm + loss * layerIm - lining[segment]) * lengthM;
+    const cosPhase = Math.cos(phase);
+    const sinPhase = Math.sin(phase);
+    const expGrowth = Math.exp(growth);
+    const coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
+    const sinhGrowth = coshGrowth - 1 / expGrowth;
+    const cosRe = cosPhase * coshGrowth;
+    const cosIm = -sinPhase * sinhGrowth;
+    const sinRe = sinPhase * coshGrowth;
+    const sinIm = cosPhase * sinhGrowth;
+    const upperRe = -impedance * sinIm;
+    const upperIm = impedance * sinRe;
+    const lowerRe = -sinIm / impedance;
+    const lowerIm = sinRe / impedance;
+    // d(kL)/df
+    const slopeRe = (wavenumberPerHz + loss * layerSlopeRe) * lengthM;
+    const slopeIm = loss * layerSlopeIm * lengthM;
+    const dCosRe = -(sinRe * slopeRe - sinIm * slopeIm);
+    const dCosIm = -(sinRe * slopeIm + sinIm * slopeRe);
+    const dSinRe = cosRe * slopeRe - cosIm * slopeIm;
+    const dSinIm = cosRe * slopeIm + cosIm * slopeRe;
+    const dUpperRe = -impedance * dSinIm;
+    const dUpperIm = impedance * dSinRe;
+    const dLowerRe = -dSinIm / impedance;
+    const dLowerIm = dSinRe / impedance;
+    const nextDpRe = cosRe * dpRe - cosIm * dpIm + upperRe * duRe - upperIm * duIm + dCosRe * pRe - dCosIm * pIm + dUpperRe * uRe - dUpperIm * uIm;
+    const nextDpIm = cosRe * dpIm + cosIm * dpRe + upperRe * duIm + upperIm * duRe + dCosRe * pIm + dCosIm * pRe + dUpperRe * uIm + dUpperIm * uRe;
+    const nextDuRe = lowerRe * dpRe - lowerIm * dpIm + cosRe * duRe - cosIm * duIm + dLowerRe * pRe - dLowerIm * pIm + dCosRe * uRe - dCosIm * uIm;
+    duIm = lowerRe * dpIm + lowerIm * dpRe + cosRe * duIm + cosIm * duRe + dLowerRe * pIm + dLowerIm * pRe + dCosRe * uIm + dCosIm * uRe;
+    dpRe = nextDpRe;
+    dpIm = nextDpIm;
+    duRe = nextDuRe;
+    const nextPRe = cosRe * pRe - cosIm * pIm + upperRe * uRe - upperIm * uIm;
+    const nextPIm = cosRe * pIm + cosIm * pRe + upperRe * uIm + upperIm * uRe;
+    const nextURe = lowerRe * pRe - lowerIm * pIm + cosRe * uRe - cosIm * uIm;
+    uIm = lowerRe * pIm + lowerIm * pRe + cosRe * uIm + cosIm * uRe;
+    pRe = nextPRe;
+    pIm = nextPIm;
+    uRe = nextURe;
+  }
+  stack[top] = pRe;
+  stack[top + 1] = pIm;
+  stack[top + 2] = uRe;
+  stack[top + 3] = uIm;
+  stack[top + 4] = dpRe;
+  stack[top + 5] = dpIm;
+  stack[top + 6] = duRe;
+  stack[top + 7] = duIm;
+  return op;
+}
