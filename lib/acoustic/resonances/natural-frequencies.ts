@@ -4,7 +4,7 @@
 // Method: a coarse scan along the real axis at about a third of the mean mode spacing c / (2 L),
 // L the total length of every segment (branches included) plus end corrections. At each scan point
 // one Newton step f - D/D' predicts the nearest zero; a point claims the zero when the prediction
-// falls within 0.75 of a scan step of it. Each claimed prediction is then refined by Newton's method on
+// falls within 0.6 of a scan step of it. Each claimed prediction is then refined by Newton's method on
 // D with Maehly's deflation of the zeros already found (the step is 1 / (D'/D - sum 1/(f - z_i))),
 // so a second seed near a known zero is driven to its neighbour instead of back to it: close pairs are
 // neither doubled nor, as long as both are claimed, missed. A prediction that lands on a zero already
@@ -25,7 +25,7 @@ export interface NaturalFrequencySearch {
   scanStepHz: number;
 }
 
-const CLAIM_WINDOW_STEPS = 0.75;
+const CLAIM_WINDOW_STEPS = 0.6;
 const MAX_NEWTON_ITERATIONS = 16;
 /** A prediction this close (in scan steps) to a zero already found is that zero again: not refined. */
 const SAME_ZERO_STEPS = 0.05;
@@ -51,6 +51,7 @@ function refineZero(
   let zRe = seedRe;
   let zIm = seedIm;
   const maxStep = MAX_NEWTON_STEP_IN_SCAN_STEPS * scanStepHz;
+  let previousStepSize = Infinity;
   for (let iteration = 0; iteration < MAX_NEWTON_ITERATIONS; iteration++) {
     evaluator.characteristic(zRe, zIm, true);
     const valueRe = evaluator.valueRe;
@@ -85,6 +86,9 @@ function refineZero(
     zIm += stepIm;
     if (zRe < lowHz || zRe > highHz || zIm > MAX_DAMPING_RATIO * zRe || zIm < -scanStepHz) return null;
     if (stepSize < CONVERGED_HZ * Math.max(1, zRe / 1000)) return { frequencyHz: zRe, dampingHz: zIm };
+    // Near a simple zero Newton's steps shrink quadratically; a seed whose steps stop shrinking is abandoned.
+    if (iteration >= 5 && stepSize > 0.5 * previousStepSize) return null;
+    previousStepSize = stepSize;
   }
   return null;
 }
