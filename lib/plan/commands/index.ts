@@ -1,0 +1,57 @@
+// Every editor command by name, and a dispatcher.
+import type { PlanDocument } from '../document';
+import type { EditorState } from '../editor-state';
+import { PlanError } from '../errors';
+import type { IdGenerator } from '../ids';
+import { addTee } from './add-tee';
+import type { CommandName, CommandResult } from './define';
+import { deleteSelection } from './delete-selection';
+import { drawSegment } from './draw-segment';
+import { moveNode } from './move-node';
+import { chooseEnd, setRunProperties, setTermination } from './run-properties';
+import { setLengthOverride, setLining, setSection } from './segment-properties';
+import { splitSegment } from './split-segment';
+
+export const COMMANDS = {
+  'draw-segment': drawSegment,
+  'move-node': moveNode,
+  'delete-selection': deleteSelection,
+  'split-segment': splitSegment,
+  'add-tee': addTee,
+  'set-section': setSection,
+  'set-lining': setLining,
+  'set-termination': setTermination,
+  'set-run-properties': setRunProperties,
+  'choose-end': chooseEnd,
+  'set-length-override': setLengthOverride,
+} as const satisfies { [Name in CommandName]: { name: Name } };
+
+export type CommandArgs<Name extends CommandName> = Parameters<(typeof COMMANDS)[Name]['perform']>[2];
+
+export function performCommand<Name extends CommandName>(name: Name, doc: PlanDocument, state: EditorState, args: CommandArgs<Name>, newId?: IdGenerator): CommandResult {
+  const command = COMMANDS[name] as { perform(doc: PlanDocument, state: EditorState, args: CommandArgs<Name>, newId?: IdGenerator): CommandResult };
+  return command.perform(doc, state, args, newId);
+}
+
+export type TryResult = ({ ok: true } & CommandResult) | { ok: false; error: PlanError };
+
+/** performCommand that returns a refusal instead of throwing it; other errors still throw. */
+export function tryCommand<Name extends CommandName>(name: Name, doc: PlanDocument, state: EditorState, args: CommandArgs<Name>, newId?: IdGenerator): TryResult {
+  try {
+    return { ok: true, ...performCommand(name, doc, state, args, newId) };
+  } catch (error) {
+    if (error instanceof PlanError) return { ok: false, error };
+    throw error;
+  }
+}
+
+export type { CommandName, CommandResult, Command } from './define';
+export type { NodeRef, DrawSegmentArgs } from './draw-segment';
+export type { SplitSegmentArgs } from './split-segment';
+export type { AddTeeArgs } from './add-tee';
+export type { MoveNodeArgs } from './move-node';
+export type { DeleteSelectionArgs } from './delete-selection';
+export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs } from './segment-properties';
+export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs } from './run-properties';
+export { KEY_BINDINGS, matchKeyBinding } from './key-bindings';
+export type { EditorAction, KeyBinding, KeyPress } from './key-bindings';

@@ -1,0 +1,68 @@
+// Run-level edits: a termination at an end, name, temperature and fan, and the chosen end.
+import { findRun, type Fan, type PlanDocument, type PlanRun, type Termination } from '../document';
+import type { EditorState } from '../editor-state';
+import { PlanError } from '../errors';
+import { fanSchema, runNameSchema, temperatureCSchema, terminationSchema } from '../schema';
+import { nodeDegree, runOfNode } from '../topology';
+import { checked, defineCommand } from './define';
+
+function replaceRun(doc: PlanDocument, run: PlanRun): PlanDocument {
+  return { ...doc, runs: doc.runs.map((candidate) => (candidate.id === run.id ? run : candidate)) };
+}
+
+function targetRun(doc: PlanDocument, state: EditorState, runId: string | undefined): PlanRun {
+  const id = runId ?? state.activeRunId;
+  if (id === null) throw new PlanError('Choose a run first.');
+  const run = findRun(doc, id);
+  if (!run) throw new PlanError(`There is no run with id "${id}".`, { runId: id });
+  return run;
+}
+
+export interface SetTerminationArgs {
+  readonly nodeId: string;
+  readonly termination: Termination;
+}
+
+export const setTermination = defineCommand('set-termination', 'Set how an end of the run is terminated: closed, open, lined or anechoic.', (doc, state, args: SetTerminationArgs) => {
+  const run = runOfNode(doc, args.nodeId);
+  if (!run) throw new PlanError('That point is not part of a run.', { nodeId: args.nodeId });
+  if (args.nodeId !== run.startNodeId && nodeDegree(doc, args.nodeId) !== 1) throw new PlanError('Only an end of the run takes a termination; this point joins segments.', { nodeId: args.nodeId });
+  const termination = checked(terminationSchema, args.termination, 'Termination');
+  return { doc: replaceRun(doc, { ...run, terminations: { ...run.terminations, [args.nodeId]: termination } }), state: { ...state, activeRunId: run.id } };
+});
+
+export interface SetRunPropertiesArgs {
+  /** Default: the active run. */
+  readonly runId?: string;
+  readonly name?: string;
+  readonly temperatureC?: number;
+  readonly fan?: Fan | null;
+}
+
+export const setRunProperties = defineCommand('set-run-properties', 'Rename the run, or set its air temperature or fan.', (doc, state, args: SetRunPropertiesArgs) => {
+  const run = targetRun(doc, state, args.runId);
+  const changed: PlanRun = {
+    ...run,
+    ...(args.name !== undefined ? { name: checked(runNameSchema, args.name, 'Name') } : {}),
+    ...(args.temperatureC !== undefined ? { temperatureC: checked(temperatureCSchema, args.temperatureC, 'Air temperature') } : {}),
+    ...(args.fan !== undefined ? { fan: args.fan === null ? null : checked(fanSchema, args.fan, 'Fan') } : {}),
+  };
+  return { doc: replaceRun(doc, changed), state };
+});
+
+export interface ChooseEndArgs {
+  /** Default: the run of the node. */
+  readonly runId?: string;
+  /** null: the farthest end from the start. */
+  readonly nodeId: string | null;
+}
+
+export const chooseEnd = defineCommand('choose-end', "Choose which open end is the run's end for the results.", (doc, state, args: ChooseEndArgs) => {
+  const run = args.runId !== undefined || args.nodeId === null ? targetRun(doc, state, args.runId) : runOfNode(doc, args.nodeId);
+  if (!run) throw new PlanError('That point is not part of a run.', { nodeId: args.nodeId ?? undefined });
+  if (args.nodeId !== null) {
+    if (runOfNode(doc, args.nodeId)?.id !== run.id) throw new PlanError(`That point is not part of ${run.name}.`, { nodeId: args.nodeId, runId: run.id });
+    if (args.nodeId === run.startNodeId || nodeDegree(doc, args.nodeId) !== 1) throw new PlanError('Choose an end of the run other than its start.', { nodeId: args.nodeId, runId: run.id });
+  }
+  return { doc: replaceRun(doc, { ...run, endNodeId: args.nodeId }), state: { ...state, activeRunId: run.id } };
+});

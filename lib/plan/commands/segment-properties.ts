@@ -1,0 +1,42 @@
+// Section, lining and length override of the given (or selected) segments.
+import type { Lining, PlanDocument, PlanSegment, Section } from '../document';
+import type { EditorState } from '../editor-state';
+import { lengthOverrideMSchema, liningSchema, sectionSchema } from '../schema';
+import { checked, defineCommand, targetSegmentIds } from './define';
+
+function updateSegments(doc: PlanDocument, state: EditorState, segmentIds: readonly string[] | undefined, change: (segment: PlanSegment) => PlanSegment) {
+  const ids = targetSegmentIds(doc, state, segmentIds);
+  return { doc: { ...doc, segments: doc.segments.map((segment) => (ids.has(segment.id) ? change(segment) : segment)) }, state };
+}
+
+export interface SetSectionArgs {
+  readonly segmentIds?: readonly string[];
+  readonly section: Section;
+}
+
+export const setSection = defineCommand('set-section', 'Set the section (round Ø or w × h) of the selected segments.', (doc, state, args: SetSectionArgs) => {
+  const section = checked(sectionSchema, args.section, 'Section');
+  return updateSegments(doc, state, args.segmentIds, (segment) => ({ ...segment, section: { ...section } }));
+});
+
+export interface SetLiningArgs {
+  readonly segmentIds?: readonly string[];
+  /** null removes the lining. */
+  readonly lining: Lining | null;
+}
+
+export const setLining = defineCommand('set-lining', 'Line the selected segments, or remove their lining.', (doc, state, args: SetLiningArgs) => {
+  const lining = args.lining === null ? null : checked(liningSchema, args.lining, 'Lining');
+  return updateSegments(doc, state, args.segmentIds, (segment) => ({ ...segment, lining: lining && { ...lining } }));
+});
+
+export interface SetLengthOverrideArgs {
+  readonly segmentIds?: readonly string[];
+  /** null goes back to the drawn length. */
+  readonly lengthM: number | null;
+}
+
+export const setLengthOverride = defineCommand('set-length-override', 'Give the selected segments a length of their own, or go back to the drawn length.', (doc, state, args: SetLengthOverrideArgs) => {
+  const lengthM = args.lengthM === null ? null : checked(lengthOverrideMSchema, args.lengthM, 'Length');
+  return updateSegments(doc, state, args.segmentIds, (segment) => ({ ...segment, lengthOverrideM: lengthM }));
+});

@@ -1,0 +1,77 @@
+// The plan document: plain readonly data. Changed only by pure functions that return a new document.
+import type { Lining, Section, Termination } from '@/lib/acoustic';
+
+export type { Lining, Section, Termination };
+
+export interface PlanNode {
+  readonly id: string;
+  /** Plan coordinates, in pixels of the background image (or of the grid). */
+  readonly x: number;
+  readonly y: number;
+}
+
+export interface PlanSegment {
+  readonly id: string;
+  readonly from: string;
+  readonly to: string;
+  readonly section: Section;
+  readonly lining?: Lining | null;
+  /** When set, the segment's length instead of the drawn one (schematic drawings). */
+  readonly lengthOverrideM?: number | null;
+}
+
+export interface Fan {
+  readonly blades: number;
+  readonly rpm: number;
+}
+
+export interface PlanRun {
+  readonly id: string;
+  readonly name: string;
+  readonly startNodeId: string;
+  /** The leaf chosen as the run's end for results; null: the farthest leaf from the start. */
+  readonly endNodeId: string | null;
+  readonly temperatureC: number;
+  readonly fan: Fan | null;
+  /** Keyed by node id: every leaf node of the run, the start included. */
+  readonly terminations: Readonly<Record<string, Termination>>;
+}
+
+export type PlanPlaceholder = Readonly<Record<string, unknown>>;
+
+export interface PlanDocument {
+  readonly schemaVersion: 1;
+  readonly nodes: readonly PlanNode[];
+  readonly segments: readonly PlanSegment[];
+  readonly runs: readonly PlanRun[];
+  readonly rooms: readonly PlanPlaceholder[];
+  readonly outlets: readonly PlanPlaceholder[];
+  readonly listeners: readonly PlanPlaceholder[];
+}
+
+/** Round Ø 250 mm: the section of a newly drawn run. */
+export const DEFAULT_SECTION: Section = { shape: 'round', diameterM: 0.25 };
+export const DEFAULT_START_TERMINATION: Termination = { kind: 'closed' };
+export const DEFAULT_END_TERMINATION: Termination = { kind: 'open', flange: 'unflanged' };
+export const DEFAULT_TEMPERATURE_C = 20;
+
+export function emptyDocument(): PlanDocument {
+  return { schemaVersion: 1, nodes: [], segments: [], runs: [], rooms: [], outlets: [], listeners: [] };
+}
+
+export function findNode(doc: PlanDocument, nodeId: string): PlanNode | undefined {
+  return doc.nodes.find((node) => node.id === nodeId);
+}
+
+export function findSegment(doc: PlanDocument, segmentId: string): PlanSegment | undefined {
+  return doc.segments.find((segment) => segment.id === segmentId);
+}
+
+export function findRun(doc: PlanDocument, runId: string): PlanRun | undefined {
+  return doc.runs.find((run) => run.id === runId);
+}
+
+/** Node positions by id, for geometry on many segments at once. */
+export function nodePositions(doc: PlanDocument): Map<string, PlanNode> {
+  return new Map(doc.nodes.map((node) => [node.id, node]));
+}
