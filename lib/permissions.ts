@@ -38,6 +38,16 @@ export const PERMISSIONS: Readonly<Record<Role, ReadonlySet<Action>>> = {
   viewer: new Set(viewer),
 };
 
+// Actions that change a team's data: refused while the team is read-only after a failed
+// payment (lib/billing/standing.ts). Reading, billing and the audit log stay open.
+export const WRITE_ACTIONS: ReadonlySet<Action> = new Set<Action>([
+  'project.create', 'project.update', 'plan.edit', 'review.write', 'comment.write', 'schedule.issue', 'members.manage',
+]);
+
+export function isWriteAction(action: string): boolean {
+  return WRITE_ACTIONS.has(action as Action);
+}
+
 export function can(role: Role, action: Action): boolean {
   return PERMISSIONS[role].has(action);
 }

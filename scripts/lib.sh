@@ -178,7 +178,7 @@ reset_database() {
   psql -h 127.0.0.1 -p "$DB_PORT" -U "$DB_USER" -d postgres -qc "drop database if exists \"$name\" with (force)" >/dev/null
 }
 
-# Local fakes of outside services (mail, file storage), on loopback; see scripts/fakes.ts.
+# Local fakes of outside services (mail, file storage, payments), on loopback; see scripts/fakes.ts.
 start_fakes() {
   local profile="$1" pid_file="$DATA_DIR/fakes-$1.pid" log="$DATA_DIR/fakes-$1.log"
   eval "$(node node_modules/tsx/dist/cli.mjs scripts/fakes.ts env "$profile")"
@@ -186,7 +186,7 @@ start_fakes() {
     step "Local fakes ($profile) are already running"
     return 0
   fi
-  step "Starting the local fakes ($profile): mail inbox $MAIL_INBOX_URL, file storage $S3_ENDPOINT"
+  step "Starting the local fakes ($profile): mail inbox $MAIL_INBOX_URL, file storage $S3_ENDPOINT, payments $PAYMENTS_FAKE_URL"
   nohup node node_modules/tsx/dist/cli.mjs scripts/fakes.ts run "$profile" >"$log" 2>&1 &
   echo $! > "$pid_file"
   for _ in $(seq 1 100); do

@@ -42,6 +42,7 @@ cat <<MSG
     viewer@antinode.test         viewer
 
   Mail sent by the app lands in the local inbox: $MAIL_INBOX_URL
+  Payments go to the local payment fake: $PAYMENTS_FAKE_URL (webhooks to $PAYMENTS_WEBHOOK_URL)
 
   Ctrl-C stops the web server; npm run stop stops everything npm start started.
 

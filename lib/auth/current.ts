@@ -2,8 +2,9 @@
 import { cookies } from 'next/headers';
 import { redirect } from 'next/navigation';
 import { cache } from 'react';
+import { assertTeamWritable } from '@/lib/billing/standing';
 import { AppError, forbidden } from '@/lib/errors';
-import { can, type Action } from '@/lib/permissions';
+import { can, isWriteAction, type Action } from '@/lib/permissions';
 import { actorFromSessionId, type Actor } from './actor';
 import { lucia } from './lucia';
 
@@ -24,5 +25,6 @@ export async function authorize(action: Action): Promise<Actor & { team: NonNull
   const actor = await currentActor();
   if (!actor) throw new AppError('not_signed_in', 'Your session has ended. Sign in again.');
   if (!actor.team || !can(actor.team.role, action)) throw forbidden();
+  if (isWriteAction(action)) await assertTeamWritable(actor.team.teamId);
   return actor as Actor & { team: NonNullable<Actor['team']> };
 }

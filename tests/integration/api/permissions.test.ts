@@ -1,10 +1,13 @@
-// Walks every route handler under app/api with no session and with each role, and checks
-// each answer against the one permission map in lib/permissions.ts.
+// Walks every route handler under app/api with no session, with each role, and with each
+// role of another team, and checks each answer against the one permission map in
+// lib/permissions.ts. Nothing of one team may show in another team's answers.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '@/lib/db';
 import { can, ROLES, type Action } from '@/lib/permissions';
 import { createProject } from '@/lib/projects/data';
-import { createTestTeam, type TestTeam } from '../helpers/people';
+import { newLinkToken } from '@/lib/tokens';
+import { Invitation, Membership } from '@/models';
+import { addMember, createTestTeam, type TestTeam } from '../helpers/people';
 import { call, listRouteFiles, loadHandlers, type Method } from '../helpers/routes';
 
 // What each route handler must require. A new handler fails the walk until it is listed here.
@@ -17,17 +20,44 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/sessions': 'public',
   'PUT /api/v1/sessions/current': 'signed-in',
   'DELETE /api/v1/sessions/current': 'signed-in',
+  'POST /api/v1/billing/webhook': 'public',
+  'POST /api/v1/invitations/accept': 'public',
+  'POST /api/v1/password-resets': 'public',
+  'POST /api/v1/password-resets/complete': 'public',
+  'GET /api/v1/team/audit': 'audit.read',
+  'GET /api/v1/team/audit/export': 'audit.read',
+  'GET /api/v1/team/billing': 'billing.manage',
+  'PUT /api/v1/team/billing/seats': 'billing.manage',
+  'DELETE /api/v1/team/billing/subscription': 'billing.manage',
+  'GET /api/v1/team/invitations': 'members.manage',
+  'POST /api/v1/team/invitations': 'members.manage',
+  'DELETE /api/v1/team/invitations/[invitationId]': 'members.manage',
+  'POST /api/v1/team/invitations/[invitationId]/resend': 'members.manage',
+  'GET /api/v1/team/members': 'team.read',
+  'PATCH /api/v1/team/members/[memberId]': 'members.manage',
+  'DELETE /api/v1/team/members/[memberId]': 'members.manage',
 };
 
 const WRITE_METHODS = new Set<Method>(['POST', 'PUT', 'PATCH', 'DELETE']);
 let testTeam: TestTeam;
+let otherTeam: TestTeam;
 let fixtureParams: Record<string, string>;
+let thisTeamIds: RegExp;
 
 beforeAll(async () => {
   testTeam = await createTestTeam('walk');
+  otherTeam = await createTestTeam('walk-other');
   const project = await createProject(testTeam.team.id, testTeam.members.acoustician.id, { name: 'Walk project', site: '' });
+  const extra = await addMember(testTeam.team.id, 'viewer', 'walk-extra');
+  const extraMembership = await Membership.findOne({ where: { userId: extra.id, teamId: testTeam.team.id } });
+  const invitation = await Invitation.create({
+    teamId: testTeam.team.id, email: 'walk-invitee@example.test', role: 'viewer', tokenHash: newLinkToken().tokenHash,
+    invitedById: testTeam.members.admin.id, expiresAt: new Date(Date.now() + 86_400_000),
+  });
   // Every dynamic segment a route may use needs a value from this team.
-  fixtureParams = { projectId: project.id };
+  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id };
+  const ids = [testTeam.team.id, extra.id, ...Object.values(fixtureParams), ...Object.values(testTeam.members).map((user) => user.id)];
+  thisTeamIds = new RegExp(ids.join('|'));
 });
 afterAll(async () => { await sequelize.close(); });
 
@@ -60,6 +90,17 @@ describe('every route handler', () => {
         const anonymous = await call(handler, method, urlPath, { body, params });
         expect(anonymous.status, `${method} ${urlPath} without a session`).toBe(401);
         expectErrorShape(anonymous.body, 'not_signed_in');
+
+        // Another team's people, before this team's own calls may change anything.
+        for (const role of ROLES) {
+          const answer = await call(handler, method, urlPath, { body, params, cookie: await otherTeam.cookieFor(role) });
+          const label = `${method} ${urlPath} as ${role} of another team`;
+          expect(JSON.stringify(answer.body) ?? '', `${label} shows nothing of this team`).not.toMatch(thisTeamIds);
+          const allowed = handler.access === 'signed-in' || can(role, handler.access as Action);
+          if (!allowed) expect(answer.status, label).toBe(403);
+          else if (route.params.length > 0 && !WRITE_METHODS.has(method)) expect(answer.status, `${label} is not found`).toBe(404);
+          else if (route.params.length > 0) expect([400, 404], `${label} is refused (got ${answer.status})`).toContain(answer.status);
+        }
 
         for (const role of ROLES) {
           const answer = await call(handler, method, urlPath, { body, params, cookie: await testTeam.cookieFor(role) });

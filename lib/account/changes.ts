@@ -1,0 +1,38 @@
+// Changes from the account page; each asks for the current password first.
+import { Op, UniqueConstraintError } from 'sequelize';
+import { hashPassword, verifyPassword } from '@/lib/auth/password';
+import { sequelize } from '@/lib/db';
+import { AppError } from '@/lib/errors';
+import { PasswordReset, Session, User } from '@/models';
+
+async function provenUser(userId: string, currentPassword: string): Promise<User> {
+  const user = await User.findByPk(userId);
+  if (!user) throw new AppError('not_signed_in', 'Your session has ended. Sign in again.');
+  if (!(await verifyPassword(user.passwordHash, currentPassword))) {
+    throw new AppError('wrong_credentials', 'The current password is wrong. Nothing was changed.', { field: 'currentPassword' });
+  }
+  return user;
+}
+
+// New password; every other session of the account ends, this one stays.
+export async function changePassword(userId: string, sessionId: string, currentPassword: string, newPassword: string): Promise<void> {
+  const user = await provenUser(userId, currentPassword);
+  const passwordHash = await hashPassword(newPassword);
+  await sequelize.transaction(async (transaction) => {
+    await user.update({ passwordHash }, { transaction });
+    await Session.destroy({ where: { userId, id: { [Op.ne]: sessionId } }, transaction });
+    await PasswordReset.update({ usedAt: new Date() }, { where: { userId, usedAt: null }, transaction });
+  });
+}
+
+export async function changeEmail(userId: string, currentPassword: string, email: string): Promise<string> {
+  const user = await provenUser(userId, currentPassword);
+  if (user.email === email) throw new AppError('bad_input', 'That is already your e-mail address.', { field: 'email' });
+  try {
+    await user.update({ email });
+  } catch (error) {
+    if (error instanceof UniqueConstraintError) throw new AppError('conflict', 'Another account already uses that e-mail address.', { field: 'email' });
+    throw error;
+  }
+  return email;
+}
