@@ -13,3 +13,4 @@ export type { RunInputWithMap, MainPathPiece } from './to-run-input';
 export { normalizeDocument, normalizeState, nextRunName } from './normalize';
 export * from './commands';
 export * from './history';
+export * from './units';
