@@ -14,3 +14,4 @@ export { normalizeDocument, normalizeState, nextRunName } from './normalize';
 export * from './commands';
 export * from './history';
 export * from './units';
+export * from './schedule-csv';
