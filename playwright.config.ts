@@ -6,12 +6,13 @@ const PORT = Number(process.env.ANTINODE_E2E_PORT ?? 3100);
 
 export default defineConfig({
   testDir: 'tests/e2e',
+  outputDir: `test-results/port-${PORT}`,
   fullyParallel: false,
   workers: 1,
   retries: 0,
   timeout: 60_000,
   expect: { timeout: 10_000 },
-  reporter: [['list'], ['html', { open: 'never', outputFolder: 'playwright-report' }]],
+  reporter: [['list'], ['html', { open: 'never', outputFolder: `playwright-report/port-${PORT}` }]],
   use: {
     baseURL: `http://localhost:${PORT}`,
     viewport: { width: 1440, height: 900 },

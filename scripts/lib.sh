@@ -196,3 +196,8 @@ start_fakes() {
   done
   fail "the local fakes did not report ready within 20 s (log in .data/fakes-$profile.log)"
 }
+
+# PDF plans become images through poppler's pdftoppm (Debian's poppler-utils).
+ensure_pdftoppm() {
+  if ! command -v pdftoppm >/dev/null; then apt_install poppler-utils; fi
+}

@@ -7,6 +7,7 @@ APP_PORT="${PORT:-3000}"
 cd "$ROOT"
 ensure_node
 ensure_node_modules
+ensure_pdftoppm
 prepare_database antinode
 start_fakes app
 

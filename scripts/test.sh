@@ -6,6 +6,7 @@ source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 cd "$ROOT"
 ensure_node
 ensure_node_modules
+ensure_pdftoppm
 ensure_chromium
 ensure_postgres_installed
 ensure_cluster

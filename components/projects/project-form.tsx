@@ -18,8 +18,7 @@ export function ProjectForm() {
     setServerError(null);
     const result = await createProjectAction(values);
     if (!result.ok) { setServerError(result.error.message); return; }
-    router.push('/projects');
-    router.refresh();
+    router.push(`/projects/${result.data.id}`);
   });
 
   return (

@@ -1,6 +1,7 @@
 // Projects of a team. Every query is scoped by team id: one team never sees another's.
 import { Project } from '@/models';
-import type { ProjectInput } from './schemas';
+import { notFound } from '@/lib/errors';
+import type { ProjectInput, ProjectUpdate } from './schemas';
 
 export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; updatedAt: string }
 
@@ -23,5 +24,12 @@ export async function getProject(teamId: string, projectId: string): Promise<Pro
 
 export async function createProject(teamId: string, userId: string, input: Required<ProjectInput>): Promise<ProjectSummary> {
   const row = await Project.create({ teamId, createdById: userId, name: input.name, site: input.site });
+  return toSummary(row);
+}
+
+export async function updateProject(teamId: string, projectId: string, changes: ProjectUpdate): Promise<ProjectSummary> {
+  const row = await Project.findOne({ where: { teamId, id: projectId } });
+  if (!row) throw notFound('That project');
+  await row.update(changes);
   return toSummary(row);
 }

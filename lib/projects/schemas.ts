@@ -6,3 +6,12 @@ export const projectInputSchema = z.object({
   site: z.string({ error: 'The site must be text.' }).trim().max(240, 'Keep the site under 240 characters.').default(''),
 });
 export type ProjectInput = z.input<typeof projectInputSchema>;
+
+export const projectUpdateSchema = z
+  .object({
+    name: projectInputSchema.shape.name.optional(),
+    site: z.string({ error: 'The site must be text.' }).trim().max(240, 'Keep the site under 240 characters.').optional(),
+    archived: z.boolean({ error: 'archived must be true or false' }).optional(),
+  })
+  .refine((value) => Object.values(value).some((field) => field !== undefined), 'Send at least one of name, site, archived.');
+export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;

@@ -25,7 +25,9 @@ test('an acoustician creates a project from the empty state', async ({ page }) =
   await page.getByRole('link', { name: 'Create the first project' }).click();
   await page.getByLabel('Project name').fill('Thornbury Music School');
   await page.getByRole('button', { name: 'Create project' }).click();
-  await expect(page).toHaveURL(/\/projects$/);
+  await expect(page.getByRole('heading', { name: 'Thornbury Music School' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'No plans in this project' })).toBeVisible();
+  await page.goto('/projects');
   await expect(page.getByRole('list', { name: 'Projects' })).toContainText('Thornbury Music School');
 });
 

@@ -4,7 +4,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '@/lib/db';
 import { can, ROLES, type Action } from '@/lib/permissions';
+import { createPlan } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
+import { storePlanBackground } from '@/lib/uploads/data';
+import { tinyPng } from '../helpers/files';
 import { newLinkToken } from '@/lib/tokens';
 import { Invitation, Membership } from '@/models';
 import { addMember, createTestTeam, type TestTeam } from '../helpers/people';
@@ -35,6 +38,17 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/team/invitations/[invitationId]/resend': 'members.manage',
   'GET /api/v1/team/members': 'team.read',
   'PATCH /api/v1/team/members/[memberId]': 'members.manage',
+  'GET /api/v1/projects/[projectId]': 'project.read',
+  'PATCH /api/v1/projects/[projectId]': 'project.update',
+  'GET /api/v1/projects/[projectId]/plans': 'plan.read',
+  'POST /api/v1/projects/[projectId]/plans': 'plan.edit',
+  'GET /api/v1/plans/[planId]': 'plan.read',
+  'PATCH /api/v1/plans/[planId]': 'plan.edit',
+  'PUT /api/v1/plans/[planId]/document': 'plan.edit',
+  'GET /api/v1/plans/[planId]/results': 'plan.read',
+  'POST /api/v1/plans/[planId]/background': 'plan.edit',
+  'DELETE /api/v1/plans/[planId]/background': 'plan.edit',
+  'GET /api/v1/uploads/[uploadId]': 'plan.read',
   'DELETE /api/v1/team/members/[memberId]': 'members.manage',
 };
 
@@ -55,7 +69,9 @@ beforeAll(async () => {
     invitedById: testTeam.members.admin.id, expiresAt: new Date(Date.now() + 86_400_000),
   });
   // Every dynamic segment a route may use needs a value from this team.
-  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id };
+  const plan = await createPlan(testTeam.team.id, testTeam.members.acoustician.id, project.id, 'Walk plan');
+  const upload = await storePlanBackground(testTeam.team.id, testTeam.members.acoustician.id, 'walk.png', tinyPng());
+  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id, planId: plan.id, uploadId: upload.id };
   const ids = [testTeam.team.id, extra.id, ...Object.values(fixtureParams), ...Object.values(testTeam.members).map((user) => user.id)];
   thisTeamIds = new RegExp(ids.join('|'));
 });

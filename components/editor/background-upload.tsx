@@ -1,0 +1,44 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useRef, useState } from 'react';
+import type { ErrorBody } from '@/lib/errors';
+
+// Upload (or replace) the plan drawing: PNG, JPEG, WebP or the first page of a PDF, up to 20 MB.
+export function BackgroundUpload({ planId, hasBackground }: { planId: string; hasBackground: boolean }) {
+  const router = useRouter();
+  const input = useRef<HTMLInputElement>(null);
+  const [busy, setBusy] = useState(false);
+  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+
+  async function upload(file: File) {
+    setBusy(true);
+    setMessage(null);
+    const body = new FormData();
+    body.append('file', file);
+    try {
+      const response = await fetch(`/api/v1/plans/${planId}/background`, { method: 'POST', body });
+      if (!response.ok) {
+        const error = ((await response.json().catch(() => null)) as ErrorBody | null)?.error;
+        setMessage({ ok: false, text: error?.message ?? `The upload failed (${response.status}).` });
+        return;
+      }
+      setMessage({ ok: true, text: `${file.name} is the plan drawing now.` });
+      router.refresh();
+    } catch {
+      setMessage({ ok: false, text: 'The server could not be reached; nothing changed.' });
+    } finally {
+      setBusy(false);
+      if (input.current) input.current.value = '';
+    }
+  }
+
+  return (
+    <div className="flex items-center gap-2">
+      <input ref={input} type="file" accept="image/png,image/jpeg,image/webp,application/pdf" className="sr-only" id="background-file" aria-label="Plan drawing file"
+        onChange={(event) => { const file = event.target.files?.[0]; if (file) void upload(file); }} />
+      <label htmlFor="background-file" className={`btn-quiet cursor-pointer ${busy ? 'opacity-50' : ''}`}>{busy ? 'Uploading…' : hasBackground ? 'Replace drawing' : 'Upload drawing'}</label>
+      {message && <span role={message.ok ? 'status' : 'alert'} data-testid="upload-message" className={`max-w-80 text-xs ${message.ok ? 'text-graphite-500' : 'text-risk-ink'}`}>{message.text}</span>}
+    </div>
+  );
+}

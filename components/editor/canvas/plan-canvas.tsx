@@ -1,0 +1,199 @@
+'use client';
+
+import type Konva from 'konva';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { Circle, Image as KonvaImage, Layer, Line, Rect, Stage } from 'react-konva';
+import type { Resonance } from '@/lib/acoustic';
+import { nodePositions, type PlanDocument } from '@/lib/plan/document';
+import type { Selection } from '@/lib/plan/editor-state';
+import type { Point } from '@/lib/plan/geometry';
+import type { MainPathPiece } from '@/lib/plan/to-run-input';
+import { GridShape } from './grid-shape';
+import { ModeOverlay } from './mode-overlay';
+import { NodeDot } from './node-dot';
+import { SegmentLine } from './segment-line';
+import { TerminationGlyph } from './termination-glyph';
+import { fitView, screenToPlan, zoomAt, type View } from './view';
+
+export interface CanvasTarget { nodeId?: string; segmentId?: string }
+export interface CanvasPointer { type: 'down' | 'move' | 'dblclick'; point: Point; target: CanvasTarget; shiftKey: boolean; scale: number }
+
+export interface PlanCanvasProps {
+  document: PlanDocument;
+  widthPx: number;
+  heightPx: number;
+  background: { url: string; widthPx: number; heightPx: number } | null;
+  gridSpacingPx: number;
+  metresPerPixel: number;
+  selection: Selection;
+  editable: boolean;
+  panning: boolean;
+  mainPath: readonly MainPathPiece[];
+  mode: { resonance: Resonance; speedOfSoundMps: number } | null;
+  preview: { from: Point; to: Point } | null;
+  calibration: readonly Point[];
+  onPointer: (pointer: CanvasPointer) => void;
+  onNodeDrag: (nodeId: string, point: Point, phase: 'move' | 'end') => void;
+}
+
+const GRID_AREA_PX = { width: 4000, height: 3000 };
+const ZOOM_STEP = 1.15;
+
+function targetOf(event: Konva.KonvaEventObject<MouseEvent>): CanvasTarget {
+  const id = event.target.id();
+  if (id.startsWith('node:')) return { nodeId: id.slice(5) };
+  if (id.startsWith('segment:')) return { segmentId: id.slice(8) };
+  return {};
+}
+
+function useImage(url: string | null): HTMLImageElement | null {
+  const [image, setImage] = useState<HTMLImageElement | null>(null);
+  useEffect(() => {
+    if (!url) { setImage(null); return; }
+    const element = new window.Image();
+    element.onload = () => setImage(element);
+    element.src = url;
+    return () => { element.onload = null; };
+  }, [url]);
+  return image;
+}
+
+export default function PlanCanvas(props: PlanCanvasProps) {
+  const { document: doc, widthPx, heightPx, background, selection, editable } = props;
+  const contentWidth = background?.widthPx ?? GRID_AREA_PX.width;
+  const contentHeight = background?.heightPx ?? GRID_AREA_PX.height;
+  const [view, setView] = useState<View>(() => fitView(contentWidth, contentHeight, widthPx, heightPx));
+  const fittedFor = useRef<string>('');
+  const image = useImage(background?.url ?? null);
+  const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number } | null>(null);
+
+  useEffect(() => {
+    const key = `${background?.url ?? 'grid'}:${widthPx > 0 && heightPx > 0}`;
+    if (fittedFor.current === key || widthPx === 0) return;
+    fittedFor.current = key;
+    setView(fitView(contentWidth, contentHeight, widthPx, heightPx));
+  }, [background?.url, contentWidth, contentHeight, widthPx, heightPx]);
+
+  const positions = useMemo(() => {
+    const map = nodePositions(doc);
+    if (drag) map.set(drag.nodeId, { id: drag.nodeId, x: drag.x, y: drag.y });
+    return map;
+  }, [doc, drag]);
+  const selectedNodes = useMemo(() => new Set(selection.nodeIds), [selection.nodeIds]);
+  const selectedSegments = useMemo(() => new Set(selection.segmentIds), [selection.segmentIds]);
+  const onPath = useMemo(() => new Set(props.mainPath.map((piece) => piece.segmentId)), [props.mainPath]);
+  const startNodes = useMemo(() => new Set(doc.runs.map((run) => run.startNodeId)), [doc.runs]);
+
+  const leafGlyphs = useMemo(() => {
+    const glyphs: { nodeId: string; x: number; y: number; angleRad: number; termination: PlanDocument['runs'][number]['terminations'][string] }[] = [];
+    for (const run of doc.runs) {
+      for (const [nodeId, termination] of Object.entries(run.terminations)) {
+        const node = positions.get(nodeId);
+        const segment = doc.segments.find((candidate) => candidate.from === nodeId || candidate.to === nodeId);
+        if (!node || !segment) continue;
+        const other = positions.get(segment.from === nodeId ? segment.to : segment.from);
+        if (!other) continue;
+        glyphs.push({ nodeId, x: node.x, y: node.y, angleRad: Math.atan2(node.y - other.y, node.x - other.x), termination });
+      }
+    }
+    return glyphs;
+  }, [doc.runs, doc.segments, positions]);
+
+  const toPlan = (stage: Konva.Stage | null): Point | null => {
+    const pointer = stage?.getPointerPosition();
+    return pointer ? screenToPlan(view, pointer) : null;
+  };
+
+  const emit = (type: CanvasPointer['type']) => (event: Konva.KonvaEventObject<MouseEvent>) => {
+    if (props.panning || event.evt.button === 1) return;
+    const point = toPlan(event.target.getStage());
+    if (point) props.onPointer({ type, point, target: targetOf(event), shiftKey: event.evt.shiftKey, scale: view.scale });
+  };
+
+  const onWheel = (event: Konva.KonvaEventObject<WheelEvent>) => {
+    event.evt.preventDefault();
+    const pointer = event.target.getStage()?.getPointerPosition();
+    if (pointer) setView((current) => zoomAt(current, pointer, event.evt.deltaY < 0 ? ZOOM_STEP : 1 / ZOOM_STEP));
+  };
+
+  const onNodeDragMove = useMemo(() => (nodeId: string, x: number, y: number) => {
+    setDrag({ nodeId, x, y });
+    props.onNodeDrag(nodeId, { x, y }, 'move');
+  }, [props.onNodeDrag]); // eslint-disable-line react-hooks/exhaustive-deps
+  const onNodeDragEnd = useMemo(() => (nodeId: string, x: number, y: number) => {
+    setDrag(null);
+    props.onNodeDrag(nodeId, { x, y }, 'end');
+  }, [props.onNodeDrag]); // eslint-disable-line react-hooks/exhaustive-deps
+
+  const sectionWidthPx = (sizeM: number) => Math.max(2, Math.min(9, (sizeM / props.metresPerPixel) * view.scale));
+
+  return (
+    <Stage
+      width={widthPx}
+      height={heightPx}
+      x={view.offsetX}
+      y={view.offsetY}
+      scaleX={view.scale}
+      scaleY={view.scale}
+      draggable={props.panning}
+      onDragEnd={(event) => { if (event.target === event.target.getStage()) setView((current) => ({ ...current, offsetX: event.target.x(), offsetY: event.target.y() })); }}
+      onWheel={onWheel}
+      onMouseDown={emit('down')}
+      onMouseMove={emit('move')}
+      onDblClick={emit('dblclick')}
+      style={{ cursor: props.panning ? 'grab' : 'crosshair' }}
+      data-testid="plan-canvas"
+    >
+      <Layer listening={false}>
+        <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
+        {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
+        <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.gridSpacingPx} scale={view.scale} />
+      </Layer>
+      <Layer>
+        {doc.segments.map((segment) => {
+          const from = positions.get(segment.from);
+          const to = positions.get(segment.to);
+          if (!from || !to) return null;
+          const sizeM = segment.section.shape === 'round' ? segment.section.diameterM : Math.max(segment.section.widthM, segment.section.heightM);
+          return (
+            <SegmentLine
+              key={segment.id}
+              id={segment.id}
+              x1={from.x} y1={from.y} x2={to.x} y2={to.y}
+              widthPx={sectionWidthPx(sizeM)}
+              selected={selectedSegments.has(segment.id)}
+              onPath={onPath.has(segment.id)}
+              lined={Boolean(segment.lining)}
+              scale={view.scale}
+            />
+          );
+        })}
+        {leafGlyphs.map((glyph) => <TerminationGlyph key={`t${glyph.nodeId}`} {...glyph} scale={view.scale} />)}
+        {props.mode && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}
+        {doc.nodes.map((node) => (
+          <NodeDot
+            key={node.id}
+            id={node.id}
+            x={node.x}
+            y={node.y}
+            selected={selectedNodes.has(node.id)}
+            isStart={startNodes.has(node.id)}
+            draggable={editable && !props.panning}
+            scale={view.scale}
+            onDragMove={onNodeDragMove}
+            onDragEnd={onNodeDragEnd}
+          />
+        ))}
+        {props.preview && (
+          <Line points={[props.preview.from.x, props.preview.from.y, props.preview.to.x, props.preview.to.y]} stroke="#2d6a96" strokeWidth={2 / view.scale} dash={[6 / view.scale, 4 / view.scale]} listening={false} />
+        )}
+        {props.calibration.map((point, index) => (
+          <Circle key={`c${index}`} x={point.x} y={point.y} radius={5 / view.scale} stroke="#2d6a96" strokeWidth={2 / view.scale} listening={false} />
+        ))}
+        {props.calibration.length === 2 && (
+          <Line points={[props.calibration[0].x, props.calibration[0].y, props.calibration[1].x, props.calibration[1].y]} stroke="#2d6a96" strokeWidth={2 / view.scale} listening={false} />
+        )}
+      </Layer>
+    </Stage>
+  );
+}

@@ -1,0 +1,92 @@
+// The editor's state outside React: the document history, selection, scale and save state,
+// changed only through `editorReducer`. Commands come from lib/plan and stay pure.
+import {
+  canRedo, canUndo, createHistory, initialEditorState, normalizeState, push, redo, tryCommand, undo,
+  type CommandArgs, type CommandName, type EditorState, type History, type PlanDocument,
+} from '@/lib/plan';
+
+export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error';
+
+export interface EditorModel {
+  history: History<PlanDocument>;
+  state: EditorState;
+  metresPerPixel: number;
+  version: number;                 // the server version the edits are based on
+  savedDocument: PlanDocument;     // what the server holds at `version`
+  savedMetresPerPixel: number;
+  saveStatus: SaveStatus;
+  notice: string | null;           // the last refusal or save problem, in words
+}
+
+export type EditorAction =
+  | { type: 'apply'; document: PlanDocument; state: EditorState }
+  | { type: 'undo' }
+  | { type: 'redo' }
+  | { type: 'set-state'; state: EditorState }
+  | { type: 'set-scale'; metresPerPixel: number }
+  | { type: 'save-started' }
+  | { type: 'save-succeeded'; version: number; document: PlanDocument; metresPerPixel: number }
+  | { type: 'save-conflict'; message: string }
+  | { type: 'save-failed'; message: string }
+  | { type: 'rebase'; version: number }
+  | { type: 'reload'; version: number; document: PlanDocument; metresPerPixel: number }
+  | { type: 'notice'; message: string | null };
+
+// Runs a command on the model's document; the result is applied (one undo step) or the
+// refusal shown. Returns the new document and state, or null when refused.
+export function runCommand<Name extends CommandName>(model: EditorModel, dispatch: (action: EditorAction) => void, name: Name, args: CommandArgs<Name>): { doc: PlanDocument; state: EditorState } | null {
+  const result = tryCommand(name, model.history.present, model.state, args);
+  if (!result.ok) { dispatch({ type: 'notice', message: result.error.message }); return null; }
+  dispatch({ type: 'apply', document: result.doc, state: result.state });
+  return { doc: result.doc, state: result.state };
+}
+
+export function initialModel(document: PlanDocument, version: number, metresPerPixel: number): EditorModel {
+  const state = { ...initialEditorState(), activeRunId: document.runs[0]?.id ?? null };
+  return { history: createHistory(document), state, metresPerPixel, version, savedDocument: document, savedMetresPerPixel: metresPerPixel, saveStatus: 'saved', notice: null };
+}
+
+export function isDirty(model: EditorModel): boolean {
+  return model.history.present !== model.savedDocument || model.metresPerPixel !== model.savedMetresPerPixel;
+}
+
+function afterEdit(model: EditorModel, history: History<PlanDocument>, state: EditorState): EditorModel {
+  const next = { ...model, history, state, notice: null };
+  return { ...next, saveStatus: model.saveStatus === 'conflict' ? 'conflict' : isDirty(next) ? 'unsaved' : 'saved' };
+}
+
+export function editorReducer(model: EditorModel, action: EditorAction): EditorModel {
+  switch (action.type) {
+    case 'apply':
+      return afterEdit(model, push(model.history, action.document), action.state);
+    case 'undo':
+    case 'redo': {
+      if (action.type === 'undo' ? !canUndo(model.history) : !canRedo(model.history)) return model;
+      const history = action.type === 'undo' ? undo(model.history) : redo(model.history);
+      return afterEdit(model, history, normalizeState(history.present, model.state));
+    }
+    case 'set-state':
+      return { ...model, state: action.state };
+    case 'set-scale':
+      return afterEdit({ ...model, metresPerPixel: action.metresPerPixel }, model.history, model.state);
+    case 'save-started':
+      return { ...model, saveStatus: 'saving' };
+    case 'save-succeeded': {
+      const next = { ...model, version: action.version, savedDocument: action.document, savedMetresPerPixel: action.metresPerPixel };
+      return { ...next, saveStatus: isDirty(next) ? 'unsaved' : 'saved', notice: null };
+    }
+    case 'save-conflict':
+      return { ...model, saveStatus: 'conflict', notice: action.message };
+    case 'save-failed':
+      return { ...model, saveStatus: 'error', notice: action.message };
+    case 'rebase':
+      // Overwrite: keep my document, aim the next save at the server's newest version.
+      return { ...model, version: action.version, savedDocument: { ...model.savedDocument }, saveStatus: 'unsaved', notice: null };
+    case 'reload': {
+      const fresh = initialModel(action.document, action.version, action.metresPerPixel);
+      return { ...fresh, state: normalizeState(action.document, model.state) };
+    }
+    case 'notice':
+      return { ...model, notice: action.message };
+  }
+}

@@ -1,0 +1,62 @@
+'use client';
+
+import type { RunResult } from '@/lib/plans/results';
+import { EchoChart } from '../results/echo-chart';
+import { ReflectionTable } from '../results/reflection-table';
+import { ResonanceTable } from '../results/resonance-table';
+
+interface ResultsPanelProps {
+  result: RunResult | null;
+  loading: boolean;
+  stale: boolean;
+  error: string | null;
+  selectedOrder: number | null;
+  onSelectOrder: (order: number | null) => void;
+  formatPosition: (metres: number) => string;
+}
+
+function Section({ title, children }: { title: string; children: React.ReactNode }) {
+  return (
+    <section className="space-y-2" aria-label={title}>
+      <h3 className="text-xs font-semibold uppercase tracking-wider text-graphite-500">{title}</h3>
+      {children}
+    </section>
+  );
+}
+
+// The chosen run's results: cut-off and warnings, resonances, reflections, echo chart.
+export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition }: ResultsPanelProps) {
+  if (error) return <p role="alert" className="text-sm text-risk-ink">The results could not be computed: {error}</p>;
+  if (!result) return <p className="text-sm text-graphite-500">{loading ? 'Computing…' : 'Draw a run to see its resonances here: pick Draw (D), click at the fan end, then at each bend.'}</p>;
+  if (result.problem) return <p role="status" className="rounded border border-risk bg-risk-soft p-2 text-sm text-risk-ink"><span className="font-semibold">Cannot analyse {result.name}: </span>{result.problem}</p>;
+  const analysis = result.analysis!;
+  return (
+    <div className={`space-y-5 ${stale ? 'opacity-60' : ''}`} aria-busy={stale}>
+      <dl className="num grid grid-cols-2 gap-x-3 gap-y-1 text-sm" aria-label="Run summary">
+        <dt className="text-graphite-500">Length along path</dt><dd>{formatPosition(analysis.lengthM)}</dd>
+        <dt className="text-graphite-500">Plane-wave cut-off</dt><dd>{analysis.cutoffHz.toFixed(0)} Hz</dd>
+        <dt className="text-graphite-500">End corrections</dt><dd>{formatPosition(analysis.endCorrectionM.start)} · {formatPosition(analysis.endCorrectionM.end)}</dd>
+        <dt className="text-graphite-500">Speed of sound</dt><dd>{analysis.speedOfSoundMps.toFixed(1)} m/s</dd>
+        {result.fanTonesHz.length > 0 && (<><dt className="text-graphite-500">Fan tones</dt><dd>{result.fanTonesHz.map((hz) => hz.toFixed(0)).join(', ')} Hz</dd></>)}
+      </dl>
+      {analysis.warnings.length > 0 && (
+        <ul className="space-y-1 text-sm text-risk-ink" aria-label="Warnings">
+          {analysis.warnings.map((warning) => <li key={warning}><span aria-hidden="true">⚠ </span>{warning}</li>)}
+        </ul>
+      )}
+      <Section title="Resonances">
+        <ResonanceTable resonances={analysis.resonances} nearFanTone={result.nearFanTone} selectedOrder={selectedOrder} onSelect={onSelectOrder} />
+        <p className="text-xs text-graphite-500">Select a row to draw its pressure envelope on the plan (A antinode, N node).</p>
+      </Section>
+      <Section title="Reflections">
+        <ReflectionTable reflections={analysis.reflections} formatPosition={formatPosition} />
+      </Section>
+      <Section title="Echo chart">
+        <EchoChart echoes={analysis.echoes} lengthM={analysis.lengthM} />
+      </Section>
+      <p className="text-xs text-graphite-500">
+        Plane-wave model below the cut-off; results are design predictions. Linings must meet the fire and smoke ratings your local codes require.
+      </p>
+    </div>
+  );
+}

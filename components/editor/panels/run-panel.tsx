@@ -1,0 +1,35 @@
+'use client';
+
+import { useEffect, useState } from 'react';
+import type { PlanRun } from '@/lib/plan';
+import { NumberInput } from './number-input';
+
+interface RunPanelProps {
+  run: PlanRun;
+  editable: boolean;
+  onChange: (changes: { name?: string; temperatureC?: number; fan?: { blades: number; rpm: number } | null }) => void;
+}
+
+// The run as a whole: name, air temperature, and the fan whose blade-pass tone matters.
+export function RunPanel({ run, editable, onChange }: RunPanelProps) {
+  const [name, setName] = useState(run.name);
+  useEffect(() => setName(run.name), [run.name]);
+  return (
+    <fieldset disabled={!editable} className="space-y-3">
+      <legend className="mb-2 text-sm font-semibold">Run</legend>
+      <div>
+        <label htmlFor="run-name" className="block text-xs font-medium text-graphite-700">Name</label>
+        <input id="run-name" className="field-input mt-0.5 py-1" value={name} onChange={(event) => setName(event.target.value)}
+          onBlur={() => { if (name.trim() && name !== run.name) onChange({ name: name.trim() }); }} />
+      </div>
+      <NumberInput label="Air temperature" unit="°C" value={run.temperatureC} min={-40} max={60} onCommit={(value) => value !== null && onChange({ temperatureC: value })} />
+      <div className="grid grid-cols-2 gap-2">
+        <NumberInput label="Fan blades" value={run.fan?.blades ?? null} min={1} max={100} integer allowEmpty
+          onCommit={(blades) => onChange({ fan: blades === null ? null : { blades, rpm: run.fan?.rpm ?? 1200 } })} />
+        <NumberInput label="Fan speed" unit="rpm" value={run.fan?.rpm ?? null} min={1} max={100000} allowEmpty
+          onCommit={(rpm) => onChange({ fan: rpm === null ? null : { blades: run.fan?.blades ?? 12, rpm } })} />
+      </div>
+      {run.fan && <p className="num text-xs text-graphite-500">Blade-pass tone {((run.fan.blades * run.fan.rpm) / 60).toFixed(1)} Hz (blades × rpm / 60) and its harmonics.</p>}
+    </fieldset>
+  );
+}

@@ -1,0 +1,184 @@
+'use client';
+
+import dynamic from 'next/dynamic';
+import Link from 'next/link';
+import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
+import { findNode, findRun, findSegment, matchKeyBinding, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
+import { formatLength } from '@/lib/plan/units';
+import type { PlanView } from '@/lib/plans/data';
+import type { UnitSystem } from '@/models/user';
+import { BackgroundUpload } from './background-upload';
+import { ConflictDialog } from './dialogs/conflict-dialog';
+import { HelpOverlay } from './dialogs/help-overlay';
+import { ScaleDialog } from './dialogs/scale-dialog';
+import { editorReducer, initialModel, runCommand } from './editor-model';
+import { EndPanel } from './panels/end-panel';
+import { ResultsPanel } from './panels/results-panel';
+import { RunPanel } from './panels/run-panel';
+import { SegmentPanel } from './panels/segment-panel';
+import { SaveStatusLabel } from './save-status';
+import { ToolStrip } from './tool-strip';
+import type { ToolName } from './tools';
+import { useAutosave } from './use-autosave';
+import { gridSpacingPx, useCanvasTools } from './use-canvas-tools';
+import { usePlanResults } from './use-plan-results';
+import { useElementSize } from './use-element-size';
+
+const PlanCanvas = dynamic(() => import('./canvas/plan-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-500">Loading the canvas…</p> });
+
+const TOOL_KEYS: Record<string, ToolName> = { h: 'pan', k: 'scale' };
+
+export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; editable: boolean; unitSystem: UnitSystem }) {
+  const [model, dispatch] = useReducer(editorReducer, plan, (initial) => initialModel(initial.document, initial.version, initial.metresPerPixel));
+  const [tool, setTool] = useState<ToolName>(editable && plan.document.segments.length === 0 ? 'draw' : editable ? 'select' : 'pan');
+  const [helpOpen, setHelpOpen] = useState(false);
+  const [calibrated, setCalibrated] = useState<[Point, Point] | null>(null);
+  const [selectedOrder, setSelectedOrder] = useState<number | null>(null);
+  const [canvasArea, canvasSize] = useElementSize<HTMLDivElement>();
+  const modelRef = useRef(model);
+  modelRef.current = model;
+
+  const { reloadTheirs, overwriteWithMine } = useAutosave(plan.id, model, dispatch, editable);
+  const tools = useCanvasTools(model, dispatch, tool, setCalibrated);
+  const results = usePlanResults(plan.id, model.version);
+  const doc = model.history.present;
+  const formatPosition = useCallback((metres: number) => formatLength(metres, unitSystem, 'run'), [unitSystem]);
+
+  const activeRunId = model.state.activeRunId ?? doc.runs[0]?.id ?? null;
+  const activeResult = results.data?.runs.find((run) => run.runId === activeRunId) ?? results.data?.runs[0] ?? null;
+  const resonance = activeResult?.analysis?.resonances.find((candidate) => candidate.order === selectedOrder) ?? null;
+  useEffect(() => setSelectedOrder(null), [activeRunId]);
+
+  const chooseTool = useCallback((next: ToolName) => { tools.cancel(); setTool(next); }, [tools]);
+
+  useEffect(() => {
+    const onKey = (event: KeyboardEvent) => {
+      const target = event.target as HTMLElement;
+      if (target.closest('input, textarea, select, [contenteditable="true"]')) return;
+      if (event.key === '?') { setHelpOpen((open) => !open); return; }
+      const action = matchKeyBinding(event);
+      const toolKey = !event.ctrlKey && !event.metaKey ? TOOL_KEYS[event.key.toLowerCase()] : undefined;
+      if (toolKey) { chooseTool(toolKey); return; }
+      if (!action) return;
+      event.preventDefault();
+      if (action === 'cancel') { tools.cancel(); setHelpOpen(false); dispatch({ type: 'set-state', state: { ...modelRef.current.state, selection: { nodeIds: [], segmentIds: [] } } }); return; }
+      if (!editable && action !== 'tool-select') return;
+      if (action === 'undo' || action === 'redo') dispatch({ type: action });
+      else if (action === 'delete-selection') runCommand(modelRef.current, dispatch, 'delete-selection', {});
+      else chooseTool(({ 'tool-select': 'select', 'tool-draw': 'draw', 'tool-split': 'split', 'tool-tee': 'tee' } as const)[action]);
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [editable, chooseTool, tools]);
+
+  const onNodeDrag = useCallback((nodeId: string, point: Point, phase: 'move' | 'end') => {
+    if (phase !== 'end') return;
+    const current = modelRef.current;
+    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)) });
+  }, []);
+
+  const selection = model.state.selection;
+  const selectedSegment = selection.segmentIds.length === 1 && selection.nodeIds.length === 0 ? findSegment(doc, selection.segmentIds[0]) : undefined;
+  const selectedNode = selection.nodeIds.length === 1 && selection.segmentIds.length === 0 ? findNode(doc, selection.nodeIds[0]) : undefined;
+  const nodeRun = selectedNode ? runOfNode(doc, selectedNode.id) : null;
+  const nodeTermination = selectedNode && nodeRun ? nodeRun.terminations[selectedNode.id] : undefined;
+  const panelRun = (selectedSegment && runOfSegment(doc, selectedSegment.id)) || nodeRun || (activeRunId ? findRun(doc, activeRunId) ?? null : null);
+
+  const background = useMemo(() => (plan.background && plan.background.widthPx && plan.background.heightPx
+    ? { url: `/api/v1/uploads/${plan.background.id}`, widthPx: plan.background.widthPx, heightPx: plan.background.heightPx }
+    : null), [plan.background]);
+
+  const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
+  const tool_hint = { select: 'Click to select; drag points to move them.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
+
+  return (
+    <div className="flex h-full flex-col">
+      <div className="flex flex-wrap items-center gap-3 border-b border-graphite-100 bg-paper px-4 py-2">
+        <nav aria-label="Breadcrumb" className="text-sm text-graphite-500">
+          <Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}
+          <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
+        </nav>
+        {editable ? <SaveStatusLabel status={model.saveStatus} version={model.version} /> : <span className="rounded bg-paper-sunk px-2 py-0.5 text-xs">Read only</span>}
+        <div className="ml-auto flex items-center gap-2">
+          {editable && (
+            <>
+              <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)">Undo</button>
+              <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)">Redo</button>
+              <BackgroundUpload planId={plan.id} hasBackground={plan.background !== null} />
+            </>
+          )}
+          <span className="num text-xs text-graphite-500" title="Plan scale">1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')}</span>
+          <button type="button" className="btn-quiet" onClick={() => setHelpOpen(true)} aria-label="Keyboard shortcuts">?</button>
+        </div>
+      </div>
+      <div className="flex min-h-0 flex-1">
+        <ToolStrip tool={tool} editable={editable} onTool={chooseTool} />
+        <div className="relative min-w-0 flex-1 bg-paper-sunk" ref={canvasArea}>
+          {canvasSize.width > 0 && (
+            <PlanCanvas
+              document={doc}
+              widthPx={canvasSize.width}
+              heightPx={canvasSize.height}
+              background={background}
+              gridSpacingPx={gridSpacingPx(model.metresPerPixel)}
+              metresPerPixel={model.metresPerPixel}
+              selection={selection}
+              editable={editable && tool === 'select'}
+              panning={tool === 'pan'}
+              mainPath={activeResult?.path ?? []}
+              mode={resonance && activeResult?.analysis ? { resonance, speedOfSoundMps: activeResult.analysis.speedOfSoundMps } : null}
+              preview={tools.feedback.preview}
+              calibration={tools.feedback.calibration}
+              onPointer={tools.onPointer}
+              onNodeDrag={onNodeDrag}
+            />
+          )}
+          <p className="pointer-events-none absolute bottom-2 left-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700">{tool_hint}</p>
+          {model.notice && model.saveStatus !== 'conflict' && (
+            <p role="alert" className="absolute left-1/2 top-2 -translate-x-1/2 rounded border border-risk bg-risk-soft px-3 py-1 text-sm text-risk-ink">
+              {model.notice} <button type="button" className="ml-2 underline" onClick={() => dispatch({ type: 'notice', message: null })}>Dismiss</button>
+            </p>
+          )}
+          {calibrated && (
+            <ScaleDialog points={calibrated} unitSystem={unitSystem}
+              onApply={(metresPerPixel) => { dispatch({ type: 'set-scale', metresPerPixel }); setCalibrated(null); tools.clearCalibration(); chooseTool('select'); }}
+              onCancel={() => { setCalibrated(null); tools.clearCalibration(); }} />
+          )}
+          {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
+          {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
+        </div>
+        <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode ? 'Properties' : 'Results'}>
+          {selectedSegment ? (
+            <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}
+              onSection={(section) => runCommand(model, dispatch, 'set-section', { section })}
+              onLining={(lining) => runCommand(model, dispatch, 'set-lining', { lining })}
+              onLengthOverride={(lengthM) => runCommand(model, dispatch, 'set-length-override', { lengthM })} />
+          ) : selectedNode && nodeRun && nodeTermination ? (
+            <EndPanel key={selectedNode.id} run={nodeRun} nodeId={selectedNode.id} termination={nodeTermination} editable={editable}
+              isChosenEnd={activeResult?.path.at(-1)?.toNodeId === selectedNode.id}
+              onTermination={(termination) => runCommand(model, dispatch, 'set-termination', { nodeId: selectedNode.id, termination })}
+              onChooseEnd={() => runCommand(model, dispatch, 'choose-end', { runId: nodeRun.id, nodeId: selectedNode.id })} />
+          ) : (
+            <div className="space-y-6">
+              {doc.runs.length > 1 && (
+                <div>
+                  <label htmlFor="run-picker" className="block text-xs font-medium text-graphite-700">Results for</label>
+                  <select id="run-picker" className="field-input mt-0.5 py-1" value={activeRunId ?? ''} onChange={(event) => dispatch({ type: 'set-state', state: { ...model.state, activeRunId: event.target.value } })}>
+                    {doc.runs.map((run) => <option key={run.id} value={run.id}>{run.name}</option>)}
+                  </select>
+                </div>
+              )}
+              <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
+                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} />
+            </div>
+          )}
+          {panelRun && (selectedSegment || selectedNode || editable) && (
+            <div className="mt-6 border-t border-graphite-100 pt-4">
+              <RunPanel run={panelRun} editable={editable} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })} />
+            </div>
+          )}
+        </aside>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,108 @@
+// Plans of a team's projects. Every query is scoped by team (through the project).
+import { AppError, notFound } from '@/lib/errors';
+import { emptyDocument, type PlanDocument } from '@/lib/plan/document';
+import { planDocumentSchema } from '@/lib/plan/schema';
+import { sequelize } from '@/lib/db';
+import { Plan, Project, Upload } from '@/models';
+import type { UploadSummary } from '@/lib/uploads/data';
+import type { SavePlanInput } from './schemas';
+
+export interface PlanSummary { id: string; name: string; archived: boolean; version: number; updatedAt: string; hasBackground: boolean }
+
+export interface PlanView {
+  id: string;
+  name: string;
+  archived: boolean;
+  version: number;
+  metresPerPixel: number;
+  document: PlanDocument;
+  background: UploadSummary | null;
+  project: { id: string; name: string };
+  updatedAt: string;
+}
+
+async function projectInTeam(teamId: string, projectId: string): Promise<Project> {
+  const project = await Project.findOne({ where: { id: projectId, teamId } });
+  if (!project) throw notFound('That project');
+  return project;
+}
+
+async function planRowInTeam(teamId: string, planId: string): Promise<Plan & { project?: Project; background?: Upload | null }> {
+  const row = await Plan.findOne({
+    where: { id: planId },
+    include: [
+      { model: Project, as: 'project', where: { teamId }, required: true },
+      { model: Upload, as: 'background', required: false },
+    ],
+  });
+  if (!row) throw notFound('That plan');
+  return row as Plan & { project?: Project; background?: Upload | null };
+}
+
+function toSummary(row: Plan): PlanSummary {
+  return { id: row.id, name: row.name, archived: row.archived, version: row.version, updatedAt: row.updatedAt.toISOString(), hasBackground: row.backgroundUploadId !== null };
+}
+
+export async function listPlans(teamId: string, projectId: string, options: { includeArchived?: boolean } = {}): Promise<PlanSummary[]> {
+  await projectInTeam(teamId, projectId);
+  const rows = await Plan.findAll({
+    where: options.includeArchived ? { projectId } : { projectId, archived: false },
+    attributes: { exclude: ['document'] },
+    order: [['updatedAt', 'DESC']],
+  });
+  return rows.map(toSummary);
+}
+
+export async function createPlan(teamId: string, userId: string, projectId: string, name: string): Promise<PlanSummary> {
+  await projectInTeam(teamId, projectId);
+  const row = await Plan.create({ projectId, name, document: emptyDocument(), updatedById: userId });
+  return toSummary(row);
+}
+
+export async function getPlan(teamId: string, planId: string): Promise<PlanView> {
+  const row = await planRowInTeam(teamId, planId);
+  const background = row.background ?? null;
+  return {
+    id: row.id,
+    name: row.name,
+    archived: row.archived,
+    version: row.version,
+    metresPerPixel: row.metresPerPixel,
+    document: planDocumentSchema.parse(row.document),
+    background: background && {
+      id: background.id, fileName: background.fileName, contentType: background.contentType, bytes: background.bytes, widthPx: background.widthPx, heightPx: background.heightPx,
+    },
+    project: { id: row.project!.id, name: row.project!.name },
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+export async function updatePlanMeta(teamId: string, planId: string, changes: { name?: string; archived?: boolean }): Promise<PlanSummary> {
+  const row = await planRowInTeam(teamId, planId);
+  await row.update(changes);
+  return toSummary(row);
+}
+
+export async function setPlanBackground(teamId: string, planId: string, uploadId: string | null): Promise<void> {
+  const row = await planRowInTeam(teamId, planId);
+  await row.update({ backgroundUploadId: uploadId });
+}
+
+// Saves the drawn document only if nobody saved since `version` was loaded; else 409 and
+// nothing changes, so the editor can keep the person's edits and offer a choice.
+export async function savePlanDocument(teamId: string, userId: string, planId: string, input: SavePlanInput): Promise<{ version: number; updatedAt: string }> {
+  await planRowInTeam(teamId, planId);
+  const [rows] = (await sequelize.query(
+    `update plans set document = :document::jsonb, metres_per_pixel = :metresPerPixel, version = version + 1,
+       updated_by_id = :userId, updated_at = now()
+     where id = :planId and version = :version
+     returning version, updated_at`,
+    { replacements: { document: JSON.stringify(input.document), metresPerPixel: input.metresPerPixel, userId, planId, version: input.version } },
+  )) as [{ version: number; updated_at: Date }[], unknown];
+  const saved = rows[0];
+  if (!saved) {
+    const current = await Plan.findByPk(planId, { attributes: ['version', 'updatedById', 'updatedAt'] });
+    throw new AppError('conflict', `Someone saved this plan after you opened it (now version ${current?.version ?? '?'}, yours is ${input.version}). Your edits are kept: reload their version or overwrite it with yours.`);
+  }
+  return { version: saved.version, updatedAt: new Date(saved.updated_at).toISOString() };
+}

@@ -1,0 +1,53 @@
+// The analysis of every run on a plan, computed from the document (never stored as truth
+// for a draft). A run that cannot be analysed says why instead.
+import { analyzeRun, bladePassHz, type RunAnalysis } from '@/lib/acoustic';
+import type { PlanDocument } from '@/lib/plan/document';
+import { toRunInputWithMap } from '@/lib/plan/to-run-input';
+
+export interface PathPiece { segmentId: string; startM: number; endM: number; fromNodeId: string; toNodeId: string }
+
+export interface RunResult {
+  runId: string;
+  name: string;
+  problem: string | null;
+  analysis: RunAnalysis | null;
+  path: PathPiece[];
+  fanTonesHz: number[];          // blade-pass frequency and its harmonics below the analysis band's top
+  nearFanTone: Record<number, number | null>; // resonance order → nearest fan tone within its bandwidth (or 3 %)
+}
+
+const FAN_HARMONICS = 5;
+const NEAR_TONE_FRACTION = 0.03;
+
+function fanTones(fan: PlanDocument['runs'][number]['fan'], maxHz: number): number[] {
+  if (!fan || fan.blades <= 0 || fan.rpm <= 0) return [];
+  const base = bladePassHz(fan.blades, fan.rpm);
+  return Array.from({ length: FAN_HARMONICS }, (_, index) => base * (index + 1)).filter((hz) => hz <= maxHz * 1.05);
+}
+
+export function analysePlanRun(document: PlanDocument, runId: string, metresPerPixel: number): RunResult {
+  const run = document.runs.find((candidate) => candidate.id === runId);
+  if (!run) throw new RangeError(`runs: no run with id ${runId}`);
+  const base = { runId, name: run.name, fanTonesHz: [] as number[], nearFanTone: {} as Record<number, number | null> };
+  try {
+    const { input, path } = toRunInputWithMap(document, runId, metresPerPixel);
+    const analysis = analyzeRun(input);
+    const tones = fanTones(run.fan, analysis.resonances.at(-1)?.frequencyHz ?? 0);
+    const nearFanTone: Record<number, number | null> = {};
+    for (const resonance of analysis.resonances) {
+      const window = Math.max((resonance.bandwidthHz ?? 0) / 2, resonance.frequencyHz * NEAR_TONE_FRACTION);
+      const near = tones.find((tone) => Math.abs(tone - resonance.frequencyHz) <= window);
+      nearFanTone[resonance.order] = near ?? null;
+    }
+    return { ...base, problem: null, analysis, path, fanTonesHz: tones, nearFanTone };
+  } catch (error) {
+    if (error instanceof Error && !(error instanceof TypeError)) {
+      return { ...base, problem: error.message, analysis: null, path: [] };
+    }
+    throw error;
+  }
+}
+
+export function analysePlan(document: PlanDocument, metresPerPixel: number): RunResult[] {
+  return document.runs.map((run) => analysePlanRun(document, run.id, metresPerPixel));
+}

@@ -1,0 +1,19 @@
+import { z } from 'zod';
+import { planDocumentSchema } from '@/lib/plan/schema';
+
+// Shared by the plan forms and their routes.
+export const planNameSchema = z.string({ error: 'Give the plan a name.' }).trim().min(1, 'Give the plan a name.').max(160, 'Keep the name under 160 characters.');
+
+export const newPlanSchema = z.object({ name: planNameSchema });
+export type NewPlanInput = z.input<typeof newPlanSchema>;
+
+export const planMetaSchema = z
+  .object({ name: planNameSchema.optional(), archived: z.boolean({ error: 'archived must be true or false' }).optional() })
+  .refine((value) => value.name !== undefined || value.archived !== undefined, 'Send a name or archived.');
+
+export const savePlanSchema = z.object({
+  version: z.number({ error: 'version must be the plan version you loaded' }).int().positive(),
+  metresPerPixel: z.number({ error: 'metresPerPixel must be a number' }).positive('metresPerPixel must be > 0').max(100, 'metresPerPixel must be <= 100'),
+  document: planDocumentSchema,
+});
+export type SavePlanInput = z.infer<typeof savePlanSchema>;

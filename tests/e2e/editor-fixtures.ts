@@ -1,0 +1,38 @@
+// Helpers for plan editor browser tests.
+import { expect, type Page } from '@playwright/test';
+import { Project } from '@/models';
+import { createPerson, createTeam, signIn } from './fixtures';
+
+export async function acousticianWithProject(label: string) {
+  const team = await createTeam(`${label} team`);
+  const { email, user } = await createPerson(`${label}-acoustician`, [{ team, role: 'acoustician' }]);
+  const project = await Project.create({ teamId: team.id, name: `${label} project`, site: '', createdById: user.id });
+  return { team, email, user, project };
+}
+
+export async function openNewPlan(page: Page, email: string, projectId: string, planName: string): Promise<string> {
+  await signIn(page, email);
+  await page.goto(`/projects/${projectId}`);
+  await page.getByPlaceholder(/New plan name/).fill(planName);
+  await page.getByRole('button', { name: 'Add plan' }).click();
+  await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
+  await expect(page.locator('canvas').first()).toBeVisible();
+  return page.url().split('/plans/')[1];
+}
+
+export async function canvasBox(page: Page) {
+  const box = await page.locator('[data-testid="plan-canvas"] canvas, .konvajs-content canvas').first().boundingBox();
+  if (!box) throw new Error('the canvas is not on the page');
+  return box;
+}
+
+// Clicks with Shift held so that grid and angle snapping stay out of the way.
+export async function exactClick(page: Page, x: number, y: number): Promise<void> {
+  await page.keyboard.down('Shift');
+  await page.mouse.click(x, y);
+  await page.keyboard.up('Shift');
+}
+
+export async function waitForSaved(page: Page): Promise<void> {
+  await expect(page.getByTestId('save-status')).toContainText('All changes saved');
+}
