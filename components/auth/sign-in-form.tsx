@@ -34,6 +34,7 @@ export function SignInForm({ next }: { next?: string }) {
       <button type="submit" className="btn-primary w-full" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? 'Signing in…' : 'Sign in'}
       </button>
+      <p className="text-center text-sm"><Link href="/forgotten-password" className="text-select-ink underline">Forgotten your password?</Link></p>
       <p className="text-center text-sm text-graphite-500">
         New to Antinode? <Link href="/sign-up" className="text-select-ink underline">Create an account and team</Link>
       </p>

@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import type { Actor } from '@/lib/auth/actor';
+import { can } from '@/lib/permissions';
 import { AccountMenu } from './account-menu';
 import { TeamSwitcher } from './team-switcher';
 import { Wordmark } from './wordmark';
@@ -11,6 +12,9 @@ export function AppHeader({ actor }: { actor: Actor }) {
         <Wordmark href="/projects" />
         <nav aria-label="Main" className="flex items-center gap-4 text-sm">
           <Link href="/projects" className="text-graphite-700 hover:text-graphite">Projects</Link>
+          {actor.team && can(actor.team.role, 'members.manage') && (
+            <Link href="/team" className="text-graphite-700 hover:text-graphite">Team settings</Link>
+          )}
         </nav>
         <div className="ml-auto flex items-center gap-4">
           <TeamSwitcher teams={actor.memberships} activeTeamId={actor.team?.teamId ?? null} />

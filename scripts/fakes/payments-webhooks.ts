@@ -1,6 +1,6 @@
 // The payment fake's webhooks: signed like the real service (HMAC-SHA256 over
 // "timestamp.payload" in the Stripe-Signature header), sent one at a time to the app. Tests
-// may hold a customer's webhooks and release them later.
+// may hold the webhooks of customers with a given e-mail and release them later.
 import { createHmac } from 'node:crypto';
 import { fakeId, now } from './payments-store';
 
@@ -14,28 +14,26 @@ export function signPayload(payload: string, secret: string, timestamp = now()):
 const RETRIES = 3;
 
 export class WebhookSender {
-  private readonly held = new Map<string, FakeEvent[]>(); // by customer id
+  private readonly held = new Map<string, FakeEvent[]>(); // by customer e-mail
   private readonly holding = new Set<string>();
   private queue: Promise<void> = Promise.resolve();
 
   constructor(private readonly target: string, private readonly secret: string) {}
 
-  emit(customerId: string, type: string, object: unknown): void {
+  emit(customerEmail: string | null, type: string, object: unknown): void {
     const event: FakeEvent = { id: fakeId('evt'), object: 'event', type, created: now(), livemode: false, api_version: '2026-10-28.endive', data: { object } };
-    if (this.holding.has(customerId)) { this.held.set(customerId, [...(this.held.get(customerId) ?? []), event]); return; }
+    if (customerEmail && this.holding.has(customerEmail)) { this.held.set(customerEmail, [...(this.held.get(customerEmail) ?? []), event]); return; }
     this.enqueue(event);
   }
 
-  hold(customerIds: string[]): void { for (const id of customerIds) this.holding.add(id); }
+  hold(email: string): void { this.holding.add(email); }
 
-  release(customerIds: string[]): number {
-    let count = 0;
-    for (const id of customerIds) {
-      this.holding.delete(id);
-      for (const event of this.held.get(id) ?? []) { this.enqueue(event); count += 1; }
-      this.held.delete(id);
-    }
-    return count;
+  release(email: string): number {
+    const events = this.held.get(email) ?? [];
+    this.holding.delete(email);
+    this.held.delete(email);
+    for (const event of events) this.enqueue(event);
+    return events.length;
   }
 
   private enqueue(event: FakeEvent): void {

@@ -37,6 +37,7 @@ function invoiceFor(subscription: FakeSubscription, paid: boolean): Record<strin
 }
 
 export function paymentsApp(store: PaymentsStore, webhooks: WebhookSender) {
+  const emit = (customerId: string, type: string, object: unknown) => webhooks.emit(store.customer(customerId)?.email ?? null, type, object);
   const routes: { method: string; pattern: RegExp; handle: (match: RegExpMatchArray, form: Form) => unknown }[] = [
     { method: 'POST', pattern: /^\/v1\/customers$/, handle: (_, form) => store.putCustomer({
       id: fakeId('cus'), object: 'customer', email: text(form.email) ?? null, name: text(form.name) ?? null, metadata: record(form.metadata), created: now(),
@@ -50,8 +51,8 @@ export function paymentsApp(store: PaymentsStore, webhooks: WebhookSender) {
         id: fakeId('sub'), object: 'subscription', customer, status: 'active', metadata: record(form.metadata), created: now(),
         items: { object: 'list', data: [seatItem(fakeId('si'), text(item.price) ?? 'price_unknown', quantityOf(item))] },
       });
-      webhooks.emit(customer, 'customer.subscription.created', subscription);
-      webhooks.emit(customer, 'invoice.paid', invoiceFor(subscription, true));
+      emit(customer, 'customer.subscription.created', subscription);
+      emit(customer, 'invoice.paid', invoiceFor(subscription, true));
       return subscription;
     } },
     { method: 'GET', pattern: /^\/v1\/subscriptions\/(\w+)$/, handle: ([, id]) => store.subscription(id) ?? notFound('subscription', id) },
@@ -62,21 +63,22 @@ export function paymentsApp(store: PaymentsStore, webhooks: WebhookSender) {
       const existing = subscription.items.data.find((entry) => entry.id === text(item.id)) ?? subscription.items.data[0];
       existing.quantity = quantityOf(item);
       store.putSubscription(subscription);
-      webhooks.emit(subscription.customer, 'customer.subscription.updated', subscription);
+      emit(subscription.customer, 'customer.subscription.updated', subscription);
       return subscription;
     } },
     { method: 'DELETE', pattern: /^\/v1\/subscriptions\/(\w+)$/, handle: ([, id]) => {
       const subscription = store.subscription(id) ?? notFound('subscription', id);
       subscription.status = 'canceled';
       store.putSubscription(subscription);
-      webhooks.emit(subscription.customer, 'customer.subscription.deleted', subscription);
+      emit(subscription.customer, 'customer.subscription.deleted', subscription);
       return subscription;
     } },
     // Test controls, by the customer's e-mail: hold and release webhooks, settle an invoice.
     { method: 'POST', pattern: /^\/_fake\/(hold|release)$/, handle: ([, verb], form) => {
-      const ids = store.customersByEmail(text(form.email) ?? '').map((customer) => customer.id);
-      if (verb === 'hold') { webhooks.hold(ids); return { holding: ids }; }
-      return { released: webhooks.release(ids) };
+      const email = text(form.email);
+      if (!email) throw new FakeError(400, 'email is required');
+      if (verb === 'hold') { webhooks.hold(email); return { holding: email }; }
+      return { released: webhooks.release(email) };
     } },
     { method: 'POST', pattern: /^\/_fake\/invoices$/, handle: (_, form) => {
       const paid = text(form.outcome) !== 'failed';
@@ -84,7 +86,7 @@ export function paymentsApp(store: PaymentsStore, webhooks: WebhookSender) {
       for (const subscription of subscriptions) {
         subscription.status = paid ? 'active' : 'past_due';
         store.putSubscription(subscription);
-        webhooks.emit(subscription.customer, paid ? 'invoice.paid' : 'invoice.payment_failed', invoiceFor(subscription, paid));
+        emit(subscription.customer, paid ? 'invoice.paid' : 'invoice.payment_failed', invoiceFor(subscription, paid));
       }
       return { invoices: subscriptions.length };
     } },
@@ -123,7 +125,8 @@ export async function startPaymentsFake(profile: FakeProfile): Promise<() => Pro
   const env = environmentFor(profile);
   const store = new PaymentsStore(profile.paymentsStateFile);
   const webhooks = new WebhookSender(env.PAYMENTS_WEBHOOK_URL, env.STRIPE_WEBHOOK_SECRET);
-  const server = createServer((request, response) => { void paymentsApp(store, webhooks)(request, response); });
+  const handle = paymentsApp(store, webhooks);
+  const server = createServer((request, response) => { void handle(request, response); });
   await new Promise<void>((resolve, reject) => { server.once('error', reject); server.listen(profile.paymentsPort, '127.0.0.1', resolve); });
   return () => new Promise<void>((resolve) => server.close(() => resolve()));
 }

@@ -1,4 +1,6 @@
 import type { Metadata } from 'next';
+import { EmailChangeForm } from '@/components/account/email-change-form';
+import { PasswordChangeForm } from '@/components/account/password-change-form';
 import { SignOutEverywhere } from '@/components/shell/sign-out-everywhere';
 import { requireActor } from '@/lib/auth/current';
 import { ROLE_LABELS } from '@/lib/permissions';
@@ -17,6 +19,16 @@ export default async function AccountPage() {
           <dt className="text-graphite-500">E-mail</dt><dd>{actor.user.email}</dd>
           <dt className="text-graphite-500">Units</dt><dd>{actor.user.unitSystem === 'si' ? 'SI (metres, °C)' : 'Imperial (feet and inches, °F)'}</dd>
         </dl>
+      </section>
+      <section className="panel p-6" aria-labelledby="email-title">
+        <h2 id="email-title" className="mb-1 font-semibold">E-mail</h2>
+        <p className="mb-3 text-sm text-graphite-500">You sign in with this address and mail from Antinode goes to it.</p>
+        <EmailChangeForm email={actor.user.email} />
+      </section>
+      <section className="panel p-6" aria-labelledby="password-title">
+        <h2 id="password-title" className="mb-1 font-semibold">Password</h2>
+        <p className="mb-3 text-sm text-graphite-500">Changing it signs out your other sessions; this one stays.</p>
+        <PasswordChangeForm />
       </section>
       <section className="panel p-6" aria-labelledby="teams-title">
         <h2 id="teams-title" className="mb-3 font-semibold">Teams</h2>

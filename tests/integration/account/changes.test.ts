@@ -1,0 +1,32 @@
+import { afterAll, describe, expect, it } from 'vitest';
+import { changeEmail, changePassword } from '@/lib/account/changes';
+import { signIn, startSession } from '@/lib/auth/accounts';
+import { sequelize } from '@/lib/db';
+import { AppError } from '@/lib/errors';
+import { Session } from '@/models';
+import { createTestTeam, TEST_PASSWORD, uniqueEmail } from '../helpers/people';
+
+afterAll(async () => { await sequelize.close(); });
+
+describe('account changes', () => {
+  it('a new password needs the current one, and ends every other session', async () => {
+    const { team, members } = await createTestTeam('change-pw');
+    const user = members.architect;
+    const kept = await startSession(user.id, team.id);
+    await startSession(user.id, team.id);
+    await expect(changePassword(user.id, kept.value, 'not it', 'a new long password')).rejects.toMatchObject({ code: 'wrong_credentials', field: 'currentPassword' });
+    await changePassword(user.id, kept.value, TEST_PASSWORD, 'a new long password');
+    expect((await Session.findAll({ where: { userId: user.id } })).map((session) => session.id)).toEqual([kept.value]);
+    await expect(signIn(user.email, 'a new long password', null)).resolves.toMatchObject({ name: 'antinode_session' });
+  });
+
+  it('a new e-mail needs the current password and must be free', async () => {
+    const { members } = await createTestTeam('change-email');
+    const taken = members.viewer.email;
+    await expect(changeEmail(members.engineer.id, TEST_PASSWORD, taken)).rejects.toMatchObject({ code: 'conflict', field: 'email' });
+    await expect(changeEmail(members.engineer.id, 'wrong', uniqueEmail('new'))).rejects.toBeInstanceOf(AppError);
+    const fresh = uniqueEmail('moved');
+    await expect(changeEmail(members.engineer.id, TEST_PASSWORD, fresh)).resolves.toBe(fresh);
+    await expect(signIn(fresh, TEST_PASSWORD, null)).resolves.toMatchObject({ name: 'antinode_session' });
+  });
+});
