@@ -3,10 +3,11 @@
 import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
-import { findNode, findRun, findSegment, matchKeyBinding, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
+import { findNode, findRun, findSegment, matchKeyBinding, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
 import { formatLength } from '@/lib/plan/units';
 import type { PlanView } from '@/lib/plans/data';
 import type { UnitSystem } from '@/models/user';
+import { UnitSystemToggle } from '@/components/shell/unit-system-toggle';
 import { BackgroundUpload } from './background-upload';
 import { ConflictDialog } from './dialogs/conflict-dialog';
 import { HelpOverlay } from './dialogs/help-overlay';
@@ -17,6 +18,7 @@ import { ResultsPanel } from './panels/results-panel';
 import { RunPanel } from './panels/run-panel';
 import { SegmentPanel } from './panels/segment-panel';
 import { SaveStatusLabel } from './save-status';
+import { ScheduleCsvControls } from './schedule-csv-controls';
 import { ToolStrip } from './tool-strip';
 import type { ToolName } from './tools';
 import { useAutosave } from './use-autosave';
@@ -107,6 +109,7 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
               <BackgroundUpload planId={plan.id} hasBackground={plan.background !== null} />
             </>
           )}
+          <UnitSystemToggle unitSystem={unitSystem} />
           <span className="num text-xs text-graphite-500" title="Plan scale">1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')}</span>
           <button type="button" className="btn-quiet" onClick={() => setHelpOpen(true)} aria-label="Keyboard shortcuts">?</button>
         </div>
@@ -168,6 +171,8 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
                   </select>
                 </div>
               )}
+              <ScheduleCsvControls document={doc} runId={activeRunId} runName={(activeRunId && findRun(doc, activeRunId)?.name) || 'run'} metresPerPixel={model.metresPerPixel} editable={editable}
+                onApply={(document) => dispatch({ type: 'apply', document, state: normalizeState(document, model.state) })} />
               <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
                 selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} />
             </div>

@@ -18,6 +18,7 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/analyze': 'signed-in',
   'GET /api/v1/health': 'public',
   'GET /api/v1/me': 'signed-in',
+  'PUT /api/v1/me/preferences': 'signed-in',
   'GET /api/v1/projects': 'project.read',
   'POST /api/v1/projects': 'project.create',
   'POST /api/v1/sessions': 'public',
