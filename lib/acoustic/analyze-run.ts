@@ -6,6 +6,7 @@ import { compileNetwork } from './network/compile';
 import { NetworkEvaluator } from './network/evaluator';
 import { discontinuityReflections } from './reflections';
 import { modeShape } from './resonances/mode-shape';
+import { attachLazyEnvelope } from './resonances/lazy-envelope';
 import { findNaturalFrequencies } from './resonances/natural-frequencies';
 import { cutoffHz } from './section';
 import type { Resonance, RunAnalysis, RunInput, Segment } from './types';
@@ -15,7 +16,9 @@ const DEFAULT_MAX_ECHOES = 40;
 const DEFAULT_ECHO_THRESHOLD = 1e-3;
 const MAX_ECHO_WAVEFRONTS = 200000;
 /** Scan points per mean mode spacing c / (2 L). */
-const SCAN_POINTS_PER_MODE_SPACING = 3;
+const SCAN_POINTS_PER_MODE_SPACING = 2;
+/** At least this many scan points across the analysed range, however sparse the modes. */
+const MIN_SCAN_POINTS = 16;
 /** Modes whose damping is below this fraction of their frequency count as undamped (Q null). */
 const UNDAMPED_FRACTION = 1e-9;
 
@@ -48,11 +51,12 @@ export function analyzeRun(input: RunInput): RunAnalysis {
   let resonances: Resonance[] = [];
   if (maxHz > minHz) {
     const endCorrectionsM = network.terminations.reduce((sum, termination) => sum + termination.lowFrequencyEndCorrectionM, 0);
-    const scanStepHz = speedOfSoundMps / (2 * (network.totalLengthM + endCorrectionsM)) / SCAN_POINTS_PER_MODE_SPACING;
+    const modeSpacingHz = speedOfSoundMps / (2 * (network.totalLengthM + endCorrectionsM));
+    const scanStepHz = Math.min(modeSpacingHz / SCAN_POINTS_PER_MODE_SPACING, (maxHz - minHz) / MIN_SCAN_POINTS);
     resonances = findNaturalFrequencies(evaluator, { minHz, maxHz, scanStepHz }).map((zero, index) => {
       const damped = zero.dampingHz > UNDAMPED_FRACTION * zero.frequencyHz;
       const shape = modeShape(evaluator, zero.frequencyHz);
-      return {
+      return attachLazyEnvelope({
         order: index + 1,
         frequencyHz: zero.frequencyHz,
         // Q = fr / (2 fi) and the -3 dB bandwidth 2 fi of a single pole at fr + j fi (Kinsler & Frey, ch. 1, damped oscillator)
@@ -61,7 +65,7 @@ export function analyzeRun(input: RunInput): RunAnalysis {
         antinodesM: shape.antinodesM,
         nodesM: shape.nodesM,
         dampingHz: zero.dampingHz,
-      };
+      }, evaluator);
     });
   } else {
     warnings.push(`no frequency range to analyse: maxHz (${formatHz(maxHz)}) is not above minHz (${formatHz(minHz)})`);

@@ -4,6 +4,7 @@ export type { AirProperties } from './air';
 export { analyzeRun } from './analyze-run';
 export { startAdmittanceSweep, createAdmittanceSweeper } from './network/sweep';
 export type { AdmittanceSweeper } from './network/sweep';
+export type { CompileOptions } from './network/compile';
 export { roomModes } from './room-modes';
 export { endReflectionLoss } from './end-reflection-loss';
 export { ncRating } from './nc-rating';
@@ -33,6 +34,7 @@ export type {
   Branch,
   RunInput,
   Resonance,
+  PressureEnvelopePoint,
   Reflection,
   ReflectionBand,
   Echo,

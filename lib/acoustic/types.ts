@@ -53,6 +53,16 @@ export interface Resonance {
   nodesM: number[];
   /** Imaginary part of the complex natural frequency (decay rate / 2π), Hz. */
   dampingHz: number;
+  /**
+   * |p(x)| / max |p| along the main path (positionM from the start end), from the closed-form standing
+   * wave in each segment: every segment boundary plus at least 12 samples per half wavelength, about 400 at most.
+   */
+  pressureEnvelope?: PressureEnvelopePoint[];
+}
+
+export interface PressureEnvelopePoint {
+  positionM: number;
+  relative: number;
 }
 
 export interface ReflectionBand {

@@ -7,6 +7,9 @@ import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
 import { sabineLinedDuctNpPerM } from '../lining-attenuation';
 import { kirchhoffAttenuationPerSqrtHz } from '../wall-losses';
 import type { RunInput, Segment, Termination } from '../types';
+import { mergeMainStretches, sameUniformDuct, type MainStretch } from './uniform-stretches';
+
+export type { MainStretch } from './uniform-stretches';
 
 /** Push the state of a termination (an outward end) onto the stack. Operand: termination index. */
 export const OP_TERMINATION = 0;
@@ -57,15 +60,28 @@ export interface CompiledNetwork {
   /** Main-path segment indices, start to end, and the branches at each one's far end. */
   mainSegments: number[];
   mainBranches: CompiledBranch[][];
+  /** The main path as uniform stretches (merged like the program's segment ops), start to end. */
+  mainStretches: MainStretch[];
   /** Nested branches of each branch segment (index by segment). */
   branchesAtSegment: Map<number, CompiledBranch[]>;
   mainLengthM: number;
   totalLengthM: number;
 }
 
+export interface CompileOptions {
+  /**
+   * Carry consecutive segments of the same section and lining (no tee between them) as one segment of
+   * their summed length (default true): exact, the transfer matrices of a uniform duct compose by adding lengths.
+   */
+  mergeUniformStretches?: boolean;
+}
+
 interface Builder {
   network: CompiledNetwork;
   ops: number[];
+  /** Length carried by each op (summed over merged segments); 0 for other ops. */
+  opLengths: number[];
+  mergeUniform: boolean;
   lengths: number[];
   areas: number[];
   impedances: number[];
@@ -109,12 +125,26 @@ interface CompiledChain {
   branches: CompiledBranch[][];
 }
 
+function pushOp(builder: Builder, code: number, operand: number, lengthM = 0): void {
+  builder.ops.push(code, operand);
+  builder.opLengths.push(lengthM);
+}
+
+/** Emits a segment op, or lengthens the previous one when it is the same uniform duct. */
+function pushSegmentOp(builder: Builder, segment: number): void {
+  const last = builder.ops.length - 2;
+  const previous = builder.ops[last + 1];
+  const mergeable = builder.mergeUniform && last >= 0 && builder.ops[last] === OP_SEGMENT && sameUniformDuct(builder, previous, segment);
+  if (mergeable) builder.opLengths[last / 2] += builder.lengths[segment];
+  else pushOp(builder, OP_SEGMENT, segment, builder.lengths[segment]);
+}
+
 /** Emits the program of one chain (main path or branch), outermost end first. */
 function compileChain(builder: Builder, segments: Segment[], end: Termination, wallLosses: boolean): CompiledChain {
   const indices = segments.map((segment) => addSegment(builder, segment, wallLosses));
   const endTermination = addTermination(builder, end, segments[segments.length - 1]);
   const branchLists: CompiledBranch[][] = segments.map(() => []);
-  builder.ops.push(OP_TERMINATION, endTermination);
+  pushOp(builder, OP_TERMINATION, endTermination);
   let depth = 1;
   for (let position = segments.length - 1; position >= 0; position--) {
     for (const branch of segments[position].branches ?? []) {
@@ -129,16 +159,16 @@ function compileChain(builder: Builder, segments: Segment[], end: Termination, w
         segments: chain.segments,
         endTermination: chain.endTermination,
       });
-      builder.ops.push(OP_SHUNT, 0);
+      pushOp(builder, OP_SHUNT, 0);
       depth = Math.max(depth, 1 + chain.depth);
     }
-    builder.ops.push(OP_SEGMENT, indices[position]);
+    pushSegmentOp(builder, indices[position]);
   }
   return { depth, segments: indices, endTermination, branches: branchLists };
 }
 
 /** Compiles a validated run. */
-export function compileNetwork(input: RunInput): CompiledNetwork {
+export function compileNetwork(input: RunInput, options: CompileOptions = {}): CompiledNetwork {
   const air = airProperties(input.temperatureC ?? DEFAULT_TEMPERATURE_C);
   const network: CompiledNetwork = {
     air,
@@ -160,17 +190,21 @@ export function compileNetwork(input: RunInput): CompiledNetwork {
     endTermination: 0,
     mainSegments: [],
     mainBranches: [],
+    mainStretches: [],
     branchesAtSegment: new Map(),
     mainLengthM: 0,
     totalLengthM: 0,
   };
-  const builder: Builder = { network, ops: [], lengths: [], areas: [], impedances: [], kirchhoff: [], liningNp: [], liningDb: [] };
+  const builder: Builder = { network, ops: [], opLengths: [], mergeUniform: options.mergeUniformStretches ?? true, lengths: [], areas: [], impedances: [], kirchhoff: [], liningNp: [], liningDb: [] };
   network.startTermination = addTermination(builder, input.start, input.segments[0]);
   const wallLosses = input.wallLosses ?? true;
   const mainChain = compileChain(builder, input.segments, input.end, wallLosses);
   network.stackDepth = mainChain.depth;
   network.mainSegments = mainChain.segments;
   network.mainBranches = mainChain.branches;
+  network.mainStretches = builder.mergeUniform
+    ? mergeMainStretches(builder, mainChain.segments, mainChain.branches)
+    : mainChain.segments.map((segment, position) => ({ segment, lengthM: builder.lengths[segment], branches: mainChain.branches[position] }));
   network.endTermination = mainChain.endTermination;
   network.program = Int32Array.from(builder.ops);
   network.segmentLengthM = Float64Array.from(builder.lengths);
@@ -183,7 +217,7 @@ export function compileNetwork(input: RunInput): CompiledNetwork {
     Float64Array.from({ length: builder.ops.length / 2 }, (_, position) =>
       builder.ops[2 * position] === OP_SEGMENT ? values[builder.ops[2 * position + 1]] : 0,
     );
-  network.opLengthM = byOp(network.segmentLengthM);
+  network.opLengthM = Float64Array.from(builder.opLengths);
   network.opImpedance = byOp(network.segmentImpedance);
   network.opKirchhoffPerSqrtHz = byOp(network.segmentKirchhoffPerSqrtHz);
   network.opLiningNpPerM = byOp(network.segmentLiningNpPerM);

@@ -1,6 +1,7 @@
 // Inner loops of the transfer-matrix chain: carry the state inward through a run of consecutive
 // segment ops, holding it in locals, with hand-written complex arithmetic and no allocation.
 import { OP_SEGMENT, type CompiledNetwork } from './compile';
+import { SMALL_GROWTH } from './complex-trig';
 
 /** Per-frequency factors shared by all segments: k0 = 2 pi f / c, (1 - j) sqrt(f) and its derivative (1 - j) / (2 sqrt(f)). */
 export interface WaveFactors {
@@ -32,9 +33,18 @@ export function propagateSegments(network: CompiledNetwork, stack: Float64Array,
     const growth = (freeIm + loss * layerIm - lining[segment]) * lengthM;
     const cosPhase = Math.cos(phase);
     const sinPhase = Math.sin(phase);
-    const expGrowth = Math.exp(growth);
-    const coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
-    const sinhGrowth = coshGrowth - 1 / expGrowth;
+    let coshGrowth: number;
+    let sinhGrowth: number;
+    if (growth < SMALL_GROWTH && growth > -SMALL_GROWTH) {
+      // Taylor series of cosh and sinh, as in complex-trig.ts; written out so the hot loop keeps them in registers (a call through a scratch array costs ~10 %)
+      const squared = growth * growth;
+      coshGrowth = 1 + squared * (0.5 + squared * (1 / 24 + squared * (1 / 720 + squared / 40320)));
+      sinhGrowth = growth * (1 + squared * (1 / 6 + squared * (1 / 120 + squared * (1 / 5040 + squared / 362880))));
+    } else {
+      const expGrowth = Math.exp(growth);
+      coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
+      sinhGrowth = coshGrowth - 1 / expGrowth;
+    }
     // cos(kL) and sin(kL) for complex kL
     const cosRe = cosPhase * coshGrowth;
     const cosIm = -sinPhase * sinhGrowth;
@@ -90,9 +100,18 @@ top: number,
     const growth = (freeIm + loss * layerIm - lining[segment]) * lengthM;
     const cosPhase = Math.cos(phase);
     const sinPhase = Math.sin(phase);
-    const expGrowth = Math.exp(growth);
-    const coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
-    const sinhGrowth = coshGrowth - 1 / expGrowth;
+    let coshGrowth: number;
+    let sinhGrowth: number;
+    if (growth < SMALL_GROWTH && growth > -SMALL_GROWTH) {
+      // Taylor series of cosh and sinh, as in complex-trig.ts; written out so the hot loop keeps them in registers (a call through a scratch array costs ~10 %)
+      const squared = growth * growth;
+      coshGrowth = 1 + squared * (0.5 + squared * (1 / 24 + squared * (1 / 720 + squared / 40320)));
+      sinhGrowth = growth * (1 + squared * (1 / 6 + squared * (1 / 120 + squared * (1 / 5040 + squared / 362880))));
+    } else {
+      const expGrowth = Math.exp(growth);
+      coshGrowth = 0.5 * (expGrowth + 1 / expGrowth);
+      sinhGrowth = coshGrowth - 1 / expGrowth;
+    }
     const cosRe = cosPhase * coshGrowth;
     const cosIm = -sinPhase * sinhGrowth;
     const sinRe = sinPhase * coshGrowth;

@@ -1,22 +1,28 @@
 // Frequency sweep of the transfer-matrix chain: the admittance seen from the start end looking into the run.
 import type { RunInput } from '../types';
 import { validateRun } from '../validate-run';
-import { compileNetwork } from './compile';
+import { OP_SEGMENT, compileNetwork, type CompileOptions } from './compile';
 import { NetworkEvaluator } from './evaluator';
 
 /** A compiled run ready for repeated sweeps (compile once, sweep many times). */
 export interface AdmittanceSweeper {
   segmentCount: number;
+  /** Segment ops the chain runs per frequency (fewer than segmentCount when uniform stretches are merged). */
+  chainLength: number;
   /** Writes Re and Im of U/p at the start end (U into the run), interleaved, for each real frequency. */
   sweep(frequenciesHz: Float64Array, out: Float64Array): void;
 }
 
-export function createAdmittanceSweeper(input: RunInput): AdmittanceSweeper {
+export function createAdmittanceSweeper(input: RunInput, options: CompileOptions = {}): AdmittanceSweeper {
   validateRun(input);
-  const evaluator = new NetworkEvaluator(compileNetwork(input));
+  const evaluator = new NetworkEvaluator(compileNetwork(input, options));
+  const program = evaluator.network.program;
+  let chainLength = 0;
+  for (let op = 0; op < program.length; op += 2) if (program[op] === OP_SEGMENT) chainLength++;
   const programLength = evaluator.network.program.length;
   return {
     segmentCount: evaluator.network.segmentLengthM.length,
+    chainLength,
     sweep(frequenciesHz: Float64Array, out: Float64Array): void {
       for (let index = 0; index < frequenciesHz.length; index++) {
         const slot = evaluator.run(0, programLength, frequenciesHz[index], 0, false);

@@ -1,4 +1,4 @@
-// Pressure nodes and antinodes of a resonance along the main path.
+// Pressure nodes, antinodes and the pressure envelope of a resonance along the main path.
 //
 // At the resonance frequency the state (p, U) leaves the start end satisfying the start's boundary
 // condition, p = Zc (1 + Rs), U = -(1 - Rs), U towards the end; each segment carries it outward with
@@ -7,22 +7,45 @@
 //   |p(x)|^2 = M + C cos 2kx + S sin 2kx,  C = (|p0|^2 - |Zc U0|^2)/2,  S = Re(p0 conj(-j Zc U0)),
 // whose maxima lie at 2kx = atan2(S, C) + 2 m pi and minima half a period later (Kinsler & Frey,
 // Fundamentals of Acoustics, ch. 10, standing waves). Extrema at kinks where sections change are not reported.
+// The envelope samples |p(x)| itself, with the segment's complex k (losses included).
 import { terminationReflection } from '../terminations';
 import type { NetworkEvaluator } from '../network/evaluator';
+import { complexCosSin } from '../network/complex-trig';
+import type { PressureEnvelopePoint } from '../types';
+import { EnvelopeSampler } from './pressure-envelope';
 
 export interface ModeShape {
   antinodesM: number[];
   nodesM: number[];
+  /** Only when a sampler is given. */
+  pressureEnvelope?: PressureEnvelopePoint[];
 }
 
 /** Standing-wave ratio below which the wave is treated as travelling (no nodes). */
 const MIN_STANDING_FRACTION = 1e-6;
+/** Extrema this close to the run's ends (in wavelengths) are snapped onto them. */
+const END_SNAP_WAVELENGTHS = 1 / 100;
+/** Extrema closer than this (in wavelengths) are one. */
+const SAME_EXTREMUM_WAVELENGTHS = 1 / 1000;
+/** Inner segment ends: extrema within this distance, m, count as inside the segment. */
+const INNER_END_TOLERANCE_M = 1e-9;
 
 function pushUnique(list: number[], positionM: number, toleranceM: number): void {
   if (list.length === 0 || Math.abs(list[list.length - 1] - positionM) > toleranceM) list.push(positionM);
 }
 
-export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number): ModeShape {
+/** Appends the extrema firstX + m period inside [-lowTolerance, lengthM + highTolerance], clamped to the segment. */
+function pushExtrema(list: number[], firstX: number, period: number, lengthM: number, offsetM: number, lowTolerance: number, highTolerance: number, sameM: number): void {
+  const firstIndex = Math.ceil((-lowTolerance - firstX) / period);
+  for (let index = firstIndex; firstX + index * period <= lengthM + highTolerance; index++) {
+    const x = Math.min(lengthM, Math.max(0, firstX + index * period));
+    pushUnique(list, offsetM + x, sameM);
+  }
+}
+
+const trig = new Float64Array(4);
+
+export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, sampler?: EnvelopeSampler): ModeShape {
   const network = evaluator.network;
   const start = network.terminations[network.startTermination];
   const reflection = terminationReflection(start.termination, { re: frequencyHz, im: 0 }, start.radiusM, network.speedOfSoundMps);
@@ -32,14 +55,20 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number): Mod
   let uIm = reflection.im;
   const wavenumberPerHz = (2 * Math.PI) / network.speedOfSoundMps;
   const wavelengthM = network.speedOfSoundMps / frequencyHz;
-  const endToleranceM = wavelengthM / 100;
+  const endToleranceM = wavelengthM * END_SNAP_WAVELENGTHS;
+  const sameM = wavelengthM * SAME_EXTREMUM_WAVELENGTHS;
   const antinodesM: number[] = [];
   const nodesM: number[] = [];
+  const stretches = network.mainStretches;
+  sampler?.reset(wavelengthM, network.mainLengthM, stretches.length);
+  const rootHz = Math.sqrt(frequencyHz);
   let offsetM = 0;
-  network.mainSegments.forEach((segment, position) => {
-    const lengthM = network.segmentLengthM[segment];
+  for (let position = 0; position < stretches.length; position++) {
+    const stretch = stretches[position];
+    const segment = stretch.segment;
+    const lengthM = stretch.lengthM;
     const impedance = network.segmentImpedance[segment];
-    const loss = network.segmentKirchhoffPerSqrtHz[segment] * Math.sqrt(frequencyHz);
+    const loss = network.segmentKirchhoffPerSqrtHz[segment] * rootHz;
     const wavenumberRe = wavenumberPerHz * frequencyHz + loss;
     const wavenumberIm = -loss - network.segmentLiningNpPerM[segment];
     // b = -j Zc U0
@@ -49,30 +78,19 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number): Mod
     const velocitySquared = bRe * bRe + bIm * bIm;
     const cosineWeight = (pressureSquared - velocitySquared) / 2;
     const sineWeight = pRe * bRe + pIm * bIm;
-    const standing = Math.hypot(cosineWeight, sineWeight);
+    const standing = Math.sqrt(cosineWeight * cosineWeight + sineWeight * sineWeight);
     if (standing > MIN_STANDING_FRACTION * (pressureSquared + velocitySquared)) {
       const phase = Math.atan2(sineWeight, cosineWeight);
-      const lowTolerance = position === 0 ? endToleranceM : 1e-9;
-      const highTolerance = position === network.mainSegments.length - 1 ? endToleranceM : 1e-9;
+      const lowTolerance = position === 0 ? endToleranceM : INNER_END_TOLERANCE_M;
+      const highTolerance = position === stretches.length - 1 ? endToleranceM : INNER_END_TOLERANCE_M;
       const period = Math.PI / wavenumberRe;
-      for (const [list, shift] of [[antinodesM, 0], [nodesM, Math.PI]] as const) {
-        const firstX = (phase + shift) / (2 * wavenumberRe);
-        const firstIndex = Math.ceil((-lowTolerance - firstX) / period);
-        for (let index = firstIndex; firstX + index * period <= lengthM + highTolerance; index++) {
-          const x = Math.min(lengthM, Math.max(0, firstX + index * period));
-          pushUnique(list, offsetM + x, wavelengthM / 1000);
-        }
-      }
+      pushExtrema(antinodesM, phase / (2 * wavenumberRe), period, lengthM, offsetM, lowTolerance, highTolerance, sameM);
+      pushExtrema(nodesM, (phase + Math.PI) / (2 * wavenumberRe), period, lengthM, offsetM, lowTolerance, highTolerance, sameM);
     }
+    sampler?.sampleSegment(offsetM, lengthM, wavenumberRe, wavenumberIm, pRe, pIm, bRe, bIm);
     // Carry the state to the segment's far end: [[cos, -j Zc sin], [-j sin / Zc, cos]]
-    const phase = wavenumberRe * lengthM;
-    const growth = wavenumberIm * lengthM;
-    const coshGrowth = Math.cosh(growth);
-    const sinhGrowth = Math.sinh(growth);
-    const cosRe = Math.cos(phase) * coshGrowth;
-    const cosIm = -Math.sin(phase) * sinhGrowth;
-    const sinRe = Math.sin(phase) * coshGrowth;
-    const sinIm = Math.cos(phase) * sinhGrowth;
+    complexCosSin(wavenumberRe * lengthM, wavenumberIm * lengthM, trig);
+    const cosRe = trig[0], cosIm = trig[1], sinRe = trig[2], sinIm = trig[3];
     const upperRe = impedance * sinIm;
     const upperIm = -impedance * sinRe;
     const lowerRe = sinIm / impedance;
@@ -85,7 +103,7 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number): Mod
     pIm = nextPIm;
     uRe = nextURe;
     uIm = nextUIm;
-    for (const branch of network.mainBranches[position]) {
+    for (const branch of stretch.branches) {
       const slot = evaluator.run(branch.programStart, branch.programEnd, frequencyHz, 0, false);
       const bpRe = evaluator.state(slot, 0), bpIm = evaluator.state(slot, 1);
       const buRe = evaluator.state(slot, 2), buIm = evaluator.state(slot, 3);
@@ -94,13 +112,19 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number): Mod
       const joinedPIm = pRe * bpIm + pIm * bpRe;
       const joinedURe = uRe * bpRe - uIm * bpIm - (buRe * pRe - buIm * pIm);
       const joinedUIm = uRe * bpIm + uIm * bpRe - (buRe * pIm + buIm * pRe);
-      const scale = 1 / (Math.hypot(joinedPRe, joinedPIm) + impedance * Math.hypot(joinedURe, joinedUIm) || 1);
+      const joinedSize = Math.sqrt(joinedPRe * joinedPRe + joinedPIm * joinedPIm) + impedance * Math.sqrt(joinedURe * joinedURe + joinedUIm * joinedUIm);
+      const scale = 1 / (joinedSize || 1);
+      // The state was multiplied by pb * scale; the envelope divides it out to keep one amplitude along the path.
+      sampler?.rescale(Math.sqrt(bpRe * bpRe + bpIm * bpIm) * scale);
       pRe = joinedPRe * scale;
       pIm = joinedPIm * scale;
       uRe = joinedURe * scale;
       uIm = joinedUIm * scale;
     }
     offsetM += lengthM;
-  });
-  return { antinodesM, nodesM: nodesM.sort((first, second) => first - second) };
+  }
+  const sortedNodesM = nodesM.sort((first, second) => first - second);
+  if (sampler === undefined) return { antinodesM, nodesM: sortedNodesM };
+  sampler.sampleEnd(offsetM, pRe, pIm);
+  return { antinodesM, nodesM: sortedNodesM, pressureEnvelope: sampler.finish() };
 }
