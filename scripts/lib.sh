@@ -183,8 +183,11 @@ start_fakes() {
   local profile="$1" pid_file="$DATA_DIR/fakes-$1.pid" log="$DATA_DIR/fakes-$1.log"
   eval "$(node node_modules/tsx/dist/cli.mjs scripts/fakes.ts env "$profile")"
   if [ -f "$pid_file" ] && kill -0 "$(cat "$pid_file")" 2>/dev/null; then
-    step "Local fakes ($profile) are already running"
-    return 0
+    if node -e 'fetch(process.argv[1]).then(()=>process.exit(0),()=>process.exit(1))' "$PAYMENTS_FAKE_URL"; then
+      step "Local fakes ($profile) are already running"
+      return 0
+    fi
+    stop_pid_file "$pid_file" "the local fakes ($profile), started without the payment fake"
   fi
   step "Starting the local fakes ($profile): mail inbox $MAIL_INBOX_URL, file storage $S3_ENDPOINT, payments $PAYMENTS_FAKE_URL"
   nohup node node_modules/tsx/dist/cli.mjs scripts/fakes.ts run "$profile" >"$log" 2>&1 &

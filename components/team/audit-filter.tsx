@@ -5,7 +5,7 @@ export function AuditFilterForm({ values, error, exportHref }: {
   values: { area?: string; from?: string; to?: string }; error: { field?: string; message: string } | null; exportHref: string;
 }) {
   return (
-    <form method="get" className="panel grid gap-3 p-4 sm:grid-cols-[14rem_10rem_10rem_auto_auto] sm:items-end" aria-label="Filter the audit log">
+    <form method="get" className="panel grid gap-3 p-4 sm:grid-cols-[14rem_10rem_10rem_max-content_max-content] sm:items-end" aria-label="Filter the audit log">
       <div>
         <label htmlFor="area" className="field-label">Area</label>
         <select id="area" name="area" defaultValue={values.area ?? ''} className="mt-1 block w-full rounded border border-graphite-200 bg-paper-raised px-2 py-2 text-sm">

@@ -31,7 +31,7 @@ export function SeatsForm({ paidSeats, seatPrice, interval }: { paidSeats: numbe
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" aria-label="Change paid seats">
       <FormAlert message={serverError} />
-      <div className="grid gap-3 sm:grid-cols-[12rem_auto] sm:items-end">
+      <div className="grid gap-3 sm:grid-cols-[12rem_max-content]">
         <TextField
           label="Paid seats"
           type="number"

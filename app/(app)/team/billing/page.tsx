@@ -25,6 +25,12 @@ export default async function TeamBillingPage() {
           <dd>{billing.usage.used} ({billing.usage.members} member{billing.usage.members === 1 ? '' : 's'}, {billing.usage.pendingInvitations} pending invitation{billing.usage.pendingInvitations === 1 ? '' : 's'})</dd>
           <dt className="text-graphite-500">Price</dt><dd>{billing.seatPrice} per paid seat per {billing.interval}: {billing.totalPerInterval} per {billing.interval}</dd>
         </dl>
+        {billing.readOnly && (
+          <p role="alert" className="mt-4 rounded border border-risk bg-risk-soft px-3 py-2 text-sm text-risk-ink">
+            <span className="font-semibold">Payment failed{billing.paymentFailedAt ? ` on ${billing.paymentFailedAt.slice(0, 10)}` : ''}: </span>
+            the team is read-only. Update the card with the payment service; editing comes back as soon as a payment goes through. You may also lower the paid seats or cancel.
+          </p>
+        )}
         {billing.requestedSeats !== null && (
           <p role="status" className="mt-4 rounded bg-select-soft px-3 py-2 text-sm text-select-ink" data-testid="seat-change-pending">
             <span className="font-semibold">Waiting for confirmation: </span>
