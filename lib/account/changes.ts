@@ -3,6 +3,9 @@ import { Op, UniqueConstraintError } from 'sequelize';
 import { hashPassword, verifyPassword } from '@/lib/auth/password';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { emailChangedMail } from '@/lib/mail/messages';
+import { sendMail } from '@/lib/mail/send';
+import { appUrl } from '@/lib/tokens';
 import { PasswordReset, Session, User } from '@/models';
 
 async function provenUser(userId: string, currentPassword: string): Promise<User> {
@@ -28,11 +31,16 @@ export async function changePassword(userId: string, sessionId: string, currentP
 export async function changeEmail(userId: string, currentPassword: string, email: string): Promise<string> {
   const user = await provenUser(userId, currentPassword);
   if (user.email === email) throw new AppError('bad_input', 'That is already your e-mail address.', { field: 'email' });
+  const previous = user.email;
   try {
     await user.update({ email });
   } catch (error) {
     if (error instanceof UniqueConstraintError) throw new AppError('conflict', 'Another account already uses that e-mail address.', { field: 'email' });
     throw error;
   }
+  // Tell the old address, so a change nobody asked for does not go unnoticed.
+  await sendMail(emailChangedMail({ to: previous, newEmail: email, link: appUrl('/forgotten-password') })).catch((error: unknown) => {
+    console.error('[mail] e-mail change notice not sent', error);
+  });
   return email;
 }

@@ -31,3 +31,15 @@ export function passwordResetMail(input: { to: string; link: string; expiresAt: 
     ].join('\n'),
   };
 }
+
+export function emailChangedMail(input: { to: string; newEmail: string; link: string }): MailMessage {
+  return {
+    to: input.to,
+    subject: 'Your Antinode e-mail address was changed',
+    text: [
+      `The e-mail address of your Antinode account is now ${input.newEmail}; this address no longer signs in.`,
+      '',
+      `If you did not do this, reset the password from ${input.link} using the new address, or ask your team admin for help.`,
+    ].join('\n'),
+  };
+}

@@ -4,6 +4,7 @@ import { signIn, startSession } from '@/lib/auth/accounts';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
 import { Session } from '@/models';
+import { mailsTo } from '../helpers/inbox';
 import { createTestTeam, TEST_PASSWORD, uniqueEmail } from '../helpers/people';
 
 afterAll(async () => { await sequelize.close(); });
@@ -26,7 +27,9 @@ describe('account changes', () => {
     await expect(changeEmail(members.engineer.id, TEST_PASSWORD, taken)).rejects.toMatchObject({ code: 'conflict', field: 'email' });
     await expect(changeEmail(members.engineer.id, 'wrong', uniqueEmail('new'))).rejects.toBeInstanceOf(AppError);
     const fresh = uniqueEmail('moved');
+    const previous = members.engineer.email;
     await expect(changeEmail(members.engineer.id, TEST_PASSWORD, fresh)).resolves.toBe(fresh);
+    expect((await mailsTo(previous)).map((mail) => mail.subject)).toEqual(['Your Antinode e-mail address was changed']);
     await expect(signIn(fresh, TEST_PASSWORD, null)).resolves.toMatchObject({ name: 'antinode_session' });
   });
 });

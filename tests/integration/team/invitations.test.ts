@@ -77,6 +77,16 @@ describe('invitations', () => {
     expect(await Membership.count({ where: { userId: person.id } })).toBe(2);
   });
 
+  it('someone signed in as the invited address joins without typing a password', async () => {
+    const { team } = await createTestTeam('signed-in');
+    const other = await createTestTeam('signed-in-other');
+    const person = other.members.architect;
+    const token = await seededInvitation(team.id, person.email);
+    const joined = await call(accept, 'POST', '/api/v1/invitations/accept', { cookie: await other.cookieFor('architect'), body: { token } });
+    expect(joined.status).toBe(201);
+    expect(await Membership.findOne({ where: { userId: person.id, teamId: team.id } })).toMatchObject({ role: 'engineer' });
+  });
+
   it('refuses an invitation beyond the seats and points to buying more', async () => {
     const { cookieFor } = await createTestTeam('full'); // five members, three included seats
     const answer = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email: uniqueEmail('nine'), role: 'viewer' } });
