@@ -28,13 +28,13 @@ export function benchRun(): RunInput {
   return { segments, start: { kind: 'closed' }, end: { kind: 'open', flange: 'unflanged' }, minHz: 20, maxHz: 400 };
 }
 
-function median(values: number[]): number {
+export function median(values: number[]): number {
   const sorted = [...values].sort((first, second) => first - second);
   return sorted[Math.floor(sorted.length / 2)];
 }
 
 /** Median wall time of repeats runs, ms; the fastest run goes to fastest (a loaded machine inflates the median). */
-function timeMs(action: () => void, repeats: number, fastest?: { ms: number }): number {
+export function timeMs(action: () => void, repeats: number, fastest?: { ms: number }): number {
   const times: number[] = [];
   for (let index = 0; index < repeats; index++) {
     const startMs = performance.now();
@@ -99,6 +99,17 @@ export function plainSweep(chain: ReturnType<typeof flatChain>, frequencies: Flo
 export function runAcousticBench(): void {
   const run = benchRun();
   const lengthM = run.segments.reduce((sum, segment) => sum + segment.lengthM, 0);
+  const frequencyCount = 2000;
+  const frequencies = Float64Array.from({ length: frequencyCount }, (_, index) => 20 + (380 * index) / (frequencyCount - 1));
+  const out = new Float64Array(2 * frequencyCount);
+  const sweepNsPerSegment = (sweeper: ReturnType<typeof createAdmittanceSweeper>): number => {
+    for (let warm = 0; warm < 5; warm++) sweeper.sweep(frequencies, out);
+    return (timeMs(() => sweeper.sweep(frequencies, out), 15) * 1e6) / (sweeper.segmentCount * frequencyCount);
+  };
+  // Every segment carried on its own: the inner loop against the plain loop, like for like.
+  const sweeper = createAdmittanceSweeper(run, { mergeUniformStretches: false });
+  const sweepNs = sweepNsPerSegment(sweeper);
+
   for (let warm = 0; warm < 5; warm++) analyzeRun(run);
   const analysis = analyzeRun(run);
   const analysisFastest = { ms: 0 };
@@ -110,16 +121,8 @@ export function runAcousticBench(): void {
     for (const resonance of analyzeRun(run).resonances) void resonance.pressureEnvelope;
   }, 21, envelopesFastest);
 
-  const frequencyCount = 2000;
-  const frequencies = Float64Array.from({ length: frequencyCount }, (_, index) => 20 + (380 * index) / (frequencyCount - 1));
-  const out = new Float64Array(2 * frequencyCount);
-  const sweepNsPerSegment = (sweeper: ReturnType<typeof createAdmittanceSweeper>): number => {
-    for (let warm = 0; warm < 5; warm++) sweeper.sweep(frequencies, out);
-    return (timeMs(() => sweeper.sweep(frequencies, out), 15) * 1e6) / (sweeper.segmentCount * frequencyCount);
-  };
-  // Every segment carried on its own: the inner loop against the plain loop, like for like.
-  const sweeper = createAdmittanceSweeper(run, { mergeUniformStretches: false });
-  const sweepNs = sweepNsPerSegment(sweeper);
+  // The same sweeper again once analyzeRun has run (the JIT's feedback from other callers of the loop slows it).
+  const sweepAfterNs = sweepNsPerSegment(sweeper);
   // As analyzeRun runs it: uniform stretches merged (exact), still per input segment.
   const merged = createAdmittanceSweeper(run);
   const mergedNs = sweepNsPerSegment(merged);
@@ -143,6 +146,7 @@ export function runAcousticBench(): void {
     ['analyzeRun, median of 21 warm runs', `${analysisMs.toFixed(2)} ms (fastest ${analysisFastest.ms.toFixed(2)} ms)`],
     ['analyzeRun + every pressure envelope', `${withEnvelopesMs.toFixed(2)} ms (fastest ${envelopesFastest.ms.toFixed(2)} ms)`],
     ['sweep (engine, every segment)', `${sweepNs.toFixed(1)} ns per segment·frequency (${sweeper.segmentCount} segments x ${frequencyCount} frequencies)`],
+    ['  same, measured after analyzeRun', `${sweepAfterNs.toFixed(1)} ns per segment·frequency`],
     ['sweep (engine, uniform stretches merged)', `${mergedNs.toFixed(1)} ns per input segment·frequency (${merged.chainLength} stretches)`],
     ['sweep (plain Float64Array loop)', `${plainNs.toFixed(1)} ns per segment·frequency`],
     ['engine / plain loop', `${(sweepNs / plainNs).toFixed(2)}x`],

@@ -1,7 +1,11 @@
 // `npm run bench`: runs every registered benchmark in turn. Add a new one by appending to BENCHES.
 import { runAcousticBench } from './acoustic.bench';
+import { runRoomBench } from './room.bench';
 
-const BENCHES: Array<{ name: string; run: () => void | Promise<void> }> = [{ name: 'acoustic', run: runAcousticBench }];
+const BENCHES: Array<{ name: string; run: () => void | Promise<void> }> = [
+  { name: 'acoustic', run: runAcousticBench },
+  { name: 'room', run: runRoomBench },
+];
 
 async function main(): Promise<void> {
   for (const bench of BENCHES) {

@@ -63,3 +63,34 @@ export const SABINE_LINED_DUCT_ABSORPTION_EXPONENT = 1.4;
 export const END_REFLECTION_LOSS_A1_FLUSH = 0.7;
 export const END_REFLECTION_LOSS_A1_FREE = 1.0;
 export const END_REFLECTION_LOSS_A2 = 2;
+
+/** Schroeder frequency coefficient in f_s = 2000 sqrt(T60 / V), Hz·sqrt(m³/s) (Schroeder & Kuttruff (1962), JASA 34, 76, from memory; Kuttruff, Room Acoustics, ch. 3). */
+export const SCHROEDER_COEFFICIENT = 2000;
+
+/** Sabine's constant in T60 = 0.161 V / A, s/m, metric form for air near 20 °C (W. C. Sabine, 1900; Kuttruff, Room Acoustics, ch. 5). */
+export const SABINE_CONSTANT_S_PER_M = 0.161;
+
+/** Directivity factor of a source on one, two or three reflecting planes: 2, 4, 8 (Long, Architectural Acoustics, 2nd ed., ch. 2). */
+export const DIRECTIVITY_PER_REFLECTING_PLANE = 2;
+
+/**
+ * A reflecting plane adds to the outlet's low-frequency directivity while the outlet lies within a
+ * quarter wavelength of it (from memory; the boundary interference of Waterhouse (1955), JASA 27, 247,
+ * is constructive within about a quarter wavelength of a plane).
+ */
+export const BOUNDARY_GAIN_WAVELENGTH_FRACTION = 1 / 4;
+
+/** A-weighting at the octave bands 63 Hz to 8 kHz, dB: IEC 61672-1 (2013), Table 3. */
+export const A_WEIGHTING_OCTAVE_DB: readonly number[] = [-26.2, -16.1, -8.6, -3.2, 0, 1.2, 1.0, -1.1];
+
+/** Default window of a coincidence, percent of the tone's frequency (product rule, shown in the UI). */
+export const DEFAULT_COINCIDENCE_PERCENT = 3;
+
+/**
+ * A point is near an axial mode's pressure maximum within this fraction of the mode's wavelength:
+ * within lambda/8 of x = mL/n, |cos(n pi x / L)| >= cos(pi/4), i.e. within 3 dB of the maximum (product rule).
+ */
+export const DEFAULT_NEAR_MAXIMUM_WAVELENGTHS = 1 / 8;
+
+/** Reference sound power for levels in dB, W (ISO 80000-8 / ISO 3744). Levels are given in dB re this value. */
+export const REFERENCE_SOUND_POWER_W = 1e-12;

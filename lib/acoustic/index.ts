@@ -44,3 +44,30 @@ export type {
   RoomModeType,
   Mounting,
 } from './types';
+export { bladePassHarmonicsHz } from './blade-pass';
+// Rooms
+export { analyzeRoom } from './room/analyze-room';
+export type { RoomAnalysis, RoomAnalysisOptions } from './room/analyze-room';
+export { schroederFrequencyHz, sabineReverberationTimeS, modalDensityPerHz, roomConstantM2, roomBands, surfaceAreasM2 } from './room/room-acoustics';
+export type { RoomBand } from './room/room-acoustics';
+export { imageSources } from './room/image-sources';
+export type { ImageSource } from './room/image-sources';
+export { boundaryGain, directivityAt } from './room/boundary-gain';
+export type { BoundaryGain, NearPlane } from './room/boundary-gain';
+export { roomEquationDb, firstCombNotchHz } from './room/room-level';
+export { outletLevels, pathAttenuationDb } from './room/outlet-level';
+export type { OutletLevelBand } from './room/outlet-level';
+export { validateRoomInput, SURFACE_NAMES } from './room/room-input';
+export type { RoomInput, RoomSurfaces, SurfaceName, Point3 } from './room/room-input';
+// Ratings
+export { aWeightedLevelDb } from './ratings/a-weighting';
+export { ncCriterionCurveDb } from './ratings/nc-criterion';
+export { A_WEIGHTING_OCTAVE_DB } from './constants';
+// Risks and treatments
+export { assessRisks } from './risk/assess-risks';
+export type { RiskInput, RiskOptions, FanInput, RiskFlag, RiskKind, Severity, FlaggedQuantity } from './risk/risk-types';
+export { evaluateTreatment } from './treatments/evaluate-treatment';
+export { candidateTreatments } from './treatments/candidate-treatments';
+export { applyTreatment } from './treatments/apply-treatment';
+export { quarterWaveLengthM } from './treatments/quarter-wave';
+export type { Treatment, TreatmentResult } from './treatments/treatment-types';

@@ -1,0 +1,55 @@
+// Input and output shapes of the risk assessment (plain JSON data: stored in the plan document).
+import type { RoomInput } from '../room/room-input';
+import type { RunInput } from '../types';
+
+export interface FanInput {
+  blades: number;
+  rpm: number;
+  /** Blade-pass harmonics to check (default 3). */
+  harmonics?: number;
+}
+
+export interface RiskOptions {
+  /** A resonance coincides with a tone or room mode within max(its half bandwidth, this percent of the tone). Default 3. */
+  coincidencePercent?: number;
+  /** "Near a pressure maximum": within this fraction of the mode's wavelength of x = mL/n. Default 1/8 (within 3 dB of the maximum). */
+  nearMaximumWavelengths?: number;
+}
+
+export interface RiskInput {
+  run: RunInput;
+  fan?: FanInput;
+  room?: RoomInput;
+  /** Sound power arriving at the outlet through the run as given, octave bands 63 Hz to 8 kHz, dB re 1 pW. */
+  outletSoundPowerDb?: number[];
+  options?: RiskOptions;
+}
+
+export type RiskKind = 'resonance-near-tone' | 'resonance-near-room-mode' | 'level-above-criterion';
+export type Severity = 'high' | 'medium' | 'low';
+
+/** The flagged quantity, before or after a treatment. */
+export interface FlaggedQuantity {
+  /** resonance kinds: the resonance nearest the target; level: the band level. */
+  valueHz?: number;
+  /** resonance kinds: |resonance - target| and the window it must leave, Hz. */
+  distanceHz?: number;
+  windowHz?: number;
+  levelDb?: number;
+  criterionDb?: number;
+}
+
+export interface RiskFlag {
+  /** Stable: derived from the kind, its subject and the rounded numbers. */
+  id: string;
+  kind: RiskKind;
+  /** What the flag is about, stable across treatments: 'tone:h1', 'room-mode:1,0,0', 'band:125'. */
+  subject: string;
+  severity: Severity;
+  reason: string;
+  /** The tone or room mode frequency, or the band centre, Hz. */
+  targetHz: number;
+  /** The duct resonance involved (resonance kinds). */
+  resonanceOrder?: number;
+  quantity: FlaggedQuantity;
+}

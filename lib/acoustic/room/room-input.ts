@@ -1,0 +1,63 @@
+// Input shape of a room served by a duct run, and its validation (RangeError naming the field path).
+import { OCTAVE_BANDS_HZ } from '../constants';
+import { inputError, requireAbove, requireAtLeast, requireBetween, requireFinite } from '../input-error';
+import type { Mounting, RoomBox } from '../types';
+
+/** A point in the room, m, from the corner at the origin: x along lengthM, y along widthM, z up (heightM). */
+export interface Point3 {
+  xM: number;
+  yM: number;
+  zM: number;
+}
+
+/** The six surfaces of a rectangular room. */
+export type SurfaceName = 'floor' | 'ceiling' | 'wallXMin' | 'wallXMax' | 'wallYMin' | 'wallYMax';
+export const SURFACE_NAMES: readonly SurfaceName[] = ['wallXMin', 'wallXMax', 'wallYMin', 'wallYMax', 'floor', 'ceiling'];
+
+/** Random-incidence absorption coefficient of each surface in the octave bands 63 Hz to 8 kHz (8 values, 0..1). */
+export type RoomSurfaces = Record<SurfaceName, number[]>;
+
+export interface RoomInput {
+  box: RoomBox;
+  surfaces: RoomSurfaces;
+  /** Criterion for the room, an NC value (e.g. 25). */
+  criterionNc: number;
+  /** The run's outlet (its end end) in the room. */
+  outlet: Point3;
+  listener: Point3;
+  /** How the outlet meets the room, for the end reflection loss; default from the run's end (flanged: flush, else free). */
+  outletMounting?: Mounting;
+}
+
+function validatePoint(point: unknown, box: RoomBox, path: string): void {
+  if (typeof point !== 'object' || point === null) throw inputError(path, 'must be an object');
+  const { xM, yM, zM } = point as Record<string, unknown>;
+  requireBetween(xM, 0, box.lengthM, `${path}.xM`);
+  requireBetween(yM, 0, box.widthM, `${path}.yM`);
+  requireBetween(zM, 0, box.heightM, `${path}.zM`);
+}
+
+export function validateRoomInput(room: unknown, path = 'room'): RoomInput {
+  if (typeof room !== 'object' || room === null) throw inputError(path, 'must be an object');
+  const candidate = room as RoomInput;
+  if (typeof candidate.box !== 'object' || candidate.box === null) throw inputError(`${path}.box`, 'must be an object');
+  requireAbove(candidate.box.lengthM, 0, `${path}.box.lengthM`);
+  requireAbove(candidate.box.widthM, 0, `${path}.box.widthM`);
+  requireAbove(candidate.box.heightM, 0, `${path}.box.heightM`);
+  if (candidate.box.temperatureC !== undefined) requireFinite(candidate.box.temperatureC, `${path}.box.temperatureC`);
+  if (typeof candidate.surfaces !== 'object' || candidate.surfaces === null) throw inputError(`${path}.surfaces`, 'must be an object');
+  for (const name of SURFACE_NAMES) {
+    const bands = candidate.surfaces[name];
+    if (!Array.isArray(bands) || bands.length !== OCTAVE_BANDS_HZ.length) {
+      throw inputError(`${path}.surfaces.${name}`, `must have ${OCTAVE_BANDS_HZ.length} octave-band absorption values`);
+    }
+    bands.forEach((value, band) => requireBetween(value, 0, 1, `${path}.surfaces.${name}[${band}]`));
+  }
+  requireAtLeast(candidate.criterionNc, 0, `${path}.criterionNc`);
+  validatePoint(candidate.outlet, candidate.box, `${path}.outlet`);
+  validatePoint(candidate.listener, candidate.box, `${path}.listener`);
+  if (candidate.outletMounting !== undefined && candidate.outletMounting !== 'flush' && candidate.outletMounting !== 'free') {
+    throw inputError(`${path}.outletMounting`, "must be 'flush' or 'free'");
+  }
+  return candidate;
+}

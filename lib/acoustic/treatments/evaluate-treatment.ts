@@ -1,0 +1,79 @@
+// Evaluates a treatment of a flag by re-running the engine on the changed model.
+import { analyzeRun } from '../analyze-run';
+import { speedOfSound } from '../air';
+import { DEFAULT_TEMPERATURE_C } from '../constants';
+import { equivalentRadiusM } from '../section';
+import type { RiskFlag, RiskInput } from '../risk/risk-types';
+import { applyTreatment, longestSegment } from './apply-treatment';
+import { measureFlag } from './measure-flag';
+import { quarterWaveLengthM } from './quarter-wave';
+import { searchRetune } from './retune-search';
+import type { Treatment, TreatmentResult } from './treatment-types';
+
+/** Default resonator bore: half the host segment's equivalent diameter (product rule). */
+const RESONATOR_BORE_FRACTION = 0.5;
+
+/** Main-path segment whose far end lies nearest a pressure antinode of the resonance at the target. */
+function segmentNearestAntinode(input: RiskInput, flag: RiskFlag): number {
+  const resonance = analyzeRun(input.run).resonances.find((candidate) => candidate.order === flag.resonanceOrder);
+  const antinodesM = resonance?.antinodesM ?? [];
+  let best = longestSegment(input.run);
+  let bestDistance = Infinity;
+  let endM = 0;
+  input.run.segments.forEach((segment, index) => {
+    endM += segment.lengthM;
+    for (const antinodeM of antinodesM) {
+      if (Math.abs(antinodeM - endM) < bestDistance) {
+        bestDistance = Math.abs(antinodeM - endM);
+        best = index;
+      }
+    }
+  });
+  return best;
+}
+
+/** Makes every choice explicit: the searched length change, the resonator's segment, bore and length. */
+function resolve(input: RiskInput, flag: RiskFlag, treatment: Treatment, notes: string[]): Treatment | null {
+  if (treatment.kind === 'retune-length' && treatment.deltaLengthM === undefined) {
+    const segmentIndex = treatment.segmentIndex ?? longestSegment(input.run);
+    const search = searchRetune(input, flag, segmentIndex);
+    notes.push(`length search: ${search.analyses} re-runs of the engine on segment ${segmentIndex}`);
+    if (search.deltaLengthM === null) {
+      notes.push('no length change of that segment (10 % to about 10x the first step) clears the flag');
+      return null;
+    }
+    return { kind: 'retune-length', segmentIndex, deltaLengthM: search.deltaLengthM };
+  }
+  if (treatment.kind === 'side-branch-resonator') {
+    const segmentIndex = treatment.segmentIndex ?? segmentNearestAntinode(input, flag);
+    const hostRadiusM = equivalentRadiusM(input.run.segments[segmentIndex].section);
+    const diameterM = treatment.diameterM ?? 2 * hostRadiusM * RESONATOR_BORE_FRACTION;
+    const tuneHz = treatment.tuneHz ?? flag.targetHz;
+    const speedMps = speedOfSound(input.run.temperatureC ?? DEFAULT_TEMPERATURE_C);
+    const lengthM = treatment.lengthM ?? quarterWaveLengthM(tuneHz, speedMps, diameterM / 2);
+    notes.push('the engine models the tee without a mouth mass correction, so the modelled branch tunes slightly above the tone');
+    return { kind: 'side-branch-resonator', segmentIndex, tuneHz, diameterM, lengthM };
+  }
+  return treatment;
+}
+
+function describe(treatment: Treatment): string {
+  switch (treatment.kind) {
+    case 'line-segment':
+      return `Line segment ${treatment.segmentIndex}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm, absorption ${treatment.absorption})`;
+    case 'change-termination':
+      return `Change the ${treatment.end} termination to ${treatment.termination.kind}${treatment.termination.kind === 'open' ? ` (${treatment.termination.flange})` : ''}`;
+    case 'retune-length':
+      return `Change segment ${treatment.segmentIndex}'s length by ${((treatment.deltaLengthM ?? 0) * 1000).toFixed(0)} mm`;
+    case 'side-branch-resonator':
+      return `Add a closed quarter-wave side branch at segment ${treatment.segmentIndex}: ${(treatment.lengthM ?? 0).toFixed(3)} m long, ${((treatment.diameterM ?? 0) * 1000).toFixed(0)} mm bore, tuned to ${(treatment.tuneHz ?? 0).toFixed(1)} Hz`;
+  }
+}
+
+export function evaluateTreatment(input: RiskInput, flag: RiskFlag, treatment: Treatment): TreatmentResult {
+  const notes: string[] = [];
+  const resolved = resolve(input, flag, treatment, notes);
+  if (resolved === null) return { treatment, description: describe(treatment), before: flag.quantity, after: flag.quantity, clears: false, notes };
+  const after = measureFlag(input, flag, applyTreatment(input.run, resolved));
+  return { treatment: resolved, description: describe(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, notes };
+}
