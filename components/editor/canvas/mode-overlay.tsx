@@ -26,32 +26,36 @@ function pointAlong(piece: MainPathPiece, nodes: ReadonlyMap<string, PlanNode>, 
   return { x: from.x + (to.x - from.x) * t, y: from.y + (to.y - from.y) * t, normalX: -(to.y - from.y) / length, normalY: (to.x - from.x) / length };
 }
 
-// The selected resonance's pressure envelope drawn on both sides of the run's main path,
+// The selected resonance's pressure envelope |p(x)| drawn on both sides of the run's main path,
 // with its pressure nodes (N, hollow) and antinodes (A, filled) marked and labelled.
 export function ModeOverlay({ resonance, path, nodes, speedOfSoundMps, scale }: ModeOverlayProps) {
   const extrema = extremaOf(resonance.antinodesM, resonance.nodesM);
   const quarterWavelengthM = speedOfSoundMps / (4 * resonance.frequencyHz);
   const height = ENVELOPE_HEIGHT_PX / scale;
-  const upper: number[] = [];
-  const lower: number[] = [];
-  for (const piece of path) {
-    for (let index = 0; index <= SAMPLES_PER_SEGMENT; index += 1) {
-      const positionM = piece.startM + ((piece.endM - piece.startM) * index) / SAMPLES_PER_SEGMENT;
-      const point = pointAlong(piece, nodes, positionM);
-      if (!point) continue;
-      const amplitude = envelopeAt(positionM, extrema, quarterWavelengthM) * height;
-      upper.push(point.x + point.normalX * amplitude, point.y + point.normalY * amplitude);
-      lower.push(point.x - point.normalX * amplitude, point.y - point.normalY * amplitude);
-    }
-  }
   const marker = (positionM: number) => {
     const piece = path.find((candidate) => positionM >= candidate.startM - 1e-9 && positionM <= candidate.endM + 1e-9);
     return piece ? pointAlong(piece, nodes, positionM) : null;
   };
+  // The engine's own envelope where it came with the resonance; else one drawn from the extrema.
+  const samples = resonance.pressureEnvelope && resonance.pressureEnvelope.length > 1
+    ? resonance.pressureEnvelope.map((sample) => ({ positionM: sample.positionM, relative: sample.relative }))
+    : path.flatMap((piece) => Array.from({ length: SAMPLES_PER_SEGMENT + 1 }, (_, index) => {
+      const positionM = piece.startM + ((piece.endM - piece.startM) * index) / SAMPLES_PER_SEGMENT;
+      return { positionM, relative: envelopeAt(positionM, extrema, quarterWavelengthM) };
+    }));
+  const upper: number[] = [];
+  const lower: number[] = [];
+  for (const sample of samples) {
+    const point = marker(sample.positionM);
+    if (!point) continue;
+    const amplitude = sample.relative * height;
+    upper.push(point.x + point.normalX * amplitude, point.y + point.normalY * amplitude);
+    lower.push(point.x - point.normalX * amplitude, point.y - point.normalY * amplitude);
+  }
   return (
     <Group listening={false}>
-      <Line points={upper} stroke="#2d6a96" strokeWidth={1.5 / scale} tension={0.2} />
-      <Line points={lower} stroke="#2d6a96" strokeWidth={1.5 / scale} tension={0.2} />
+      <Line points={upper} stroke="#2d6a96" strokeWidth={1.5 / scale} />
+      <Line points={lower} stroke="#2d6a96" strokeWidth={1.5 / scale} />
       {resonance.antinodesM.map((positionM) => {
         const point = marker(positionM);
         return point && (

@@ -1,6 +1,5 @@
 'use client';
 
-import type Konva from 'konva';
 import { memo } from 'react';
 import { Circle } from 'react-konva';
 
@@ -10,14 +9,12 @@ interface NodeDotProps {
   y: number;
   selected: boolean;
   isStart: boolean;
-  draggable: boolean;
   scale: number;
-  onDragMove: (id: string, x: number, y: number) => void;
-  onDragEnd: (id: string, x: number, y: number) => void;
 }
 
 // A vertex: start ends are a ring, others a dot; selected ones grow and take the selection accent.
-export const NodeDot = memo(function NodeDot({ id, x, y, selected, isStart, draggable, scale, onDragMove, onDragEnd }: NodeDotProps) {
+// Dragging is handled by the canvas (so only the moving pieces redraw), not by Konva.
+export const NodeDot = memo(function NodeDot({ id, x, y, selected, isStart, scale }: NodeDotProps) {
   const radius = (selected ? 6 : 4) / scale;
   return (
     <Circle
@@ -30,10 +27,7 @@ export const NodeDot = memo(function NodeDot({ id, x, y, selected, isStart, drag
       stroke={selected ? '#2d6a96' : '#25282d'}
       strokeWidth={(isStart ? 2.5 : 1) / scale}
       hitStrokeWidth={10 / scale}
-      draggable={draggable}
       perfectDrawEnabled={false}
-      onDragMove={(event: Konva.KonvaEventObject<DragEvent>) => onDragMove(id, event.target.x(), event.target.y())}
-      onDragEnd={(event: Konva.KonvaEventObject<DragEvent>) => onDragEnd(id, event.target.x(), event.target.y())}
     />
   );
 });

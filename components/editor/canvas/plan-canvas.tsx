@@ -1,7 +1,7 @@
 'use client';
 
 import type Konva from 'konva';
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Circle, Image as KonvaImage, Layer, Line, Rect, Stage } from 'react-konva';
 import type { Resonance } from '@/lib/acoustic';
 import { nodePositions, type PlanDocument } from '@/lib/plan/document';
@@ -65,7 +65,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   const [view, setView] = useState<View>(() => fitView(contentWidth, contentHeight, widthPx, heightPx));
   const fittedFor = useRef<string>('');
   const image = useImage(background?.url ?? null);
-  const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number } | null>(null);
+  // A vertex being dragged: it and the segments touching it are drawn on their own layer, so
+  // each move redraws a handful of shapes instead of the whole plan.
+  const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number; moved: boolean } | null>(null);
 
   useEffect(() => {
     const key = `${background?.url ?? 'grid'}:${widthPx > 0 && heightPx > 0}`;
@@ -74,40 +76,82 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     setView(fitView(contentWidth, contentHeight, widthPx, heightPx));
   }, [background?.url, contentWidth, contentHeight, widthPx, heightPx]);
 
-  const positions = useMemo(() => {
-    const map = nodePositions(doc);
-    if (drag) map.set(drag.nodeId, { id: drag.nodeId, x: drag.x, y: drag.y });
-    return map;
-  }, [doc, drag]);
+  const positions = useMemo(() => nodePositions(doc), [doc]);
+  const dragNodeId = drag?.nodeId ?? null;
+  const activeSegmentIds = useMemo(() => new Set(dragNodeId ? doc.segments.filter((segment) => segment.from === dragNodeId || segment.to === dragNodeId).map((segment) => segment.id) : []), [doc.segments, dragNodeId]);
   const selectedNodes = useMemo(() => new Set(selection.nodeIds), [selection.nodeIds]);
   const selectedSegments = useMemo(() => new Set(selection.segmentIds), [selection.segmentIds]);
   const onPath = useMemo(() => new Set(props.mainPath.map((piece) => piece.segmentId)), [props.mainPath]);
   const startNodes = useMemo(() => new Set(doc.runs.map((run) => run.startNodeId)), [doc.runs]);
 
-  const leafGlyphs = useMemo(() => {
-    const glyphs: { nodeId: string; x: number; y: number; angleRad: number; termination: PlanDocument['runs'][number]['terminations'][string] }[] = [];
+  const sectionWidthPx = useCallback((sizeM: number) => Math.max(2, Math.min(9, (sizeM / props.metresPerPixel) * view.scale)), [props.metresPerPixel, view.scale]);
+
+  const segmentLine = useCallback((segment: PlanDocument['segments'][number], at: ReadonlyMap<string, { x: number; y: number }>) => {
+    const from = at.get(segment.from);
+    const to = at.get(segment.to);
+    if (!from || !to) return null;
+    const sizeM = segment.section.shape === 'round' ? segment.section.diameterM : Math.max(segment.section.widthM, segment.section.heightM);
+    return (
+      <SegmentLine key={segment.id} id={segment.id} x1={from.x} y1={from.y} x2={to.x} y2={to.y} widthPx={sectionWidthPx(sizeM)}
+        selected={selectedSegments.has(segment.id)} onPath={onPath.has(segment.id)} lined={Boolean(segment.lining)} scale={view.scale} />
+    );
+  }, [sectionWidthPx, selectedSegments, onPath, view.scale]);
+
+  // Everything that stays still during a drag, built once per document, selection or zoom.
+  const staticShapes = useMemo(() => {
+    const glyphs: ReactNode[] = [];
     for (const run of doc.runs) {
       for (const [nodeId, termination] of Object.entries(run.terminations)) {
         const node = positions.get(nodeId);
         const segment = doc.segments.find((candidate) => candidate.from === nodeId || candidate.to === nodeId);
-        if (!node || !segment) continue;
-        const other = positions.get(segment.from === nodeId ? segment.to : segment.from);
-        if (!other) continue;
-        glyphs.push({ nodeId, x: node.x, y: node.y, angleRad: Math.atan2(node.y - other.y, node.x - other.x), termination });
+        const other = segment && positions.get(segment.from === nodeId ? segment.to : segment.from);
+        if (!node || !other || nodeId === dragNodeId) continue;
+        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={Math.atan2(node.y - other.y, node.x - other.x)} termination={termination} scale={view.scale} />);
       }
     }
-    return glyphs;
-  }, [doc.runs, doc.segments, positions]);
+    return (
+      <>
+        {doc.segments.map((segment) => (activeSegmentIds.has(segment.id) ? null : segmentLine(segment, positions)))}
+        {glyphs}
+        {doc.nodes.map((node) => (node.id === dragNodeId ? null : (
+          <NodeDot key={node.id} id={node.id} x={node.x} y={node.y} selected={selectedNodes.has(node.id)} isStart={startNodes.has(node.id)} scale={view.scale} />
+        )))}
+      </>
+    );
+  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale]);
 
   const toPlan = (stage: Konva.Stage | null): Point | null => {
     const pointer = stage?.getPointerPosition();
     return pointer ? screenToPlan(view, pointer) : null;
   };
 
+  const finishDrag = useCallback(() => {
+    setDrag((current) => {
+      if (current?.moved) props.onNodeDrag(current.nodeId, { x: current.x, y: current.y }, 'end');
+      return null;
+    });
+  }, [props.onNodeDrag]); // eslint-disable-line react-hooks/exhaustive-deps
+
+  useEffect(() => {
+    if (!drag) return;
+    window.addEventListener('mouseup', finishDrag);
+    return () => window.removeEventListener('mouseup', finishDrag);
+  }, [drag, finishDrag]);
+
   const emit = (type: CanvasPointer['type']) => (event: Konva.KonvaEventObject<MouseEvent>) => {
     if (props.panning || event.evt.button === 1) return;
     const point = toPlan(event.target.getStage());
-    if (point) props.onPointer({ type, point, target: targetOf(event), shiftKey: event.evt.shiftKey, scale: view.scale });
+    if (!point) return;
+    const target = targetOf(event);
+    if (type === 'move' && drag) {
+      setDrag({ ...drag, x: point.x, y: point.y, moved: true });
+      return;
+    }
+    if (type === 'down' && editable && target.nodeId && !event.evt.shiftKey) {
+      const node = positions.get(target.nodeId);
+      if (node) setDrag({ nodeId: target.nodeId, x: node.x, y: node.y, moved: false });
+    }
+    props.onPointer({ type, point, target, shiftKey: event.evt.shiftKey, scale: view.scale });
   };
 
   const onWheel = (event: Konva.KonvaEventObject<WheelEvent>) => {
@@ -116,16 +160,12 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     if (pointer) setView((current) => zoomAt(current, pointer, event.evt.deltaY < 0 ? ZOOM_STEP : 1 / ZOOM_STEP));
   };
 
-  const onNodeDragMove = useMemo(() => (nodeId: string, x: number, y: number) => {
-    setDrag({ nodeId, x, y });
-    props.onNodeDrag(nodeId, { x, y }, 'move');
-  }, [props.onNodeDrag]); // eslint-disable-line react-hooks/exhaustive-deps
-  const onNodeDragEnd = useMemo(() => (nodeId: string, x: number, y: number) => {
-    setDrag(null);
-    props.onNodeDrag(nodeId, { x, y }, 'end');
-  }, [props.onNodeDrag]); // eslint-disable-line react-hooks/exhaustive-deps
-
-  const sectionWidthPx = (sizeM: number) => Math.max(2, Math.min(9, (sizeM / props.metresPerPixel) * view.scale));
+  const dragPositions = useMemo(() => {
+    if (!drag) return positions;
+    const moved = new Map(positions);
+    moved.set(drag.nodeId, { id: drag.nodeId, x: drag.x, y: drag.y });
+    return moved;
+  }, [positions, drag]);
 
   return (
     <Stage
@@ -141,49 +181,18 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       onMouseDown={emit('down')}
       onMouseMove={emit('move')}
       onDblClick={emit('dblclick')}
-      style={{ cursor: props.panning ? 'grab' : 'crosshair' }}
-      data-testid="plan-canvas"
+      style={{ cursor: props.panning ? 'grab' : drag ? 'grabbing' : 'crosshair' }}
     >
       <Layer listening={false}>
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.gridSpacingPx} scale={view.scale} />
       </Layer>
+      <Layer>{staticShapes}</Layer>
       <Layer>
-        {doc.segments.map((segment) => {
-          const from = positions.get(segment.from);
-          const to = positions.get(segment.to);
-          if (!from || !to) return null;
-          const sizeM = segment.section.shape === 'round' ? segment.section.diameterM : Math.max(segment.section.widthM, segment.section.heightM);
-          return (
-            <SegmentLine
-              key={segment.id}
-              id={segment.id}
-              x1={from.x} y1={from.y} x2={to.x} y2={to.y}
-              widthPx={sectionWidthPx(sizeM)}
-              selected={selectedSegments.has(segment.id)}
-              onPath={onPath.has(segment.id)}
-              lined={Boolean(segment.lining)}
-              scale={view.scale}
-            />
-          );
-        })}
-        {leafGlyphs.map((glyph) => <TerminationGlyph key={`t${glyph.nodeId}`} {...glyph} scale={view.scale} />)}
-        {props.mode && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}
-        {doc.nodes.map((node) => (
-          <NodeDot
-            key={node.id}
-            id={node.id}
-            x={node.x}
-            y={node.y}
-            selected={selectedNodes.has(node.id)}
-            isStart={startNodes.has(node.id)}
-            draggable={editable && !props.panning}
-            scale={view.scale}
-            onDragMove={onNodeDragMove}
-            onDragEnd={onNodeDragEnd}
-          />
-        ))}
+        {drag && doc.segments.filter((segment) => activeSegmentIds.has(segment.id)).map((segment) => segmentLine(segment, dragPositions))}
+        {drag && <NodeDot id={drag.nodeId} x={drag.x} y={drag.y} selected isStart={startNodes.has(drag.nodeId)} scale={view.scale} />}
+        {props.mode && !drag && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}
         {props.preview && (
           <Line points={[props.preview.from.x, props.preview.from.y, props.preview.to.x, props.preview.to.y]} stroke="#2d6a96" strokeWidth={2 / view.scale} dash={[6 / view.scale, 4 / view.scale]} listening={false} />
         )}

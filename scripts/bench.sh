@@ -1,0 +1,26 @@
+#!/usr/bin/env bash
+# npm run bench: the engine's speed figures, then the plan editor's in Chromium against a
+# production build on loopback (its own database, antinode_bench).
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+cd "$ROOT"
+ensure_node
+ensure_node_modules
+
+step "Acoustic engine"
+node node_modules/tsx/dist/cli.mjs bench/run.ts || fail "the engine benchmark failed"
+
+ensure_chromium
+ensure_postgres_installed
+ensure_cluster
+start_postgres
+reset_database antinode_bench
+prepare_database antinode_bench
+export ANTINODE_DIST_DIR=.next-bench
+BENCH_PORT="${ANTINODE_BENCH_PORT:-3200}"
+step "Building the app for the editor benchmark"
+node node_modules/next/dist/bin/next build >"$DATA_DIR/bench-build.log" 2>&1 || { tail -n 40 "$DATA_DIR/bench-build.log" >&2; fail "the build failed (log in .data/bench-build.log)"; }
+node node_modules/next/dist/bin/next start -p "$BENCH_PORT" -H 127.0.0.1 >"$DATA_DIR/bench-server.log" 2>&1 &
+SERVER_PID=$!
+trap 'kill $SERVER_PID 2>/dev/null' EXIT
+wait_for_health "http://127.0.0.1:$BENCH_PORT/api/v1/health" "$SERVER_PID"
+ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/editor/run.ts || fail "the editor benchmark failed"
