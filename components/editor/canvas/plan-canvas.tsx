@@ -34,6 +34,8 @@ export interface PlanCanvasProps {
   calibration: readonly Point[];
   onPointer: (pointer: CanvasPointer) => void;
   onNodeDrag: (nodeId: string, point: Point, phase: 'move' | 'end') => void;
+  // Told whenever the view pans or zooms, so HTML overlays (comment pins) can follow the plan.
+  onViewChange?: (view: View) => void;
 }
 
 const GRID_AREA_PX = { width: 4000, height: 3000 };
@@ -75,6 +77,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     fittedFor.current = key;
     setView(fitView(contentWidth, contentHeight, widthPx, heightPx));
   }, [background?.url, contentWidth, contentHeight, widthPx, heightPx]);
+
+  const { onViewChange } = props;
+  useEffect(() => { onViewChange?.(view); }, [view, onViewChange]);
 
   const positions = useMemo(() => nodePositions(doc), [doc]);
   const dragNodeId = drag?.nodeId ?? null;
@@ -206,3 +211,4 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     </Stage>
   );
 }
+export type { View } from './view';
