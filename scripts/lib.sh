@@ -24,7 +24,8 @@ as_root() {
 
 # Run a command as the user that owns the database cluster (PostgreSQL refuses root).
 as_db_owner() {
-  if [ "$(id -u)" = 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  # From / so the postgres user never starts in a folder it cannot read.
+  if [ "$(id -u)" = 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 apt_install() {
