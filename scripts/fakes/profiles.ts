@@ -13,15 +13,17 @@ export interface FakeProfile {
 }
 
 const ROOT = path.resolve(__dirname, '..', '..');
+// Moves every fake's port, for running a second checkout beside this one (default 0).
+const OFFSET = Number(process.env.ANTINODE_FAKE_PORT_OFFSET ?? 0);
 
 export const PROFILES: Record<'app' | 'test', FakeProfile> = {
   app: {
-    smtpPort: 1025, mailWebPort: 1080, s3Port: 4569, s3Directory: path.join(ROOT, '.data', 's3'),
-    paymentsPort: 12111, paymentsStateFile: path.join(ROOT, '.data', 'payments-app.json'), appPort: Number(process.env.PORT ?? 3000),
+    smtpPort: 1025 + OFFSET, mailWebPort: 1080 + OFFSET, s3Port: 4569 + OFFSET, s3Directory: path.join(ROOT, '.data', 's3'),
+    paymentsPort: 12111 + OFFSET, paymentsStateFile: path.join(ROOT, '.data', 'payments-app.json'), appPort: Number(process.env.PORT ?? 3000),
   },
   test: {
-    smtpPort: 1026, mailWebPort: 1081, s3Port: 4570, s3Directory: path.join(ROOT, '.data', 's3-test'),
-    paymentsPort: 12112, paymentsStateFile: path.join(ROOT, '.data', 'payments-test.json'), appPort: Number(process.env.ANTINODE_E2E_PORT ?? 3100),
+    smtpPort: 1026 + OFFSET, mailWebPort: 1081 + OFFSET, s3Port: 4570 + OFFSET, s3Directory: path.join(ROOT, '.data', 's3-test'),
+    paymentsPort: 12112 + OFFSET, paymentsStateFile: path.join(ROOT, '.data', 'payments-test.json'), appPort: Number(process.env.ANTINODE_E2E_PORT ?? 3100),
   },
 };
 
