@@ -1,5 +1,6 @@
 // The plan document: plain readonly data. Changed only by pure functions that return a new document.
 import type { Lining, Section, Termination } from '@/lib/acoustic';
+import type { PlanRoom, PlanTreatment } from './rooms/room-types';
 
 export type { Lining, Section, Termination };
 
@@ -44,9 +45,12 @@ export interface PlanDocument {
   readonly nodes: readonly PlanNode[];
   readonly segments: readonly PlanSegment[];
   readonly runs: readonly PlanRun[];
-  readonly rooms: readonly PlanPlaceholder[];
+  readonly rooms: readonly PlanRoom[];
+  /** Kept for documents that have them; a room holds its own outlet and listener. */
   readonly outlets: readonly PlanPlaceholder[];
   readonly listeners: readonly PlanPlaceholder[];
+  /** The chosen treatments (absent in documents saved before treatments existed). */
+  readonly treatments?: readonly PlanTreatment[];
 }
 
 /** Round Ø 250 mm: the section of a newly drawn run. */
@@ -56,7 +60,7 @@ export const DEFAULT_END_TERMINATION: Termination = { kind: 'open', flange: 'unf
 export const DEFAULT_TEMPERATURE_C = 20;
 
 export function emptyDocument(): PlanDocument {
-  return { schemaVersion: 1, nodes: [], segments: [], runs: [], rooms: [], outlets: [], listeners: [] };
+  return { schemaVersion: 1, nodes: [], segments: [], runs: [], rooms: [], outlets: [], listeners: [], treatments: [] };
 }
 
 export function findNode(doc: PlanDocument, nodeId: string): PlanNode | undefined {
@@ -74,4 +78,8 @@ export function findRun(doc: PlanDocument, runId: string): PlanRun | undefined {
 /** Node positions by id, for geometry on many segments at once. */
 export function nodePositions(doc: PlanDocument): Map<string, PlanNode> {
   return new Map(doc.nodes.map((node) => [node.id, node]));
+}
+
+export function findRoom(doc: PlanDocument, roomId: string): PlanRoom | undefined {
+  return doc.rooms.find((room) => room.id === roomId);
 }

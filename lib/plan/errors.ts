@@ -4,6 +4,7 @@ export interface PlanLocation {
   runId?: string;
   nodeId?: string;
   segmentId?: string;
+  roomId?: string;
 }
 
 export class PlanError extends Error {

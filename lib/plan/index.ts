@@ -15,3 +15,4 @@ export * from './commands';
 export * from './history';
 export * from './units';
 export * from './schedule-csv';
+export * from './rooms';

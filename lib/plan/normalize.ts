@@ -71,7 +71,15 @@ export function normalizeDocument(input: PlanDocument, newId: IdGenerator): Plan
     const endValid = run.endNodeId !== null && run.endNodeId !== run.startNodeId && component.nodeIds.has(run.endNodeId) && degreeIn(adjacency, run.endNodeId) === 1;
     return { ...run, endNodeId: endValid ? run.endNodeId : null, terminations };
   });
-  return { ...doc, runs };
+  return { ...doc, runs, rooms: unlinkMissingOutlets(doc) };
+}
+
+/** A room whose outlet point was deleted keeps its place in the room but feeds from no run. */
+function unlinkMissingOutlets(doc: PlanDocument): PlanDocument['rooms'] {
+  const nodeIds = new Set(doc.nodes.map((node) => node.id));
+  const stale = doc.rooms.some((room) => room.outlet.nodeId !== null && !nodeIds.has(room.outlet.nodeId));
+  if (!stale) return doc.rooms;
+  return doc.rooms.map((room) => (room.outlet.nodeId !== null && !nodeIds.has(room.outlet.nodeId) ? { ...room, outlet: { ...room.outlet, nodeId: null } } : room));
 }
 
 /** Drops selected ids that no longer exist and an active run that is gone. */

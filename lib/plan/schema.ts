@@ -1,59 +1,10 @@
 // The one zod schema of the plan document, shared by the editor and the server.
 import { z } from 'zod';
 import type { PlanDocument } from './document';
+import { planTreatmentSchema, roomSchema } from './rooms/room-schema';
+import { fanSchema, finite, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, sectionSchema, temperatureCSchema, terminationSchema } from './schema-parts';
 
-export const MAX_ID_LENGTH = 40;
-export const MAX_ITEMS = 5000;
-export const MIN_SECTION_M = 0.01;
-export const MIN_TEMPERATURE_C = -40;
-export const MAX_TEMPERATURE_C = 60;
-
-const idSchema = z
-  .string({ error: 'must be an id (text)' })
-  .min(1, 'must not be empty')
-  .max(MAX_ID_LENGTH, `must be at most ${MAX_ID_LENGTH} characters`);
-
-const finite = (what: string) => z.number({ error: `${what} must be a finite number` });
-
-const sectionSizeM = finite('a section size').min(MIN_SECTION_M, `must be at least ${MIN_SECTION_M} m (10 mm)`).max(10, 'must be at most 10 m');
-
-export const sectionSchema = z.discriminatedUnion(
-  'shape',
-  [
-    z.object({ shape: z.literal('round'), diameterM: sectionSizeM }),
-    z.object({ shape: z.literal('rect'), widthM: sectionSizeM, heightM: sectionSizeM }),
-  ],
-  { error: "shape must be 'round' or 'rect'" },
-);
-
-const absorptionSchema = finite('absorption').min(0, 'must be between 0 and 1').max(1, 'must be between 0 and 1');
-
-export const liningSchema = z.object({
-  thicknessM: finite('lining thickness').gt(0, 'must be more than 0 m').max(1, 'must be at most 1 m'),
-  absorption: absorptionSchema,
-});
-
-export const terminationSchema = z.discriminatedUnion(
-  'kind',
-  [
-    z.object({ kind: z.literal('closed') }),
-    z.object({ kind: z.literal('open'), flange: z.enum(['flanged', 'unflanged'], { error: "must be 'flanged' or 'unflanged'" }) }),
-    z.object({ kind: z.literal('lined'), absorption: absorptionSchema }),
-    z.object({ kind: z.literal('anechoic') }),
-  ],
-  { error: "kind must be 'closed', 'open', 'lined' or 'anechoic'" },
-);
-
-export const temperatureCSchema = finite('temperature')
-  .min(MIN_TEMPERATURE_C, `must be at least ${MIN_TEMPERATURE_C} °C`)
-  .max(MAX_TEMPERATURE_C, `must be at most ${MAX_TEMPERATURE_C} °C`);
-
-export const fanSchema = z.object({
-  blades: z.number().int('must be a whole number').min(1, 'must be at least 1').max(100, 'must be at most 100'),
-  rpm: finite('speed').gt(0, 'must be more than 0 rpm').max(100000, 'must be at most 100000 rpm'),
-});
-
-export const lengthOverrideMSchema = finite('length').gt(0, 'must be more than 0 m').max(100000, 'must be at most 100 km');
+export * from './schema-parts';
 
 const nodeSchema = z.object({ id: idSchema, x: finite('x'), y: finite('y') });
 
@@ -79,15 +30,18 @@ const runSchema = z.object({
 });
 
 const placeholders = z.array(z.record(z.string(), z.unknown())).max(MAX_ITEMS);
+const MAX_ROOMS = 500;
 
 const documentShape = z.object({
   schemaVersion: z.literal(1, { error: 'must be 1' }),
   nodes: z.array(nodeSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} nodes`),
   segments: z.array(segmentSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} segments`),
   runs: z.array(runSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} runs`),
-  rooms: placeholders,
+  rooms: z.array(roomSchema).max(MAX_ROOMS, `at most ${MAX_ROOMS} rooms`),
   outlets: placeholders,
   listeners: placeholders,
+  // Documents saved before treatments existed have none.
+  treatments: z.array(planTreatmentSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} treatments`).default([]),
 });
 
 type DocumentShape = z.infer<typeof documentShape>;
@@ -116,6 +70,26 @@ function checkReferences(doc: DocumentShape, context: z.RefinementCtx): void {
     if (run.endNodeId !== null && !nodeIds.has(run.endNodeId)) context.addIssue({ code: 'custom', path: ['runs', index, 'endNodeId'], message: `names node "${run.endNodeId}", which does not exist` });
     for (const nodeId of Object.keys(run.terminations)) {
       if (!nodeIds.has(nodeId)) context.addIssue({ code: 'custom', path: ['runs', index, 'terminations', nodeId], message: `names node "${nodeId}", which does not exist` });
+    }
+  });
+  checkRooms(doc, nodeIds, context);
+}
+
+/** Room ids unique, the outlet's node exists, outlet and listener inside the box. */
+function checkRooms(doc: DocumentShape, nodeIds: ReadonlySet<string>, context: z.RefinementCtx): void {
+  const roomIds = new Set<string>();
+  doc.rooms.forEach((room, index) => {
+    if (roomIds.has(room.id)) context.addIssue({ code: 'custom', path: ['rooms', index, 'id'], message: `repeats the id "${room.id}"` });
+    roomIds.add(room.id);
+    if (room.outlet.nodeId !== null && !nodeIds.has(room.outlet.nodeId)) {
+      context.addIssue({ code: 'custom', path: ['rooms', index, 'outlet', 'nodeId'], message: `names node "${room.outlet.nodeId}", which does not exist` });
+    }
+    for (const place of ['outlet', 'listener'] as const) {
+      const point = room[place];
+      const limits = [['xM', room.lengthM, 'length'], ['yM', room.widthM, 'width'], ['zM', room.heightM, 'height']] as const;
+      for (const [axis, sizeM, side] of limits) {
+        if (point[axis] > sizeM) context.addIssue({ code: 'custom', path: ['rooms', index, place, axis], message: `must be inside the room (at most its ${side}, ${sizeM} m)` });
+      }
     }
   });
 }

@@ -17,3 +17,13 @@ export const savePlanSchema = z.object({
   document: planDocumentSchema,
 });
 export type SavePlanInput = z.infer<typeof savePlanSchema>;
+
+// The flag whose treatments to evaluate: a room's (roomId) or a run's that feeds no room (runId).
+export const evaluateTreatmentsSchema = z
+  .object({
+    roomId: z.string({ error: 'roomId must be text' }).min(1).max(40).nullable().optional(),
+    runId: z.string({ error: 'runId must be text' }).min(1).max(40).nullable().optional(),
+    flagId: z.string({ error: 'flagId must be the id of a flag in the risk list' }).min(1, 'flagId must not be empty').max(400),
+  })
+  .refine((value) => Boolean(value.roomId) || Boolean(value.runId), { message: 'Send the roomId or the runId of the flag.', path: ['roomId'] });
+export type EvaluateTreatmentsInput = z.infer<typeof evaluateTreatmentsSchema>;

@@ -17,7 +17,12 @@ export type CommandName =
   | 'set-termination'
   | 'set-run-properties'
   | 'choose-end'
-  | 'set-length-override';
+  | 'set-length-override'
+  | 'add-room'
+  | 'update-room'
+  | 'delete-room'
+  | 'add-treatment'
+  | 'remove-treatment';
 
 export interface CommandResult {
   readonly doc: PlanDocument;

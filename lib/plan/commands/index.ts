@@ -11,6 +11,8 @@ import { moveNode } from './move-node';
 import { chooseEnd, setRunProperties, setTermination } from './run-properties';
 import { setLengthOverride, setLining, setSection } from './segment-properties';
 import { splitSegment } from './split-segment';
+import { addRoom, deleteRoom, updateRoom } from './rooms';
+import { addTreatment, removeTreatment } from './treatments';
 
 export const COMMANDS = {
   'draw-segment': drawSegment,
@@ -24,6 +26,11 @@ export const COMMANDS = {
   'set-run-properties': setRunProperties,
   'choose-end': chooseEnd,
   'set-length-override': setLengthOverride,
+  'add-room': addRoom,
+  'update-room': updateRoom,
+  'delete-room': deleteRoom,
+  'add-treatment': addTreatment,
+  'remove-treatment': removeTreatment,
 } as const satisfies { [Name in CommandName]: { name: Name } };
 
 export type CommandArgs<Name extends CommandName> = Parameters<(typeof COMMANDS)[Name]['perform']>[2];
@@ -53,5 +60,8 @@ export type { MoveNodeArgs } from './move-node';
 export type { DeleteSelectionArgs } from './delete-selection';
 export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs } from './segment-properties';
 export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs } from './run-properties';
+export type { AddRoomArgs, UpdateRoomArgs, DeleteRoomArgs } from './rooms';
+export type { AddTreatmentArgs, RemoveTreatmentArgs } from './treatments';
+export { applyPlanChange } from './treatments';
 export { KEY_BINDINGS, matchKeyBinding } from './key-bindings';
 export type { EditorAction, KeyBinding, KeyPress } from './key-bindings';

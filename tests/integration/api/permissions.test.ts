@@ -47,6 +47,8 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'PATCH /api/v1/plans/[planId]': 'plan.edit',
   'PUT /api/v1/plans/[planId]/document': 'plan.edit',
   'GET /api/v1/plans/[planId]/results': 'plan.read',
+  'GET /api/v1/plans/[planId]/risks': 'plan.read',
+  'POST /api/v1/plans/[planId]/treatments/evaluate': 'analysis.run',
   'POST /api/v1/plans/[planId]/background': 'plan.edit',
   'DELETE /api/v1/plans/[planId]/background': 'plan.edit',
   'GET /api/v1/uploads/[uploadId]': 'plan.read',

@@ -1,0 +1,54 @@
+// Room edits: add a room, change any of its properties, delete it.
+import { findNode, findRoom, type PlanDocument } from '../document';
+import { PlanError } from '../errors';
+import { newRoom, type NewRoomShape } from '../rooms/room-input';
+import { roomSchema } from '../rooms/room-schema';
+import type { PlanRoom } from '../rooms/room-types';
+import { checked, defineCommand } from './define';
+
+export type AddRoomArgs = NewRoomShape;
+
+export interface UpdateRoomArgs {
+  readonly roomId: string;
+  readonly changes: Partial<Omit<PlanRoom, 'id'>>;
+}
+
+export interface DeleteRoomArgs {
+  readonly roomId: string;
+}
+
+const AXES = [['xM', 'lengthM', 'length'], ['yM', 'widthM', 'width'], ['zM', 'heightM', 'height']] as const;
+
+/** The schema's checks plus: outlet and listener inside the box, the outlet's point on the plan. */
+function checkedRoom(doc: PlanDocument, candidate: PlanRoom): PlanRoom {
+  const room = checked(roomSchema, candidate, 'Room');
+  for (const place of ['outlet', 'listener'] as const) {
+    for (const [axis, side, word] of AXES) {
+      if (room[place][axis] > room[side]) throw new PlanError(`Room ${place} ${axis.slice(0, 1)}: must be inside the room (at most its ${word}, ${room[side]} m).`, { roomId: room.id });
+    }
+  }
+  if (room.outlet.nodeId !== null && !findNode(doc, room.outlet.nodeId)) throw new PlanError(`Room outlet: there is no point with id "${room.outlet.nodeId}".`, { roomId: room.id });
+  return room;
+}
+
+function targetRoom(doc: PlanDocument, roomId: string): PlanRoom {
+  const room = findRoom(doc, roomId);
+  if (!room) throw new PlanError(`There is no room with id "${roomId}".`, { roomId });
+  return room;
+}
+
+export const addRoom = defineCommand('add-room', 'Add a rectangular room to the plan.', (doc, state, args: AddRoomArgs, newId) => {
+  const room = checkedRoom(doc, newRoom(newId(), args));
+  return { doc: { ...doc, rooms: [...doc.rooms, room] }, state };
+});
+
+export const updateRoom = defineCommand('update-room', "Change a room's size, place, finishes, criterion, outlet or listener.", (doc, state, args: UpdateRoomArgs) => {
+  const room = targetRoom(doc, args.roomId);
+  const changed = checkedRoom(doc, { ...room, ...args.changes, id: room.id });
+  return { doc: { ...doc, rooms: doc.rooms.map((candidate) => (candidate.id === room.id ? changed : candidate)) }, state };
+});
+
+export const deleteRoom = defineCommand('delete-room', 'Delete a room (its chosen treatments stay in the list).', (doc, state, args: DeleteRoomArgs) => {
+  targetRoom(doc, args.roomId);
+  return { doc: { ...doc, rooms: doc.rooms.filter((room) => room.id !== args.roomId) }, state };
+});

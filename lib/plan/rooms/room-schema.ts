@@ -1,0 +1,87 @@
+// zod schemas of rooms and chosen treatments, part of the one plan document schema.
+import { z } from 'zod';
+import { SURFACE_NAMES, type SurfaceName } from '@/lib/acoustic';
+import { finite, idSchema as id, liningSchema, terminationSchema } from '../schema-parts';
+
+const OCTAVE_BAND_COUNT = 8;
+export const MAX_ROOM_SIDE_M = 200;
+export const MAX_NC = 70;
+const MAX_TEXT = 400;
+
+
+export const roomSideMSchema = finite('a room dimension').gt(0, 'must be more than 0 m').max(MAX_ROOM_SIDE_M, `must be at most ${MAX_ROOM_SIDE_M} m`);
+export const roomNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the room a name').max(120, 'must be at most 120 characters');
+export const criterionNcSchema = finite('NC').min(0, 'must be at least NC 0').max(MAX_NC, `must be at most NC ${MAX_NC}`);
+
+const coordinateM = finite('a position').min(0, 'must be inside the room (at least 0 m)').max(MAX_ROOM_SIDE_M, `must be at most ${MAX_ROOM_SIDE_M} m`);
+export const roomPointSchema = z.object({ xM: coordinateM, yM: coordinateM, zM: coordinateM });
+
+export const absorptionBandsSchema = z
+  .array(finite('absorption').min(0, 'must be between 0 and 1').max(1, 'must be between 0 and 1'))
+  .length(OCTAVE_BAND_COUNT, `needs ${OCTAVE_BAND_COUNT} octave bands, 63 Hz to 8 kHz`);
+
+const surfaceSchema = z.object({ finishId: id.nullable(), absorption: absorptionBandsSchema });
+
+export const surfacesSchema = z.object(
+  Object.fromEntries(SURFACE_NAMES.map((name) => [name, surfaceSchema])) as Record<SurfaceName, typeof surfaceSchema>,
+);
+
+export const soundPowerBandsSchema = z
+  .array(finite('sound power').min(-20, 'must be at least -20 dB').max(160, 'must be at most 160 dB'))
+  .length(OCTAVE_BAND_COUNT, `needs ${OCTAVE_BAND_COUNT} octave bands, 63 Hz to 8 kHz`);
+
+/** A room as stored; positions inside the box are checked in the document's refinement. */
+export const roomSchema = z.object({
+  id,
+  name: roomNameSchema,
+  x: finite('x'),
+  y: finite('y'),
+  lengthM: roomSideMSchema,
+  widthM: roomSideMSchema,
+  heightM: roomSideMSchema,
+  surfaces: surfacesSchema,
+  criterionNc: criterionNcSchema,
+  outlet: roomPointSchema.extend({ nodeId: id.nullable() }),
+  listener: roomPointSchema,
+  outletSoundPowerDb: soundPowerBandsSchema.nullable(),
+});
+
+const positive = (what: string) => finite(what).gt(0, 'must be more than 0');
+const segmentIndex = z.number().int('must be a whole number').min(0, 'must be at least 0');
+
+export const treatmentSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('line-segment'), segmentIndex, lengthM: positive('length').optional(), thicknessM: positive('thickness'), absorption: finite('absorption').min(0).max(1) }),
+  z.object({ kind: z.literal('change-termination'), end: z.enum(['start', 'end']), termination: terminationSchema }),
+  z.object({ kind: z.literal('retune-length'), segmentIndex: segmentIndex.optional(), deltaLengthM: finite('length change').optional() }),
+  z.object({ kind: z.literal('side-branch-resonator'), segmentIndex: segmentIndex.optional(), tuneHz: positive('tuning').optional(), diameterM: positive('bore').optional(), lengthM: positive('length').optional() }),
+], { error: 'kind must be line-segment, change-termination, retune-length or side-branch-resonator' });
+
+const quantitySchema = z.object({
+  valueHz: finite('frequency').optional(),
+  distanceHz: finite('distance').optional(),
+  windowHz: finite('window').optional(),
+  levelDb: finite('level').optional(),
+  criterionDb: finite('criterion').optional(),
+});
+
+export const planChangeSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('length-override'), segmentId: id, lengthM: positive('length') }),
+  z.object({ kind: z.literal('lining'), segmentId: id, lining: liningSchema }),
+  z.object({ kind: z.literal('termination'), nodeId: id, termination: terminationSchema }),
+]);
+
+export const planTreatmentSchema = z.object({
+  id,
+  runId: id,
+  roomId: id.nullable(),
+  flagId: z.string().min(1).max(MAX_TEXT),
+  flagKind: z.enum(['resonance-near-tone', 'resonance-near-room-mode', 'level-above-criterion']),
+  flagSubject: z.string().min(1).max(MAX_TEXT),
+  flagReason: z.string().max(2000),
+  treatment: treatmentSchema,
+  description: z.string().max(2000),
+  before: quantitySchema,
+  after: quantitySchema,
+  clears: z.boolean(),
+  planChange: planChangeSchema.nullable(),
+});

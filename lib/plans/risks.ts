@@ -1,0 +1,96 @@
+// Risk flags across the plan, computed from the document: every room with the run that feeds it,
+// and every run with a fan that feeds no room. Each entry carries what the room charts need.
+import {
+  analyzeRoom, analyzeRun, assessRisks, bladePassHarmonicsHz, ncCriterionCurveDb, ncRating, outletLevels,
+  type OutletLevelBand, type RiskFlag, type RoomAnalysis,
+} from '@/lib/acoustic';
+import type { PlanDocument } from '@/lib/plan/document';
+import { riskContext, type RiskContext } from './risk-context';
+
+/** Fan harmonics drawn on the room's mode chart (the flags check the engine's default, 3). */
+const CHART_HARMONICS = 3;
+/** Room modes listed up to this frequency, Hz, or the duct analysis band's top when higher (product choice). */
+const MIN_MODE_CHART_HZ = 300;
+
+export interface PlacedFlag extends RiskFlag {
+  runId: string;
+  runName: string;
+  roomId: string | null;
+  roomName: string | null;
+}
+
+export interface RoomResult {
+  roomId: string;
+  name: string;
+  runId: string | null;
+  problem: string | null;
+  analysis: RoomAnalysis | null;
+  /** The feeding run's resonances and the fan's blade-pass harmonics, Hz, for the mode chart. */
+  resonancesHz: number[];
+  fanTonesHz: number[];
+  /** NC criterion curve, 63 Hz to 8 kHz, dB. */
+  criterionDb: number[];
+  /** Predicted levels at the listener (when the outlet sound power is given) and their NC rating. */
+  levels: OutletLevelBand[] | null;
+  levelsNc: number | null;
+}
+
+export interface PlanRisks {
+  rooms: RoomResult[];
+  flags: PlacedFlag[];
+}
+
+function place(flags: RiskFlag[], context: RiskContext): PlacedFlag[] {
+  return flags.map((flag) => ({ ...flag, runId: context.run.id, runName: context.run.name, roomId: context.room?.id ?? null, roomName: context.room?.name ?? null }));
+}
+
+/** Error messages from the plan model and the engine's input checks become the entry's problem. */
+function problemOf(error: unknown): string {
+  if (error instanceof Error && !(error instanceof TypeError)) return error.message;
+  throw error;
+}
+
+function roomResult(doc: PlanDocument, metresPerPixel: number, room: PlanDocument['rooms'][number]): { result: RoomResult; flags: PlacedFlag[] } {
+  const empty: RoomResult = { roomId: room.id, name: room.name, runId: null, problem: null, analysis: null, resonancesHz: [], fanTonesHz: [], criterionDb: ncCriterionCurveDb(room.criterionNc), levels: null, levelsNc: null };
+  try {
+    const context = riskContext(doc, metresPerPixel, { roomId: room.id });
+    const runAnalysis = analyzeRun(context.input.run);
+    const flags = assessRisks(context.input, runAnalysis);
+    const roomInput = context.input.room!;
+    const maxModeHz = Math.max(MIN_MODE_CHART_HZ, runAnalysis.maxHz);
+    const analysis = analyzeRoom(roomInput, { maxModeHz });
+    const levels = context.input.outletSoundPowerDb ? outletLevels(context.input.run, roomInput, context.input.outletSoundPowerDb) : null;
+    const fan = context.input.fan;
+    return {
+      result: {
+        ...empty,
+        runId: context.run.id,
+        analysis,
+        resonancesHz: runAnalysis.resonances.map((resonance) => resonance.frequencyHz),
+        fanTonesHz: fan ? bladePassHarmonicsHz(fan.blades, fan.rpm, CHART_HARMONICS) : [],
+        levels,
+        levelsNc: levels ? ncRating(levels.map((band) => band.levelDb)) : null,
+      },
+      flags: place(flags, context),
+    };
+  } catch (error) {
+    return { result: { ...empty, problem: problemOf(error) }, flags: [] };
+  }
+}
+
+export function planRisks(doc: PlanDocument, metresPerPixel: number): PlanRisks {
+  const rooms = doc.rooms.map((room) => roomResult(doc, metresPerPixel, room));
+  const fedRunIds = new Set(rooms.map((entry) => entry.result.runId).filter((runId): runId is string => runId !== null));
+  const runFlags = doc.runs
+    .filter((run) => run.fan !== null && !fedRunIds.has(run.id))
+    .flatMap((run) => {
+      try {
+        const context = riskContext(doc, metresPerPixel, { runId: run.id });
+        return place(assessRisks(context.input), context);
+      } catch (error) {
+        problemOf(error);
+        return [];
+      }
+    });
+  return { rooms: rooms.map((entry) => entry.result), flags: [...rooms.flatMap((entry) => entry.flags), ...runFlags] };
+}
