@@ -5,7 +5,7 @@ import { echoPolyline } from './echo-geometry';
 
 const WIDTH = 320;
 const HEIGHT = 260;
-const MARGIN = { left: 40, right: 12, top: 18, bottom: 8 };
+const MARGIN = { left: 52, right: 12, top: 18, bottom: 8 };
 
 // Space-time diagram of the reflections seen from the start end: position along the run
 // across, time down. Upright reflections solid, inverted ones dashed, each labelled.
