@@ -11,6 +11,7 @@ import { tinyPng } from '../helpers/files';
 import { newLinkToken } from '@/lib/tokens';
 import { Invitation, Membership } from '@/models';
 import { addMember, createTestTeam, type TestTeam } from '../helpers/people';
+import { reviewFixtures } from '../helpers/revisions';
 import { call, listRouteFiles, loadHandlers, type Method } from '../helpers/routes';
 
 // What each route handler must require. A new handler fails the walk until it is listed here.
@@ -53,6 +54,18 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'DELETE /api/v1/plans/[planId]/background': 'plan.edit',
   'GET /api/v1/uploads/[uploadId]': 'plan.read',
   'DELETE /api/v1/team/members/[memberId]': 'members.manage',
+  'GET /api/v1/plans/[planId]/revisions': 'plan.read',
+  'POST /api/v1/plans/[planId]/revisions': 'plan.edit',
+  'GET /api/v1/revisions/[revisionId]': 'plan.read',
+  'PUT /api/v1/revisions/[revisionId]/decisions': 'review.write',
+  'POST /api/v1/revisions/[revisionId]/review': 'review.write',
+  'GET /api/v1/revisions/[revisionId]/schedules': 'schedule.read',
+  'POST /api/v1/revisions/[revisionId]/schedules': 'schedule.issue',
+  'GET /api/v1/revisions/[revisionId]/schedule-preview': 'schedule.read',
+  'GET /api/v1/schedules/[scheduleId]': 'schedule.read',
+  'GET /api/v1/comments': 'plan.read',
+  'POST /api/v1/comments': 'comment.write',
+  'PATCH /api/v1/comments/[commentId]': 'comment.write',
 };
 
 const WRITE_METHODS = new Set<Method>(['POST', 'PUT', 'PATCH', 'DELETE']);
@@ -74,7 +87,8 @@ beforeAll(async () => {
   // Every dynamic segment a route may use needs a value from this team.
   const plan = await createPlan(testTeam.team.id, testTeam.members.acoustician.id, project.id, 'Walk plan');
   const upload = await storePlanBackground(testTeam.team.id, testTeam.members.acoustician.id, 'walk.png', tinyPng());
-  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id, planId: plan.id, uploadId: upload.id };
+  const reviewed = await reviewFixtures(testTeam, project.id);
+  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id, planId: plan.id, uploadId: upload.id, ...reviewed };
   const ids = [testTeam.team.id, extra.id, ...Object.values(fixtureParams), ...Object.values(testTeam.members).map((user) => user.id)];
   thisTeamIds = new RegExp(ids.join('|'));
 });

@@ -1,0 +1,26 @@
+// The review mails: to reviewers when a revision is submitted, to its submitter when done.
+import { revisionPath } from '@/lib/revisions/links';
+import { revisionStateLabel } from '@/lib/revisions/states';
+import type { RevisionSummary } from '@/lib/revisions/types';
+import { appUrl } from '@/lib/tokens';
+import { reviewFinishedMail, reviewRequestedMail } from './messages';
+import { notify } from './notify';
+import { membersWhoMay, userById } from './recipients';
+
+export async function announceReviewRequested(teamId: string, submitter: { id: string; name: string }, planName: string, revision: RevisionSummary): Promise<number> {
+  const reviewers = await membersWhoMay(teamId, 'review.write', submitter.id);
+  const link = appUrl(revisionPath(revision.planId, revision.number));
+  const sent = await Promise.all(reviewers.map((reviewer) => notify(reviewer, 'review_requested', reviewRequestedMail({
+    to: reviewer.email, submitterName: submitter.name, planName, number: revision.number, link,
+  }))));
+  return sent.filter(Boolean).length;
+}
+
+export async function announceReviewFinished(submitterId: string | null, reviewer: { id: string; name: string }, planName: string, revision: RevisionSummary): Promise<boolean> {
+  const submitter = await userById(submitterId);
+  if (!submitter || submitter.id === reviewer.id) return false;
+  return notify(submitter, 'review_finished', reviewFinishedMail({
+    to: submitter.email, reviewerName: reviewer.name, planName, number: revision.number,
+    outcome: revisionStateLabel(revision.state).toLowerCase(), link: appUrl(revisionPath(revision.planId, revision.number)),
+  }));
+}

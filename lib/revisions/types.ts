@@ -1,0 +1,39 @@
+// What a frozen revision holds, as read back by pages, routes and the schedule.
+import type { PlanDocument } from '@/lib/plan/document';
+import type { RunResult } from '@/lib/plans/results';
+import type { RevisionState } from './states';
+
+// Rooms, risk flags and treatments as they were when the revision was frozen (each present
+// only when the plan had them).
+export interface RevisionExtras {
+  rooms?: readonly unknown[];
+  risks?: readonly RiskRow[];
+  treatments?: readonly TreatmentRow[];
+}
+
+export interface RiskRow { id: string; runId: string | null; label: string; detail: string }
+export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; beforeDb: number | null; afterDb: number | null }
+
+export interface RevisionSummary {
+  id: string;
+  planId: string;
+  number: number;
+  planVersion: number;
+  state: RevisionState;
+  note: string;
+  submittedByName: string;
+  reviewedByName: string | null;
+  reviewedAt: string | null;
+  createdAt: string;
+}
+
+export interface RevisionView extends RevisionSummary {
+  teamId: string;
+  planName: string;
+  project: { id: string; name: string };
+  metresPerPixel: number;
+  document: PlanDocument;
+  analysis: RunResult[];
+  extras: RevisionExtras;
+  background: { id: string; contentType: string; widthPx: number | null; heightPx: number | null } | null;
+}

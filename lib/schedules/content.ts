@@ -1,0 +1,155 @@
+// Everything a treatment schedule shows, gathered from a frozen revision as plain data, so the
+// PDF pieces only lay it out.
+import type { Termination } from '@/lib/acoustic';
+import { nodePositions } from '@/lib/plan/document';
+import type { RunResult } from '@/lib/plans/results';
+import { resonanceTarget } from '@/lib/revisions/rows';
+import { revisionStateLabel } from '@/lib/revisions/states';
+import type { RevisionView, RiskRow, TreatmentRow } from '@/lib/revisions/types';
+import type { DecisionView } from '@/lib/reviews/data';
+import { DECISION_LABELS } from '@/lib/reviews/decisions';
+import { describeSection, describeTermination } from './describe';
+
+export interface ScheduleLine { x1: number; y1: number; x2: number; y2: number }
+export interface ScheduleFigure { widthPx: number; heightPx: number; originX: number; originY: number; image: { data: Buffer; format: 'png' | 'jpg' } | null; lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[] }
+
+export interface ScheduleRun {
+  name: string;
+  problem: string | null;
+  temperatureC: number;
+  fan: string;
+  lengthM: number | null;
+  cutoffHz: number | null;
+  speedOfSoundMps: number | null;
+  sections: { index: number; lengthM: number; section: string; lining: string }[];
+  terminations: { where: string; kind: string }[];
+  resonances: { order: number; frequencyHz: number; q: number | null; bandwidthHz: number | null; fanTone: string; review: string }[];
+  // Resonances of the revision left out of the printed table (above the lowest orders, clear
+  // of fan tones and not flagged): how many and their range.
+  omitted: { count: number; fromHz: number; toHz: number } | null;
+  reflections: { atM: number; kind: string; magnitude: string }[];
+  warnings: string[];
+}
+
+export interface ScheduleContent {
+  projectName: string;
+  planName: string;
+  revisionNumber: number;
+  dateText: string;
+  preparedBy: string;
+  reviewedBy: string;
+  stateLabel: string;
+  draft: boolean;
+  issuedBy: string | null;
+  figure: ScheduleFigure;
+  runs: ScheduleRun[];
+  risks: readonly RiskRow[];
+  treatments: readonly TreatmentRow[];
+  rooms: readonly unknown[];
+  temperaturesC: number[];
+}
+
+const FIGURE_MARGIN_PX = 60;
+// The printed table keeps the lowest orders, where duct rumble lives, and every row that
+// matters beyond them (near a fan tone, or flagged); the revision holds the full list.
+export const PRINTED_LOWEST_ORDERS = 12;
+
+function figureOf(revision: RevisionView, image: ScheduleFigure['image']): ScheduleFigure {
+  const doc = revision.document;
+  const positions = nodePositions(doc);
+  const lines = doc.segments.flatMap((segment) => {
+    const from = positions.get(segment.from);
+    const to = positions.get(segment.to);
+    return from && to ? [{ x1: from.x, y1: from.y, x2: to.x, y2: to.y }] : [];
+  });
+  const labels = doc.runs.flatMap((run) => {
+    const start = positions.get(run.startNodeId);
+    return start ? [{ x: start.x, y: start.y, text: run.name }] : [];
+  });
+  if (image && revision.background?.widthPx && revision.background.heightPx) {
+    return { widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, lines, labels };
+  }
+  const xs = doc.nodes.map((node) => node.x);
+  const ys = doc.nodes.map((node) => node.y);
+  const minX = Math.min(...xs, 0) - FIGURE_MARGIN_PX;
+  const minY = Math.min(...ys, 0) - FIGURE_MARGIN_PX;
+  const maxX = Math.max(...xs, 400) + FIGURE_MARGIN_PX;
+  const maxY = Math.max(...ys, 300) + FIGURE_MARGIN_PX;
+  return { widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels };
+}
+
+function magnitudeText(bands: readonly { hz: number; magnitude: number }[]): string {
+  if (bands.length === 0) return '—';
+  const low = bands[0];
+  const high = bands[bands.length - 1];
+  return `${low.magnitude.toFixed(2)} at ${low.hz.toFixed(0)} Hz · ${high.magnitude.toFixed(2)} at ${high.hz.toFixed(0)} Hz`;
+}
+
+function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap<string, DecisionView>): ScheduleRun {
+  const run = revision.document.runs.find((candidate) => candidate.id === result.runId);
+  const segments = new Map(revision.document.segments.map((segment) => [segment.id, segment]));
+  const analysis = result.analysis;
+  const all = analysis?.resonances ?? [];
+  const keep = (resonance: (typeof all)[number], index: number) => index < PRINTED_LOWEST_ORDERS
+    || (result.nearFanTone[resonance.order] ?? null) !== null
+    || decisions.get(resonanceTarget(result.runId, resonance.order))?.decision === 'flagged';
+  const printed = all.filter(keep);
+  const left = all.filter((resonance, index) => !keep(resonance, index));
+  const terminations = Object.entries(run?.terminations ?? {}).map(([nodeId, termination]: [string, Termination]) => ({
+    where: nodeId === run?.startNodeId ? 'Start (fan side)' : nodeId === (result.path.at(-1)?.toNodeId ?? run?.endNodeId) ? 'End of the main path' : 'Branch end',
+    kind: describeTermination(termination),
+  }));
+  return {
+    name: result.name,
+    problem: result.problem,
+    temperatureC: run?.temperatureC ?? 20,
+    fan: run?.fan ? `${run.fan.blades} blades at ${run.fan.rpm} rpm` : 'No fan entered',
+    lengthM: analysis?.lengthM ?? null,
+    cutoffHz: analysis?.cutoffHz ?? null,
+    speedOfSoundMps: analysis?.speedOfSoundMps ?? null,
+    sections: result.path.map((piece, index) => {
+      const segment = segments.get(piece.segmentId);
+      return {
+        index: index + 1, lengthM: piece.endM - piece.startM, section: segment ? describeSection(segment.section) : '—',
+        lining: segment?.lining ? `${(segment.lining.thicknessM * 1000).toFixed(0)} mm, α ${segment.lining.absorption.toFixed(2)}` : 'none',
+      };
+    }),
+    terminations,
+    resonances: printed.map((resonance) => {
+      const tone = result.nearFanTone[resonance.order] ?? null;
+      const decision = decisions.get(resonanceTarget(result.runId, resonance.order));
+      return {
+        order: resonance.order, frequencyHz: resonance.frequencyHz, q: resonance.q, bandwidthHz: resonance.bandwidthHz,
+        fanTone: tone === null ? 'clear' : `near ${tone.toFixed(0)} Hz`,
+        review: decision ? `${DECISION_LABELS[decision.decision]}${decision.note ? `: ${decision.note}` : ''}` : 'not reviewed',
+      };
+    }),
+    omitted: left.length === 0 ? null : { count: left.length, fromHz: left[0].frequencyHz, toHz: left[left.length - 1].frequencyHz },
+    reflections: (analysis?.reflections ?? []).map((reflection) => ({ atM: reflection.atM, kind: reflection.kind, magnitude: magnitudeText(reflection.bands) })),
+    warnings: analysis?.warnings ?? [],
+  };
+}
+
+export function scheduleContent(input: {
+  revision: RevisionView; decisions: readonly DecisionView[]; image: ScheduleFigure['image']; issuedBy: string | null; date: Date;
+}): ScheduleContent {
+  const { revision } = input;
+  const decisions = new Map(input.decisions.map((decision) => [decision.target, decision]));
+  return {
+    projectName: revision.project.name,
+    planName: revision.planName,
+    revisionNumber: revision.number,
+    dateText: input.date.toISOString().slice(0, 10),
+    preparedBy: revision.submittedByName,
+    reviewedBy: revision.reviewedByName ?? 'Not reviewed yet',
+    stateLabel: revisionStateLabel(revision.state),
+    draft: revision.state !== 'approved',
+    issuedBy: input.issuedBy,
+    figure: figureOf(revision, input.image),
+    runs: revision.analysis.map((result) => runOf(revision, result, decisions)),
+    risks: revision.extras.risks ?? [],
+    treatments: revision.extras.treatments ?? [],
+    rooms: revision.extras.rooms ?? [],
+    temperaturesC: [...new Set(revision.document.runs.map((run) => run.temperatureC))].sort((a, b) => a - b),
+  };
+}

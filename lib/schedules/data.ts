@@ -1,0 +1,79 @@
+// Treatment schedules of a team's revisions: preview (rendered, not kept), issue (rendered and
+// stored through the S3 client with its SHA-256), list, and read back the issued bytes.
+import { createHash, randomUUID } from 'node:crypto';
+import { recordActivity, type ActivityActor } from '@/lib/activity/record';
+import { AppError, notFound } from '@/lib/errors';
+import { getRevisionById } from '@/lib/revisions/data';
+import { schedulePath } from '@/lib/revisions/links';
+import type { RevisionView } from '@/lib/revisions/types';
+import { listDecisions } from '@/lib/reviews/data';
+import { getObject, putObject } from '@/lib/storage/object-store';
+import { assertId } from '@/lib/team/ids';
+import { Schedule, Upload } from '@/models';
+import { scheduleContent, type ScheduleFigure } from './content';
+import { renderSchedulePdf } from './render';
+
+export interface ScheduleSummary { id: string; revisionId: string; sha256: string; bytes: number; issuedByName: string; issuedAt: string; fileName: string }
+
+function fileNameOf(revision: { planName: string; number: number }): string {
+  const plain = revision.planName.replace(/[^\w .-]+/g, '').trim().replace(/\s+/g, '-') || 'plan';
+  return `treatment-schedule-${plain}-r${revision.number}.pdf`;
+}
+
+function toSummary(row: Schedule, revision: { planName: string; number: number }): ScheduleSummary {
+  return { id: row.id, revisionId: row.revisionId, sha256: row.sha256, bytes: row.bytes, issuedByName: row.issuedByName, issuedAt: row.createdAt.toISOString(), fileName: fileNameOf(revision) };
+}
+
+async function planImage(revision: RevisionView): Promise<ScheduleFigure['image']> {
+  if (!revision.background) return null;
+  const format = revision.background.contentType === 'image/png' ? 'png' : revision.background.contentType === 'image/jpeg' ? 'jpg' : null;
+  if (!format) return null; // the PDF renderer carries PNG and JPEG only; the runs still draw
+  const upload = await Upload.findOne({ where: { id: revision.background.id, teamId: revision.teamId } });
+  if (!upload) return null;
+  return { data: Buffer.from(await getObject(upload.storageKey)), format };
+}
+
+export async function renderRevisionSchedule(revision: RevisionView, issuedBy: string | null, at: Date): Promise<Buffer> {
+  const decisions = await listDecisions(revision.teamId, revision.id);
+  const content = scheduleContent({ revision, decisions, image: await planImage(revision), issuedBy, date: at });
+  return renderSchedulePdf(content, at);
+}
+
+export async function previewSchedule(teamId: string, revisionId: string): Promise<{ bytes: Buffer; fileName: string }> {
+  const revision = await getRevisionById(teamId, revisionId);
+  return { bytes: await renderRevisionSchedule(revision, null, new Date()), fileName: fileNameOf(revision) };
+}
+
+export async function issueSchedule(teamId: string, actor: ActivityActor, revisionId: string): Promise<ScheduleSummary> {
+  const revision = await getRevisionById(teamId, revisionId);
+  const at = new Date();
+  const bytes = await renderRevisionSchedule(revision, actor.name, at);
+  const sha256 = createHash('sha256').update(bytes).digest('hex');
+  const storageKey = `teams/${teamId}/schedules/${revision.id}/${randomUUID()}.pdf`;
+  await putObject(storageKey, bytes, 'application/pdf');
+  const row = await Schedule.create({ teamId, revisionId: revision.id, storageKey, sha256, bytes: bytes.byteLength, issuedById: actor.id, issuedByName: actor.name, createdAt: at });
+  await recordActivity({
+    teamId, planId: revision.planId, actor, kind: 'schedule.issued',
+    summary: `Treatment schedule issued for revision ${revision.number}${revision.state === 'approved' ? '' : ' (draft, not approved)'}`, link: schedulePath(revision.planId, revision.number),
+  });
+  return toSummary(row, revision);
+}
+
+export async function listSchedules(teamId: string, revisionId: string): Promise<ScheduleSummary[]> {
+  const revision = await getRevisionById(teamId, revisionId);
+  const rows = await Schedule.findAll({ where: { teamId, revisionId }, order: [['createdAt', 'DESC']] });
+  return rows.map((row) => toSummary(row, revision));
+}
+
+// The issued bytes, checked against the SHA-256 recorded when they were issued.
+export async function readSchedule(teamId: string, scheduleId: string): Promise<{ summary: ScheduleSummary; bytes: Uint8Array }> {
+  assertId(scheduleId, 'That schedule');
+  const row = await Schedule.findOne({ where: { id: scheduleId, teamId } });
+  if (!row) throw notFound('That schedule');
+  const revision = await getRevisionById(teamId, row.revisionId);
+  const bytes = await getObject(row.storageKey);
+  if (createHash('sha256').update(bytes).digest('hex') !== row.sha256) {
+    throw new AppError('internal', 'The stored schedule does not match its checksum. Issue it again and tell your team admin.');
+  }
+  return { summary: toSummary(row, revision), bytes };
+}

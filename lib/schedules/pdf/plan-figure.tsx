@@ -1,0 +1,37 @@
+// The plan: the background drawing (when it is an image the PDF can carry) with every duct
+// segment drawn over it and each run named at its start.
+import { Image, Svg, Line, Circle, Text, View } from '@react-pdf/renderer';
+import type { ScheduleContent } from '../content';
+import { RUN_LINE, styles } from './styles';
+
+const FIGURE_WIDTH_PT = 499;
+const FIGURE_MAX_HEIGHT_PT = 600;
+
+export function PlanFigure({ content }: { content: ScheduleContent }) {
+  const figure = content.figure;
+  const scale = Math.min(FIGURE_WIDTH_PT / figure.widthPx, FIGURE_MAX_HEIGHT_PT / figure.heightPx);
+  const width = figure.widthPx * scale;
+  const height = figure.heightPx * scale;
+  const strokePx = 2.2 / scale;
+  return (
+    <View>
+      <Text style={styles.h2}>1. Plan with the duct runs</Text>
+      <Text style={[styles.paragraph, styles.muted]}>
+        Duct runs as frozen in revision {content.revisionNumber}; the filled dot marks each run’s start (fan side).
+        {figure.image ? '' : ' No drawing image is attached to this plan, so the runs are shown on a blank sheet.'}
+      </Text>
+      <View style={{ width, height, borderWidth: 0.5, borderColor: '#cfd1d4', position: 'relative' }}>
+        {figure.image && <Image src={figure.image} style={{ position: 'absolute', top: 0, left: 0, width, height, opacity: 0.8 }} />}
+        <Svg width={width} height={height} viewBox={`${figure.originX} ${figure.originY} ${figure.widthPx} ${figure.heightPx}`} style={{ position: 'absolute', top: 0, left: 0 }}>
+          {figure.lines.map((line, index) => (
+            <Line key={index} x1={line.x1} y1={line.y1} x2={line.x2} y2={line.y2} stroke={RUN_LINE} strokeWidth={strokePx} strokeLinecap="round" />
+          ))}
+          {figure.labels.map((label, index) => <Circle key={index} cx={label.x} cy={label.y} r={4 / scale} fill={RUN_LINE} />)}
+        </Svg>
+        {figure.labels.map((label, index) => (
+          <Text key={index} style={{ position: 'absolute', left: (label.x - figure.originX) * scale + 5, top: (label.y - figure.originY) * scale - 11, fontSize: 7, color: RUN_LINE, fontWeight: 600 }}>{label.text}</Text>
+        ))}
+      </View>
+    </View>
+  );
+}

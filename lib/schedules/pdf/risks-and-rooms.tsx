@@ -1,0 +1,46 @@
+// Risk flags with the chosen treatments (predicted before/after) and room results, each
+// saying so plainly when the revision has none.
+import { Text, View } from '@react-pdf/renderer';
+import type { ScheduleContent } from '../content';
+import { Table } from './table';
+import { styles } from './styles';
+
+function db(value: number | null): string {
+  return value === null ? '—' : `${value.toFixed(1)} dB`;
+}
+
+function roomName(room: unknown, index: number): string {
+  if (room && typeof room === 'object' && 'name' in room && typeof room.name === 'string') return room.name;
+  return `Room ${index + 1}`;
+}
+
+export function RisksAndRooms({ content }: { content: ScheduleContent }) {
+  const nearTones = content.runs.flatMap((run) => run.resonances.filter((row) => row.fanTone !== 'clear').map((row) => [run.name, `Order ${row.order} at ${row.frequencyHz.toFixed(1)} Hz`, row.fanTone]));
+  return (
+    <View>
+      <Text style={styles.h2}>3. Risk flags and treatments</Text>
+      {content.risks.length > 0 ? (
+        <Table columns={[{ title: 'Risk', width: 0.4 }, { title: 'Detail', width: 0.6 }]} rows={content.risks.map((risk) => [risk.label, risk.detail])} />
+      ) : nearTones.length > 0 ? (
+        <>
+          <Text style={styles.paragraph}>Resonances that coincide with a fan blade-pass tone:</Text>
+          <Table columns={[{ title: 'Run', width: 0.3 }, { title: 'Resonance', width: 0.4 }, { title: 'Fan tone', width: 0.3 }]} rows={nearTones} />
+        </>
+      ) : (
+        <Text style={styles.paragraph}>No risk flag: no resonance lies near a fan blade-pass tone in this revision.</Text>
+      )}
+      {content.treatments.length > 0 ? (
+        <Table
+          columns={[{ title: 'Treatment', width: 0.4 }, { title: 'Kind', width: 0.2 }, { title: 'Before', width: 0.2, numeric: true }, { title: 'After (predicted)', width: 0.2, numeric: true }]}
+          rows={content.treatments.map((treatment) => [treatment.label, treatment.kind, db(treatment.beforeDb), db(treatment.afterDb)])}
+        />
+      ) : (
+        <View style={styles.note}><Text>No treatments are chosen in this revision. The schedule is issued with the analysis only; treatments added later appear in a new revision.</Text></View>
+      )}
+      <Text style={styles.h2}>4. Rooms</Text>
+      {content.rooms.length === 0
+        ? <Text style={styles.paragraph}>No rooms are drawn on this plan, so no room results are given.</Text>
+        : content.rooms.map((room, index) => <Text key={index} style={styles.paragraph}>{roomName(room, index)}: drawn on the plan; see the plan results for its modes.</Text>)}
+    </View>
+  );
+}

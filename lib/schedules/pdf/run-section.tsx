@@ -1,0 +1,59 @@
+// One duct run: its key figures, sections, terminations, resonances and reflections.
+import { Text, View } from '@react-pdf/renderer';
+import { PRINTED_LOWEST_ORDERS, type ScheduleRun } from '../content';
+import { Table } from './table';
+import { RISK, styles } from './styles';
+
+function hz(value: number | null): string {
+  return value === null ? '—' : `${value.toFixed(1)} Hz`;
+}
+
+export function RunSection({ run, index }: { run: ScheduleRun; index: number }) {
+  const nearTone = new Set(run.resonances.flatMap((row, rowIndex) => (row.fanTone === 'clear' ? [] : [rowIndex])));
+  return (
+    <View>
+      <Text style={styles.h2}>2.{index + 1} {run.name}</Text>
+      {run.problem ? (
+        <View style={styles.note}><Text>This run could not be analysed: {run.problem}</Text></View>
+      ) : (
+        <Text style={styles.paragraph}>
+          Main path {run.lengthM?.toFixed(2) ?? '—'} m · air at {run.temperatureC.toFixed(0)} °C, speed of sound {run.speedOfSoundMps?.toFixed(1) ?? '—'} m/s ·
+          plane-wave cut-off {hz(run.cutoffHz)} · fan: {run.fan}
+        </Text>
+      )}
+      <Text style={styles.h3}>Sections along the main path</Text>
+      <Table
+        columns={[{ title: '#', width: 0.08 }, { title: 'Length', width: 0.16, numeric: true }, { title: 'Section', width: 0.46 }, { title: 'Lining', width: 0.3 }]}
+        rows={run.sections.map((section) => [String(section.index), `${section.lengthM.toFixed(2)} m`, section.section, section.lining])}
+      />
+      <Text style={styles.h3}>Terminations</Text>
+      <Table columns={[{ title: 'Where', width: 0.4 }, { title: 'Termination', width: 0.6 }]} rows={run.terminations.map((row) => [row.where, row.kind])} />
+      <Text style={styles.h3}>Resonances</Text>
+      {run.resonances.length === 0 ? <Text style={styles.muted}>No resonance in the analysed band.</Text> : (
+        <Table
+          columns={[
+            { title: 'Order', width: 0.08 }, { title: 'Frequency', width: 0.14, numeric: true }, { title: 'Q', width: 0.08, numeric: true },
+            { title: 'Bandwidth', width: 0.13, numeric: true }, { title: 'Fan tone', width: 0.15 }, { title: 'Review', width: 0.42 },
+          ]}
+          rows={run.resonances.map((row) => [String(row.order), hz(row.frequencyHz), row.q === null ? '—' : row.q.toFixed(1), hz(row.bandwidthHz), row.fanTone, row.review])}
+          riskRows={nearTone}
+        />
+      )}
+      {run.omitted && (
+        <Text style={[styles.small, styles.muted]}>
+          The table lists the lowest {PRINTED_LOWEST_ORDERS} orders and every resonance near a fan tone or flagged in review; {run.omitted.count} further
+          resonances from {run.omitted.fromHz.toFixed(1)} to {run.omitted.toHz.toFixed(1)} Hz are clear of fan tones and are listed in the revision in Antinode.
+        </Text>
+      )}
+      {nearTone.size > 0 && <Text style={[styles.small, { color: RISK }]}>Shaded rows lie within the resonance bandwidth (or 3 %) of a fan blade-pass tone.</Text>}
+      <Text style={styles.h3}>Reflections summary</Text>
+      {run.reflections.length === 0 ? <Text style={styles.muted}>No reflecting discontinuity on the main path.</Text> : (
+        <Table
+          columns={[{ title: 'At', width: 0.14, numeric: true }, { title: 'Discontinuity', width: 0.36 }, { title: 'Reflection coefficient |R|, lowest and highest band', width: 0.5 }]}
+          rows={run.reflections.map((row) => [`${row.atM.toFixed(2)} m`, row.kind, row.magnitude])}
+        />
+      )}
+      {run.warnings.map((warning) => <Text key={warning} style={[styles.small, styles.muted]}>Note: {warning}</Text>)}
+    </View>
+  );
+}

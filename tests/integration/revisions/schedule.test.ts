@@ -1,0 +1,72 @@
+// The treatment schedule: issued from a revision, stored with its SHA-256, downloaded again
+// byte for byte; its text carries the revision's resonance frequencies; a page draws.
+import { execFileSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { extractText, getDocumentProxy } from 'unpdf';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { sequelize } from '@/lib/db';
+import { createProject } from '@/lib/projects/data';
+import { getRevisionByNumber } from '@/lib/revisions/data';
+import { PRINTED_LOWEST_ORDERS } from '@/lib/schedules/content';
+import { call } from '../helpers/routes';
+import { createTestTeam, type TestTeam } from '../helpers/people';
+import { planWithRuns, submitted } from '../helpers/revisions';
+import { POST as issue } from '@/app/api/v1/revisions/[revisionId]/schedules/route';
+import { GET as download } from '@/app/api/v1/schedules/[scheduleId]/route';
+
+let t: TestTeam;
+let revisionId: string;
+let planId: string;
+
+beforeAll(async () => {
+  t = await createTestTeam('schedule');
+  const project = await createProject(t.team.id, t.members.acoustician.id, { name: 'Harbour Lane Recital Hall', site: '' });
+  planId = await planWithRuns(t, project.id, 2, 'Level 3 supply');
+  revisionId = (await submitted(t, planId)).id;
+});
+afterAll(async () => { await sequelize.close(); });
+
+describe('treatment schedule', () => {
+  it('is issued by an acoustician only, and downloads again as the same bytes', async () => {
+    const refused = await call(issue, 'POST', '/x', { cookie: await t.cookieFor('engineer'), params: { revisionId } });
+    expect(refused.status).toBe(403);
+    const issued = await call(issue, 'POST', '/x', { cookie: await t.cookieFor('acoustician'), params: { revisionId } });
+    expect(issued.status).toBe(201);
+    const schedule = (issued.body as { schedule: { id: string; sha256: string } }).schedule;
+    const fetchPdf = async () => {
+      const response = await download(new Request(`http://localhost/api/v1/schedules/${schedule.id}`, { headers: { host: 'localhost', cookie: await t.cookieFor('viewer') } }), { params: Promise.resolve({ scheduleId: schedule.id }) });
+      expect(response.status).toBe(200);
+      expect(response.headers.get('content-type')).toBe('application/pdf');
+      return new Uint8Array(await response.arrayBuffer());
+    };
+    const first = await fetchPdf();
+    const second = await fetchPdf();
+    expect(Buffer.compare(Buffer.from(first), Buffer.from(second))).toBe(0);
+    expect(createHash('sha256').update(first).digest('hex')).toBe(schedule.sha256);
+
+    // The text: cover facts and every printed resonance frequency of the revision.
+    const pdf = await getDocumentProxy(first.slice());
+    const { text, totalPages } = await extractText(pdf, { mergePages: true });
+    expect(totalPages).toBeGreaterThanOrEqual(5);
+    expect(text).toContain('Treatment schedule');
+    expect(text).toContain('Harbour Lane Recital Hall');
+    expect(text).toContain('DRAFT');
+    expect(text).toContain('No treatments are chosen');
+    expect(text).toContain('fire and smoke');
+    const revision = await getRevisionByNumber(t.team.id, planId, 1);
+    const frequencies = revision.analysis.flatMap((run) => (run.analysis?.resonances ?? []).slice(0, PRINTED_LOWEST_ORDERS).map((row) => `${row.frequencyHz.toFixed(1)} Hz`));
+    expect(frequencies.length).toBeGreaterThan(10);
+    for (const frequency of frequencies) expect(text).toContain(frequency);
+
+    // It draws: poppler renders page 2 (the plan) to a PNG with dark pixels on it.
+    const dir = mkdtempSync(path.join(tmpdir(), 'schedule-'));
+    writeFileSync(path.join(dir, 'schedule.pdf'), first);
+    execFileSync('pdftoppm', ['-png', '-r', '40', '-f', '2', '-l', '2', path.join(dir, 'schedule.pdf'), path.join(dir, 'page')]);
+    const png = readFileSync(path.join(dir, 'page-2.png'));
+    expect(png.subarray(1, 4).toString('latin1')).toBe('PNG');
+    expect(png.byteLength).toBeGreaterThan(2000);
+  });
+});
