@@ -24,13 +24,18 @@ import type { ToolName } from './tools';
 import { useAutosave } from './use-autosave';
 import { gridSpacingPx, useCanvasTools } from './use-canvas-tools';
 import { usePlanResults } from './use-plan-results';
+import { usePlanRisks } from './use-plan-risks';
+import { RiskDrawer } from './risk/risk-drawer';
+import { RoomPanel } from './rooms/room-panel';
+import { useRoomActions } from './rooms/use-room-actions';
 import { useElementSize } from './use-element-size';
 
 const PlanCanvas = dynamic(() => import('./canvas/plan-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-500">Loading the canvas…</p> });
 
-const TOOL_KEYS: Record<string, ToolName> = { h: 'pan', k: 'scale' };
+const TOOL_KEYS: Record<string, ToolName> = { h: 'pan', k: 'scale', r: 'room' };
 
-export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; editable: boolean; unitSystem: UnitSystem }) {
+// canEvaluate: may open a flag's candidate treatments (analysis.run); defaults to editable.
+export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable }: { plan: PlanView; editable: boolean; unitSystem: UnitSystem; canEvaluate?: boolean }) {
   const [model, dispatch] = useReducer(editorReducer, plan, (initial) => initialModel(initial.document, initial.version, initial.metresPerPixel));
   const [tool, setTool] = useState<ToolName>(editable && plan.document.segments.length === 0 ? 'draw' : editable ? 'select' : 'pan');
   const [helpOpen, setHelpOpen] = useState(false);
@@ -41,8 +46,11 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
   modelRef.current = model;
 
   const { reloadTheirs, overwriteWithMine } = useAutosave(plan.id, model, dispatch, editable);
-  const tools = useCanvasTools(model, dispatch, tool, setCalibrated);
+  const [openRoomId, setOpenRoomId] = useState<string | null>(null);
+  const tools = useCanvasTools(model, dispatch, tool, setCalibrated, setOpenRoomId);
   const results = usePlanResults(plan.id, model.version);
+  const risks = usePlanRisks(plan.id, model.version);
+  const roomActions = useRoomActions(model, dispatch, setOpenRoomId);
   const doc = model.history.present;
   const formatPosition = useCallback((metres: number) => formatLength(metres, unitSystem, 'run'), [unitSystem]);
 
@@ -90,8 +98,11 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
     ? { url: `/api/v1/uploads/${plan.background.id}`, widthPx: plan.background.widthPx, heightPx: plan.background.heightPx }
     : null), [plan.background]);
 
+  const openRoom = openRoomId ? doc.rooms.find((room) => room.id === openRoomId) ?? null : null;
+  const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
+  const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
-  const tool_hint = { select: 'Click to select; drag points to move them.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
+  const tool_hint = { select: 'Click to select; drag points to move them.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
 
   return (
     <div className="flex h-full flex-col">
@@ -131,6 +142,9 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
               mainPath={activeResult?.path ?? []}
               mode={resonance && activeResult?.analysis ? { resonance, speedOfSoundMps: activeResult.analysis.speedOfSoundMps } : null}
               preview={tools.feedback.preview}
+              roomPreview={tools.feedback.roomPreview}
+              selectedRoomId={openRoomId}
+              flaggedRoomIds={flaggedRoomIds}
               calibration={tools.feedback.calibration}
               onPointer={tools.onPointer}
               onNodeDrag={onNodeDrag}
@@ -150,8 +164,11 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
           {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
           {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
         </div>
-        <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode ? 'Properties' : 'Results'}>
-          {selectedSegment ? (
+        <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
+          {openRoom ? (
+            <RoomPanel key={openRoom.id} document={doc} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null} unitSystem={unitSystem} editable={editable}
+              onChange={(changes) => roomActions.updateRoom(openRoom.id, changes)} onDelete={() => roomActions.deleteRoom(openRoom.id)} onClose={() => setOpenRoomId(null)} />
+          ) : selectedSegment ? (
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}
               onSection={(section) => runCommand(model, dispatch, 'set-section', { section })}
               onLining={(lining) => runCommand(model, dispatch, 'set-lining', { lining })}
@@ -177,13 +194,16 @@ export function PlanEditor({ plan, editable, unitSystem }: { plan: PlanView; edi
                 selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} />
             </div>
           )}
-          {panelRun && (selectedSegment || selectedNode || editable) && (
+          {panelRun && !openRoom && (selectedSegment || selectedNode || editable) && (
             <div className="mt-6 border-t border-graphite-100 pt-4">
               <RunPanel run={panelRun} editable={editable} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })} />
             </div>
           )}
         </aside>
       </div>
+      <RiskDrawer planId={plan.id} version={model.version} flags={risks.data?.flags ?? null} roomResults={risks.data?.rooms ?? []} rooms={doc.rooms} treatments={doc.treatments ?? []}
+        loading={risks.isLoading} stale={risksStale} error={risks.error ? risks.error.message : null} editable={editable} canEvaluate={canEvaluate}
+        onOpenRoom={setOpenRoomId} onAddRoom={roomActions.addRoom} onChoose={roomActions.chooseTreatment} onRemoveTreatment={roomActions.removeTreatment} />
     </div>
   );
 }

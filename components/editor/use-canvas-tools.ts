@@ -12,9 +12,12 @@ const SNAP_RADIUS_SCREEN_PX = 10;
 const DOUBLE_CLICK_MS = 400;
 const DOUBLE_CLICK_SCREEN_PX = 5;
 const GRID_SPACING_M = 0.5;
+/** A room drawn with the Room tool starts this high, m (product default; change it in the form). */
+const NEW_ROOM_HEIGHT_M = 3;
 
 export interface ToolFeedback {
   preview: { from: Point; to: Point } | null;
+  roomPreview: { from: Point; to: Point } | null;
   calibration: Point[];
 }
 
@@ -22,7 +25,15 @@ export function gridSpacingPx(metresPerPixel: number): number {
   return GRID_SPACING_M / metresPerPixel;
 }
 
-export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorAction>, tool: ToolName, onCalibrated: (points: [Point, Point]) => void) {
+/** "Room N" with the lowest N not already taken. */
+function nextRoomName(names: readonly string[]): string {
+  let number = names.length + 1;
+  while (names.includes(`Room ${number}`)) number += 1;
+  return `Room ${number}`;
+}
+
+export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorAction>, tool: ToolName, onCalibrated: (points: [Point, Point]) => void, onRoom: (roomId: string | null) => void = () => {}) {
+  const [roomFrom, setRoomFrom] = useState<Point | null>(null);
   const [drawFrom, setDrawFrom] = useState<NodeRef | null>(null);
   const [teeAt, setTeeAt] = useState<{ segmentId: string; at: Point } | null>(null);
   const [pointer, setPointer] = useState<Point | null>(null);
@@ -50,7 +61,7 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
     return { ref, point: result.point };
   }, [doc.nodes, model.metresPerPixel, anchorOf]);
 
-  const cancel = useCallback(() => { setDrawFrom(null); setTeeAt(null); setCalibration([]); }, []);
+  const cancel = useCallback(() => { setDrawFrom(null); setTeeAt(null); setCalibration([]); setRoomFrom(null); }, []);
 
   const onPointer = useCallback((event: CanvasPointer) => {
     if (event.type === 'move') { setPointer(event.point); return; }
@@ -65,10 +76,17 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
       case 'select': {
         const { nodeIds, segmentIds } = model.state.selection;
         const toggle = (list: readonly string[], id: string) => (list.includes(id) ? list.filter((item) => item !== id) : [...list, id]);
+        if (event.target.roomId && !event.shiftKey) {
+          onRoom(event.target.roomId);
+          dispatch({ type: 'set-state', state: { ...model.state, selection: { nodeIds: [], segmentIds: [] } } });
+          return;
+        }
         if (event.target.nodeId) {
+          onRoom(null);
           const selection = event.shiftKey ? { nodeIds: toggle(nodeIds, event.target.nodeId), segmentIds } : { nodeIds: [event.target.nodeId], segmentIds: [] };
           dispatch({ type: 'set-state', state: { ...model.state, selection } });
         } else if (event.target.segmentId) {
+          onRoom(null);
           const selection = event.shiftKey ? { nodeIds, segmentIds: toggle(segmentIds, event.target.segmentId) } : { nodeIds: [], segmentIds: [event.target.segmentId] };
           dispatch({ type: 'set-state', state: { ...model.state, selection } });
         } else if (!event.shiftKey) {
@@ -98,6 +116,19 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
         setTeeAt(null);
         return;
       }
+      case 'room': {
+        const corner = snapPoint(event.point, { nodes: [], nodeRadiusPx: 0, anchor: null, angleStepDeg: null, gridSpacingPx: event.shiftKey ? null : gridSpacingPx(model.metresPerPixel) }).point;
+        if (!roomFrom) { setRoomFrom(corner); return; }
+        const lengthM = Math.abs(corner.x - roomFrom.x) * model.metresPerPixel;
+        const widthM = Math.abs(corner.y - roomFrom.y) * model.metresPerPixel;
+        setRoomFrom(null);
+        const result = runCommand(model, dispatch, 'add-room', {
+          name: nextRoomName(doc.rooms.map((room) => room.name)), x: Math.min(corner.x, roomFrom.x), y: Math.min(corner.y, roomFrom.y), lengthM, widthM, heightM: NEW_ROOM_HEIGHT_M,
+        });
+        const added = result?.doc.rooms.at(-1);
+        if (added) onRoom(added.id);
+        return;
+      }
       case 'scale': {
         const next = calibration.length >= 2 ? [event.point] : [...calibration, event.point];
         setCalibration(next);
@@ -107,7 +138,7 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
       case 'pan':
         return;
     }
-  }, [tool, model, dispatch, snapped, anchorOf, drawFrom, teeAt, calibration, onCalibrated]);
+  }, [tool, model, dispatch, snapped, anchorOf, drawFrom, teeAt, calibration, onCalibrated, roomFrom, onRoom, doc.rooms]);
 
   // The rubber band from the last point to the (snapped) pointer.
   let preview: ToolFeedback['preview'] = null;
@@ -116,5 +147,6 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
     const to = snapPoint(pointer, { nodes: doc.nodes, nodeRadiusPx: 0, anchor: from, angleStepDeg: 45, gridSpacingPx: gridSpacingPx(model.metresPerPixel) }).point;
     preview = { from, to };
   }
-  return { onPointer, cancel, feedback: { preview, calibration } as ToolFeedback, drawing: drawFrom !== null || teeAt !== null, clearCalibration: () => setCalibration([]) };
+  const roomPreview = tool === 'room' && roomFrom && pointer ? { from: roomFrom, to: pointer } : null;
+  return { onPointer, cancel, feedback: { preview, roomPreview, calibration } as ToolFeedback, drawing: drawFrom !== null || teeAt !== null || roomFrom !== null, clearCalibration: () => setCalibration([]) };
 }

@@ -9,8 +9,6 @@ import { riskContext, type RiskContext } from './risk-context';
 
 /** Fan harmonics drawn on the room's mode chart (the flags check the engine's default, 3). */
 const CHART_HARMONICS = 3;
-/** Room modes listed up to this frequency, Hz, or the duct analysis band's top when higher (product choice). */
-const MIN_MODE_CHART_HZ = 300;
 
 export interface PlacedFlag extends RiskFlag {
   runId: string;
@@ -28,6 +26,7 @@ export interface RoomResult {
   /** The feeding run's resonances and the fan's blade-pass harmonics, Hz, for the mode chart. */
   resonancesHz: number[];
   fanTonesHz: number[];
+  criterionNc: number;
   /** NC criterion curve, 63 Hz to 8 kHz, dB. */
   criterionDb: number[];
   /** Predicted levels at the listener (when the outlet sound power is given) and their NC rating. */
@@ -38,6 +37,14 @@ export interface RoomResult {
 export interface PlanRisks {
   rooms: RoomResult[];
   flags: PlacedFlag[];
+}
+
+/**
+ * Room-mode flags count only below the room's Schroeder frequency: above it the modes overlap and no
+ * single axial mode stands out (Schroeder 1962; product rule). The engine's flag ids stay the same.
+ */
+function isDistinctMode(flag: RiskFlag, schroederHz: number): boolean {
+  return flag.kind !== 'resonance-near-room-mode' || flag.targetHz <= schroederHz;
 }
 
 function place(flags: RiskFlag[], context: RiskContext): PlacedFlag[] {
@@ -51,14 +58,14 @@ function problemOf(error: unknown): string {
 }
 
 function roomResult(doc: PlanDocument, metresPerPixel: number, room: PlanDocument['rooms'][number]): { result: RoomResult; flags: PlacedFlag[] } {
-  const empty: RoomResult = { roomId: room.id, name: room.name, runId: null, problem: null, analysis: null, resonancesHz: [], fanTonesHz: [], criterionDb: ncCriterionCurveDb(room.criterionNc), levels: null, levelsNc: null };
+  const empty: RoomResult = { roomId: room.id, name: room.name, runId: null, problem: null, analysis: null, resonancesHz: [], fanTonesHz: [], criterionNc: room.criterionNc, criterionDb: ncCriterionCurveDb(room.criterionNc), levels: null, levelsNc: null };
   try {
     const context = riskContext(doc, metresPerPixel, { roomId: room.id });
     const runAnalysis = analyzeRun(context.input.run);
-    const flags = assessRisks(context.input, runAnalysis);
     const roomInput = context.input.room!;
-    const maxModeHz = Math.max(MIN_MODE_CHART_HZ, runAnalysis.maxHz);
-    const analysis = analyzeRoom(roomInput, { maxModeHz });
+    // modes to twice the Schroeder frequency (the engine's default): above it they overlap
+    const analysis = analyzeRoom(roomInput);
+    const flags = assessRisks(context.input, runAnalysis).filter((flag) => isDistinctMode(flag, analysis.schroederHz));
     const levels = context.input.outletSoundPowerDb ? outletLevels(context.input.run, roomInput, context.input.outletSoundPowerDb) : null;
     const fan = context.input.fan;
     return {

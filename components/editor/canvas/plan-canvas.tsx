@@ -10,12 +10,13 @@ import type { Point } from '@/lib/plan/geometry';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
 import { GridShape } from './grid-shape';
 import { ModeOverlay } from './mode-overlay';
+import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
 import { SegmentLine } from './segment-line';
 import { TerminationGlyph } from './termination-glyph';
 import { fitView, screenToPlan, zoomAt, type View } from './view';
 
-export interface CanvasTarget { nodeId?: string; segmentId?: string }
+export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
 export interface CanvasPointer { type: 'down' | 'move' | 'dblclick'; point: Point; target: CanvasTarget; shiftKey: boolean; scale: number }
 
 export interface PlanCanvasProps {
@@ -31,6 +32,10 @@ export interface PlanCanvasProps {
   mainPath: readonly MainPathPiece[];
   mode: { resonance: Resonance; speedOfSoundMps: number } | null;
   preview: { from: Point; to: Point } | null;
+  /** The room being drawn with the Room tool: two opposite corners. */
+  roomPreview?: { from: Point; to: Point } | null;
+  selectedRoomId?: string | null;
+  flaggedRoomIds?: ReadonlySet<string>;
   calibration: readonly Point[];
   onPointer: (pointer: CanvasPointer) => void;
   onNodeDrag: (nodeId: string, point: Point, phase: 'move' | 'end') => void;
@@ -45,6 +50,7 @@ function targetOf(event: Konva.KonvaEventObject<MouseEvent>): CanvasTarget {
   const id = event.target.id();
   if (id.startsWith('node:')) return { nodeId: id.slice(5) };
   if (id.startsWith('segment:')) return { segmentId: id.slice(8) };
+  if (id.startsWith('room:')) return { roomId: id.slice(5) };
   return {};
 }
 
@@ -193,6 +199,11 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.gridSpacingPx} scale={view.scale} />
       </Layer>
+      <Layer>
+        {doc.rooms.map((room) => (
+          <RoomShape key={room.id} room={room} metresPerPixel={props.metresPerPixel} selected={props.selectedRoomId === room.id} flagged={props.flaggedRoomIds?.has(room.id) ?? false} scale={view.scale} />
+        ))}
+      </Layer>
       <Layer>{staticShapes}</Layer>
       <Layer>
         {drag && doc.segments.filter((segment) => activeSegmentIds.has(segment.id)).map((segment) => segmentLine(segment, dragPositions))}
@@ -200,6 +211,11 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         {props.mode && !drag && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}
         {props.preview && (
           <Line points={[props.preview.from.x, props.preview.from.y, props.preview.to.x, props.preview.to.y]} stroke="#2d6a96" strokeWidth={2 / view.scale} dash={[6 / view.scale, 4 / view.scale]} listening={false} />
+        )}
+        {props.roomPreview && (
+          <Rect x={Math.min(props.roomPreview.from.x, props.roomPreview.to.x)} y={Math.min(props.roomPreview.from.y, props.roomPreview.to.y)}
+            width={Math.abs(props.roomPreview.to.x - props.roomPreview.from.x)} height={Math.abs(props.roomPreview.to.y - props.roomPreview.from.y)}
+            stroke="#2d6a96" strokeWidth={2 / view.scale} dash={[6 / view.scale, 4 / view.scale]} listening={false} />
         )}
         {props.calibration.map((point, index) => (
           <Circle key={`c${index}`} x={point.x} y={point.y} radius={5 / view.scale} stroke="#2d6a96" strokeWidth={2 / view.scale} listening={false} />

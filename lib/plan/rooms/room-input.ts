@@ -3,6 +3,8 @@ import { SURFACE_NAMES, type RoomInput, type RoomSurfaces } from '@/lib/acoustic
 import { DEFAULT_FINISH_IDS, findFinish } from './finishes';
 import type { PlanRoom, RoomSurface, SurfaceName } from './room-types';
 
+export { SURFACE_NAMES } from '@/lib/acoustic';
+
 export const DEFAULT_CRITERION_NC = 25;
 /** Outlet 0.3 m below the ceiling and listener seated (1.2 m) at the room's middle (product defaults). */
 const OUTLET_BELOW_CEILING_M = 0.3;

@@ -1,0 +1,35 @@
+'use client';
+
+import { memo } from 'react';
+import { Circle, Group, Rect, Text } from 'react-konva';
+import { roomPointPx, roomRectPx, type PlanRoom } from '@/lib/plan';
+
+interface RoomShapeProps {
+  room: PlanRoom;
+  metresPerPixel: number;
+  selected: boolean;
+  flagged: boolean;
+  scale: number;
+}
+
+// A room: its rectangle at the plan's scale, its name and size, the outlet (square) and the
+// listener (ring). Selected rooms take the selection accent; a room with flags says so in its label.
+export const RoomShape = memo(function RoomShape({ room, metresPerPixel, selected, flagged, scale }: RoomShapeProps) {
+  const rect = roomRectPx(room, metresPerPixel);
+  const outlet = roomPointPx(room, room.outlet, metresPerPixel);
+  const listener = roomPointPx(room, room.listener, metresPerPixel);
+  const marker = 5 / scale;
+  const label = `${room.name} · ${room.lengthM.toFixed(1)} × ${room.widthM.toFixed(1)} m · NC ${room.criterionNc}${flagged ? ' · ⚠ flagged' : ''}`;
+  return (
+    <Group>
+      <Rect id={`room:${room.id}`} name="room" x={rect.x} y={rect.y} width={rect.width} height={rect.height}
+        fill={selected ? 'rgba(45,106,150,0.08)' : 'rgba(37,40,45,0.03)'} stroke={selected ? '#2d6a96' : '#5d626b'}
+        strokeWidth={(selected ? 2 : 1) / scale} dash={[8 / scale, 4 / scale]} perfectDrawEnabled={false} />
+      <Text x={rect.x + 4 / scale} y={rect.y + 4 / scale} text={label} fontSize={11 / scale} fontFamily="IBM Plex Sans, sans-serif"
+        fill={flagged ? '#8a3d12' : '#25282d'} listening={false} />
+      <Rect x={outlet.x - marker} y={outlet.y - marker} width={2 * marker} height={2 * marker} stroke="#25282d" strokeWidth={1.5 / scale} listening={false} />
+      <Circle x={listener.x} y={listener.y} radius={marker} stroke="#25282d" strokeWidth={1.5 / scale} listening={false} />
+      <Text x={listener.x + marker * 1.4} y={listener.y - marker} text="listener" fontSize={9 / scale} fill="#5d626b" listening={false} />
+    </Group>
+  );
+});

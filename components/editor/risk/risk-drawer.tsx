@@ -1,0 +1,72 @@
+'use client';
+
+import { useState } from 'react';
+import type { PlanRoom, PlanTreatment } from '@/lib/plan';
+import type { PlacedFlag, RoomResult } from '@/lib/plans/risks';
+import type { TreatmentOption } from '@/lib/plans/treatment-options';
+import { RoomList } from '../rooms/room-list';
+import { RiskList } from './risk-list';
+import { TreatmentList } from './treatment-list';
+import { TreatmentOptionsPanel } from './treatment-options';
+
+type Tab = 'risks' | 'rooms' | 'treatments';
+
+interface RiskDrawerProps {
+  planId: string;
+  version: number;
+  flags: PlacedFlag[] | null;
+  roomResults: RoomResult[];
+  rooms: readonly PlanRoom[];
+  treatments: readonly PlanTreatment[];
+  loading: boolean;
+  stale: boolean;
+  error: string | null;
+  editable: boolean;
+  canEvaluate: boolean;
+  onOpenRoom: (roomId: string) => void;
+  onAddRoom: () => void;
+  onChoose: (flag: PlacedFlag, option: TreatmentOption) => void;
+  onRemoveTreatment: (treatmentId: string) => void;
+}
+
+// The bottom drawer: every risk flag across the plan, the rooms, and the chosen treatments.
+export function RiskDrawer(props: RiskDrawerProps) {
+  const [open, setOpen] = useState(true);
+  const [tab, setTab] = useState<Tab>('risks');
+  const [openFlag, setOpenFlag] = useState<PlacedFlag | null>(null);
+  const flagCount = props.flags?.length ?? 0;
+  const tabs: { name: Tab; label: string }[] = [
+    { name: 'risks', label: `Risks (${flagCount})` },
+    { name: 'rooms', label: `Rooms (${props.rooms.length})` },
+    { name: 'treatments', label: `Treatments (${props.treatments.length})` },
+  ];
+  const choose = (flag: PlacedFlag, option: TreatmentOption) => { props.onChoose(flag, option); setOpenFlag(null); setTab('treatments'); };
+  return (
+    <section aria-label="Rooms and risks" className="shrink-0 border-t border-graphite-100 bg-paper-raised">
+      <div className="flex items-center gap-1 px-3 pt-1" role="tablist">
+        {tabs.map((candidate) => (
+          <button key={candidate.name} type="button" role="tab" aria-selected={open && tab === candidate.name}
+            className={`rounded-t px-3 py-1 text-sm ${open && tab === candidate.name ? 'border border-b-0 border-graphite-100 bg-paper font-medium' : 'text-graphite-700 hover:bg-paper-sunk'}`}
+            onClick={() => { setTab(candidate.name); setOpen(true); }}>
+            {candidate.label}
+          </button>
+        ))}
+        {props.stale && <span className="ml-2 text-xs text-graphite-500" role="status">Showing the last saved plan; updating…</span>}
+        <button type="button" className="btn-quiet ml-auto px-2 py-0.5 text-xs" aria-expanded={open} onClick={() => setOpen(!open)}>{open ? 'Hide' : 'Show'}</button>
+      </div>
+      {open && (
+        <div className="max-h-[19rem] space-y-3 overflow-y-auto px-4 py-3" role="tabpanel">
+          {props.error && <p role="alert" className="text-sm text-risk-ink">{props.error}</p>}
+          {tab === 'risks' && (props.loading && !props.flags ? <p className="text-sm text-graphite-500">Checking the plan for risks…</p> : (
+            <>
+              <RiskList flags={props.flags ?? []} canEvaluate={props.canEvaluate} openFlagId={openFlag?.id ?? null} onOpen={setOpenFlag} />
+              {openFlag && <TreatmentOptionsPanel planId={props.planId} version={props.version} flag={openFlag} editable={props.editable} onChoose={choose} onClose={() => setOpenFlag(null)} />}
+            </>
+          ))}
+          {tab === 'rooms' && <RoomList rooms={props.rooms} results={props.roomResults} editable={props.editable} onOpen={props.onOpenRoom} onAdd={props.onAddRoom} />}
+          {tab === 'treatments' && <TreatmentList treatments={props.treatments} editable={props.editable} onRemove={props.onRemoveTreatment} />}
+        </div>
+      )}
+    </section>
+  );
+}

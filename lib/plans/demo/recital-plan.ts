@@ -1,0 +1,41 @@
+// The demo plan of the invented Marrowgate Arts Centre: a supply run from the 2-speed rooftop air
+// handler down to the recital room, whose fan at high speed puts its blade-pass tone on one of the
+// run's resonances, so the demo opens with a flag. Every name and number is invented.
+import { newRoom, type Fan, type PlanDocument } from '@/lib/plan';
+
+export const DEMO_PLAN_NAME = 'Level 1 – recital room supply';
+export const DEMO_METRES_PER_PIXEL = 0.02;
+/** The air handler's two speeds; the run carries the high one (the tone that lands on a resonance). */
+export const DEMO_FAN_SPEEDS_RPM = { low: 450, high: 605 } as const;
+export const DEMO_FAN_BLADES = 10;
+
+export function demoRecitalPlan(fan: Fan): PlanDocument {
+  return {
+    schemaVersion: 1,
+    nodes: [
+      { id: 'ahu', x: 120, y: 80 },
+      { id: 'riser-foot', x: 120, y: 380 },
+      { id: 'drop-head', x: 520, y: 380 },
+      { id: 'recital-outlet', x: 520, y: 470 },
+    ],
+    segments: [
+      { id: 'riser', from: 'ahu', to: 'riser-foot', section: { shape: 'rect', widthM: 0.6, heightM: 0.4 } },
+      { id: 'corridor-main', from: 'riser-foot', to: 'drop-head', section: { shape: 'rect', widthM: 0.5, heightM: 0.3 } },
+      { id: 'recital-drop', from: 'drop-head', to: 'recital-outlet', section: { shape: 'round', diameterM: 0.315 } },
+    ],
+    runs: [{
+      id: 'recital-supply', name: 'Rooftop air handler to recital room', startNodeId: 'ahu', endNodeId: 'recital-outlet', temperatureC: 16, fan,
+      terminations: { ahu: { kind: 'closed' }, 'recital-outlet': { kind: 'open', flange: 'flanged' } },
+    }],
+    rooms: [{
+      ...newRoom('recital-room', { name: 'Recital room', x: 380, y: 420, lengthM: 14, widthM: 10, heightM: 6 }),
+      criterionNc: 20,
+      outlet: { nodeId: 'recital-outlet', xM: 2.8, yM: 1, zM: 5.6 },
+      listener: { xM: 8.5, yM: 6.2, zM: 1.2 },
+      outletSoundPowerDb: [60, 55, 48, 42, 36, 30, 25, 20],
+    }],
+    outlets: [],
+    listeners: [],
+    treatments: [],
+  };
+}

@@ -1,0 +1,84 @@
+import { expect, test } from '@playwright/test';
+import { Plan } from '@/models';
+import { ROOM_PLAN_METRES_PER_PIXEL, roomPlanDocument } from '../unit/plan/room-plan-fixture';
+import { acousticianWithProject, waitForSaved } from './editor-fixtures';
+import { signIn } from './fixtures';
+
+test('a fan tone on a resonance of the run feeding a room is flagged; a chosen retune clears it and the list shows before and after', async ({ page }, testInfo) => {
+  const { email, user, project } = await acousticianWithProject('rooms-risk');
+  const plan = await Plan.create({ projectId: project.id, name: 'Recital supply', document: roomPlanDocument(), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL, updatedById: user.id });
+  await signIn(page, email);
+  await page.goto(`/plans/${plan.id}`);
+
+  // The risk drawer lists the blade-pass flag, with its severity in words.
+  const drawer = page.getByRole('region', { name: 'Rooms and risks' });
+  const toneRow = drawer.locator('[data-testid="risk-row"][data-subject="tone:h1"]');
+  await expect(toneRow).toBeVisible();
+  await expect(toneRow).toContainText('High');
+  await expect(toneRow).toContainText('blade-pass tone');
+  await expect(toneRow).toContainText('Recital room');
+
+  // The room's results: mode chart with the run's resonances and fan tones, reflectogram, spectrum.
+  await drawer.getByRole('tab', { name: /^Rooms/ }).click();
+  await drawer.getByRole('button', { name: 'Open Recital room' }).click();
+  const roomPanel = page.getByTestId('room-panel');
+  await expect(roomPanel.getByRole('img', { name: /^Mode chart to/ })).toBeVisible();
+  await expect(roomPanel.getByRole('img', { name: /^Reflectogram/ })).toBeVisible();
+  await expect(roomPanel.getByRole('img', { name: /^Spectrum against NC 25/ })).toBeVisible();
+  await roomPanel.getByTestId('room-results').screenshot({ path: testInfo.outputPath('room-results.png') });
+
+  // Candidate treatments, each re-run through the engine; choose the retune.
+  await drawer.getByRole('tab', { name: /^Risks/ }).click();
+  await toneRow.getByRole('button', { name: /^Treatments for/ }).click();
+  const retune = drawer.locator('[data-testid="treatment-option"][data-kind="retune-length"]');
+  await expect(retune).toContainText('Change segment 0');
+  await expect(retune).toContainText('✓ yes');
+  await expect(drawer.getByRole('complementary', { name: 'Cautions' })).toContainText('fire and smoke');
+  await page.screenshot({ path: testInfo.outputPath('treatment-options.png') });
+  await retune.getByRole('button', { name: 'Add to plan' }).click();
+  await waitForSaved(page);
+
+  // The treatment list shows the flagged quantity before and after.
+  const row = drawer.getByTestId('treatment-row');
+  await expect(row).toHaveCount(1);
+  await expect(row.getByTestId('treatment-before')).toContainText(/115\.\d Hz/);
+  await expect(row.getByTestId('treatment-after')).toContainText(/Hz off, window/);
+  await expect(row).toContainText('✓ yes');
+
+  // On the next results from the saved plan, the tone flag is gone.
+  await drawer.getByRole('tab', { name: /^Risks/ }).click();
+  await expect(drawer.getByRole('status').filter({ hasText: 'updating' })).toHaveCount(0);
+  await expect(drawer.locator('[data-testid="risk-row"][data-subject="tone:h1"]')).toHaveCount(0);
+  await page.screenshot({ path: testInfo.outputPath('after-retune.png') });
+
+  // The retune is a length override on the drawn segment.
+  const saved = await Plan.findByPk(plan.id);
+  const document = saved?.document as ReturnType<typeof roomPlanDocument>;
+  expect(document.segments.find((segment) => segment.id === 'main')?.lengthOverrideM).toBeGreaterThan(0);
+});
+
+test('the Room tool draws a room at the plan scale and its form takes any unit', async ({ page }) => {
+  const { email, user, project } = await acousticianWithProject('rooms-draw');
+  const plan = await Plan.create({ projectId: project.id, name: 'Meeting rooms', document: roomPlanDocument(null), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL, updatedById: user.id });
+  await signIn(page, email);
+  await page.goto(`/plans/${plan.id}`);
+  const box = await page.locator('.konvajs-content canvas').first().boundingBox();
+  if (!box) throw new Error('no canvas');
+  await page.getByRole('button', { name: /^Room/ }).click();
+  await page.mouse.click(box.x + box.width - 300, box.y + 60);
+  await page.mouse.click(box.x + box.width - 150, box.y + 160);
+  const roomPanel = page.getByTestId('room-panel');
+  await expect(roomPanel).toBeVisible();
+  await expect(page.getByLabel('Name')).toHaveValue('Room 2');
+  await page.getByLabel('Height', { exact: true }).fill('9 ft 10 in');
+  await page.getByLabel('Height', { exact: true }).press('Enter');
+  await expect(roomPanel.getByText(/Read as/)).toBeVisible();
+  await page.getByLabel('Floor').selectOption('carpet-on-concrete');
+  await expect(roomPanel.getByText(/From memory/).first()).toBeVisible();
+  await waitForSaved(page);
+  const saved = await Plan.findByPk(plan.id);
+  const rooms = (saved?.document as ReturnType<typeof roomPlanDocument>).rooms;
+  expect(rooms).toHaveLength(2);
+  expect(rooms[1].heightM).toBeCloseTo(2.997, 3);
+  expect(rooms[1].surfaces.floor.finishId).toBe('carpet-on-concrete');
+});
