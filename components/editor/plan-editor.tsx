@@ -166,7 +166,7 @@ export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable 
         </div>
         <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (
-            <RoomPanel key={openRoom.id} document={doc} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null} unitSystem={unitSystem} editable={editable}
+            <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null} unitSystem={unitSystem} editable={editable}
               onChange={(changes) => roomActions.updateRoom(openRoom.id, changes)} onDelete={() => roomActions.deleteRoom(openRoom.id)} onClose={() => setOpenRoomId(null)} />
           ) : selectedSegment ? (
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}

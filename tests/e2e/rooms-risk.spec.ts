@@ -27,6 +27,16 @@ test('a fan tone on a resonance of the run feeding a room is flagged; a chosen r
   await expect(roomPanel.getByRole('img', { name: /^Spectrum against NC 25/ })).toBeVisible();
   await roomPanel.getByTestId('room-results').screenshot({ path: testInfo.outputPath('room-results.png') });
 
+  // With the outlet's sound power the spectrum is predicted and rated against the criterion.
+  const soundPower = page.getByLabel(/Outlet sound power/);
+  await soundPower.fill('70, 66, 62, 58, 54, 50, 46, 42');
+  await soundPower.press('Enter');
+  await waitForSaved(page);
+  const spectrum = roomPanel.getByRole('img', { name: /^Spectrum against NC 25: predicted NC \d+/ });
+  await expect(spectrum).toBeVisible();
+  await spectrum.scrollIntoViewIfNeeded();
+  await spectrum.screenshot({ path: testInfo.outputPath('spectrum.png') });
+
   // Candidate treatments, each re-run through the engine; choose the retune.
   await drawer.getByRole('tab', { name: /^Risks/ }).click();
   await toneRow.getByRole('button', { name: /^Treatments for/ }).click();
@@ -73,6 +83,8 @@ test('the Room tool draws a room at the plan scale and its form takes any unit',
   await page.getByLabel('Height', { exact: true }).fill('9 ft 10 in');
   await page.getByLabel('Height', { exact: true }).press('Enter');
   await expect(roomPanel.getByText(/Read as/)).toBeVisible();
+  await page.getByLabel("Corner from the plan's left").fill('2 m');
+  await page.getByLabel("Corner from the plan's left").press('Enter');
   await page.getByLabel('Floor').selectOption('carpet-on-concrete');
   await expect(roomPanel.getByText(/From memory/).first()).toBeVisible();
   await waitForSaved(page);
@@ -81,4 +93,6 @@ test('the Room tool draws a room at the plan scale and its form takes any unit',
   expect(rooms).toHaveLength(2);
   expect(rooms[1].heightM).toBeCloseTo(2.997, 3);
   expect(rooms[1].surfaces.floor.finishId).toBe('carpet-on-concrete');
+  // 2 m at 20 mm per pixel
+  expect(rooms[1].x).toBeCloseTo(100, 6);
 });

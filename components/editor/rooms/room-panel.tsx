@@ -13,6 +13,7 @@ import { SurfaceFinishes } from './surface-finishes';
 
 interface RoomPanelProps {
   document: PlanDocument;
+  metresPerPixel: number;
   room: PlanRoom;
   result: RoomResult | null;
   unitSystem: UnitSystem;
@@ -28,7 +29,7 @@ function runEnds(doc: PlanDocument): { nodeId: string; label: string }[] {
 }
 
 // The room's form (name, size, finishes, criterion, outlet and listener) and its results.
-export function RoomPanel({ document, room, result, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
+export function RoomPanel({ document, metresPerPixel, room, result, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
   const [name, setName] = useState(room.name);
   useEffect(() => setName(room.name), [room.name]);
   const side = (key: 'lengthM' | 'widthM' | 'heightM') => (valueM: number | null) => { if (valueM !== null) onChange({ [key]: valueM }); };
@@ -53,6 +54,10 @@ export function RoomPanel({ document, room, result, unitSystem, editable, onChan
           <LengthInput label="Length" valueM={room.lengthM} kind="run" unitSystem={unitSystem} onCommit={side('lengthM')} />
           <LengthInput label="Width" valueM={room.widthM} kind="run" unitSystem={unitSystem} onCommit={side('widthM')} />
           <LengthInput label="Height" valueM={room.heightM} kind="run" unitSystem={unitSystem} onCommit={side('heightM')} />
+        </div>
+        <div className="grid grid-cols-2 gap-2">
+          <LengthInput label="Corner from the plan's left" valueM={room.x * metresPerPixel} kind="run" unitSystem={unitSystem} onCommit={(valueM) => valueM !== null && onChange({ x: valueM / metresPerPixel })} />
+          <LengthInput label="Corner from the plan's top" valueM={room.y * metresPerPixel} kind="run" unitSystem={unitSystem} onCommit={(valueM) => valueM !== null && onChange({ y: valueM / metresPerPixel })} />
         </div>
         <NumberInput label="Criterion" unit="NC" value={room.criterionNc} min={0} max={70} onCommit={(criterionNc) => criterionNc !== null && onChange({ criterionNc })} />
         <div>
