@@ -201,7 +201,7 @@ export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable 
           )}
         </aside>
       </div>
-      <RiskDrawer planId={plan.id} version={model.version} flags={risks.data?.flags ?? null} roomResults={risks.data?.rooms ?? []} rooms={doc.rooms} treatments={doc.treatments ?? []}
+      <RiskDrawer planId={plan.id} version={model.version} flags={risks.data?.flags ?? null} rules={risks.data ?? null} roomResults={risks.data?.rooms ?? []} rooms={doc.rooms} treatments={doc.treatments ?? []}
         loading={risks.isLoading} stale={risksStale} error={risks.error ? risks.error.message : null} editable={editable} canEvaluate={canEvaluate}
         onOpenRoom={setOpenRoomId} onAddRoom={roomActions.addRoom} onChoose={roomActions.chooseTreatment} onRemoveTreatment={roomActions.removeTreatment} />
     </div>

@@ -8,6 +8,13 @@ import type { PlanRoom } from '@/lib/plan/rooms/room-types';
 import { toRunInputWithMap, type MainPathPiece } from '@/lib/plan/to-run-input';
 import { nodeDegree, runOfNode } from '@/lib/plan/topology';
 
+/**
+ * The coincidence rules the plan's flags use, stated in the risk list: a resonance within the wider of
+ * its half bandwidth and this percentage of a tone or mode; a point within this fraction of a
+ * wavelength of a mode's pressure maximum (the engine's own defaults, passed explicitly).
+ */
+export const RISK_OPTIONS = { coincidencePercent: 3, nearMaximumWavelengths: 1 / 8 } as const;
+
 export interface RiskContext {
   run: PlanRun;
   room: PlanRoom | null;
@@ -42,11 +49,11 @@ export function riskContext(doc: PlanDocument, metresPerPixel: number, target: R
     const fed = feedingRun(doc, room);
     const { input: run, path } = toRunInputWithMap(fed.doc, fed.run.id, metresPerPixel);
     const roomInput = toRoomInput(room, fed.run.temperatureC);
-    const input: RiskInput = { run, room: roomInput, fan: fanInput(fed.run), ...(room.outletSoundPowerDb ? { outletSoundPowerDb: [...room.outletSoundPowerDb] } : {}) };
+    const input: RiskInput = { run, room: roomInput, fan: fanInput(fed.run), options: { ...RISK_OPTIONS }, ...(room.outletSoundPowerDb ? { outletSoundPowerDb: [...room.outletSoundPowerDb] } : {}) };
     return { run: fed.run, room, input, path };
   }
   const run = findRun(doc, target.runId);
   if (!run) throw new PlanError(`There is no run with id "${target.runId}".`, { runId: target.runId });
   const { input, path } = toRunInputWithMap(doc, run.id, metresPerPixel);
-  return { run, room: null, input: { run: input, fan: fanInput(run) }, path };
+  return { run, room: null, input: { run: input, fan: fanInput(run), options: { ...RISK_OPTIONS } }, path };
 }

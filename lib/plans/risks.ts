@@ -5,7 +5,7 @@ import {
   type OutletLevelBand, type RiskFlag, type RoomAnalysis,
 } from '@/lib/acoustic';
 import type { PlanDocument } from '@/lib/plan/document';
-import { riskContext, type RiskContext } from './risk-context';
+import { RISK_OPTIONS, riskContext, type RiskContext } from './risk-context';
 
 /** Fan harmonics drawn on the room's mode chart (the flags check the engine's default, 3). */
 const CHART_HARMONICS = 3;
@@ -37,6 +37,9 @@ export interface RoomResult {
 export interface PlanRisks {
   rooms: RoomResult[];
   flags: PlacedFlag[];
+  /** The rules behind the flags, for the risk list to state. */
+  coincidencePercent: number;
+  nearMaximumWavelengths: number;
 }
 
 /**
@@ -99,5 +102,5 @@ export function planRisks(doc: PlanDocument, metresPerPixel: number): PlanRisks 
         return [];
       }
     });
-  return { rooms: rooms.map((entry) => entry.result), flags: [...rooms.flatMap((entry) => entry.flags), ...runFlags] };
+  return { rooms: rooms.map((entry) => entry.result), flags: [...rooms.flatMap((entry) => entry.flags), ...runFlags], ...RISK_OPTIONS };
 }

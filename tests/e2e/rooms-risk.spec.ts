@@ -17,6 +17,7 @@ test('a fan tone on a resonance of the run feeding a room is flagged; a chosen r
   await expect(toneRow).toContainText('High');
   await expect(toneRow).toContainText('blade-pass tone');
   await expect(toneRow).toContainText('Recital room');
+  await expect(drawer.getByTestId('risk-rules')).toContainText('3 % of a fan tone');
 
   // The room's results: mode chart with the run's resonances and fan tones, reflectogram, spectrum.
   await drawer.getByRole('tab', { name: /^Rooms/ }).click();

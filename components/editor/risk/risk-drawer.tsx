@@ -15,6 +15,7 @@ interface RiskDrawerProps {
   planId: string;
   version: number;
   flags: PlacedFlag[] | null;
+  rules: { coincidencePercent: number; nearMaximumWavelengths: number } | null;
   roomResults: RoomResult[];
   rooms: readonly PlanRoom[];
   treatments: readonly PlanTreatment[];
@@ -59,7 +60,7 @@ export function RiskDrawer(props: RiskDrawerProps) {
           {props.error && <p role="alert" className="text-sm text-risk-ink">{props.error}</p>}
           {tab === 'risks' && (props.loading && !props.flags ? <p className="text-sm text-graphite-500">Checking the plan for risks…</p> : (
             <>
-              <RiskList flags={props.flags ?? []} canEvaluate={props.canEvaluate} openFlagId={openFlag?.id ?? null} onOpen={setOpenFlag} />
+              <RiskList flags={props.flags ?? []} rules={props.rules} canEvaluate={props.canEvaluate} openFlagId={openFlag?.id ?? null} onOpen={setOpenFlag} />
               {openFlag && <TreatmentOptionsPanel planId={props.planId} version={props.version} flag={openFlag} editable={props.editable} onChoose={choose} onClose={() => setOpenFlag(null)} />}
             </>
           ))}

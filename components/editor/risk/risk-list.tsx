@@ -6,17 +6,27 @@ import { SeverityBadge } from './severity-badge';
 
 interface RiskListProps {
   flags: PlacedFlag[];
+  /** The rules behind the flags (null while loading). */
+  rules: { coincidencePercent: number; nearMaximumWavelengths: number } | null;
   canEvaluate: boolean;
   openFlagId: string | null;
   onOpen: (flag: PlacedFlag) => void;
 }
 
 // Every flag across the plan: severity (word and shape), where, what, and the way to its treatments.
-export function RiskList({ flags, canEvaluate, openFlagId, onOpen }: RiskListProps) {
+export function RiskList({ flags, rules, canEvaluate, openFlagId, onOpen }: RiskListProps) {
+  const ruleText = rules && (
+    <p className="text-xs text-graphite-500" data-testid="risk-rules">
+      A duct resonance is flagged when it lies within its half bandwidth or {rules.coincidencePercent} % of a fan tone or room mode, whichever is wider;
+      a room mode counts below the room&apos;s Schroeder frequency when the outlet or listener is within {(rules.nearMaximumWavelengths * 100).toFixed(1)} % of a wavelength of its pressure maximum.
+    </p>
+  );
   if (flags.length === 0) {
-    return <p className="text-sm text-graphite-500" data-testid="no-risks">No flags on the saved plan. Give each run its fan and connect each room to the run end that feeds it to check them.</p>;
+    return <>{ruleText}<p className="text-sm text-graphite-500" data-testid="no-risks">No flags on the saved plan. Give each run its fan and connect each room to the run end that feeds it to check them.</p></>;
   }
   return (
+    <>
+    {ruleText}
     <table className="w-full text-left text-sm" data-testid="risk-list">
       <thead className="text-xs text-graphite-500">
         <tr><th className="py-1 pr-2 font-medium">Severity</th><th className="pr-2 font-medium">Where</th><th className="pr-2 font-medium">Why</th><th className="pr-2 font-medium">Quantity</th><th /></tr>
@@ -35,5 +45,6 @@ export function RiskList({ flags, canEvaluate, openFlagId, onOpen }: RiskListPro
         ))}
       </tbody>
     </table>
+    </>
   );
 }

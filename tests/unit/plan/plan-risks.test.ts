@@ -18,6 +18,8 @@ describe('risks across the plan (server, from the document)', () => {
     expect(room.fanTonesHz[0]).toBeCloseTo(115.733, 3);
     expect(room.criterionDb).toHaveLength(8);
     expect(room.levels).toBeNull();
+    // the rules the list states are the ones the flags used
+    expect(risks).toMatchObject({ coincidencePercent: 3, nearMaximumWavelengths: 0.125 });
   });
 
   it('without a fan there is no tone flag; a room fed by no run says what to do', () => {
