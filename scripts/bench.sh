@@ -24,3 +24,8 @@ SERVER_PID=$!
 trap 'kill $SERVER_PID 2>/dev/null' EXIT
 wait_for_health "http://127.0.0.1:$BENCH_PORT/api/v1/health" "$SERVER_PID"
 ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/editor/run.ts || fail "the editor benchmark failed"
+
+step "Treatment schedule PDF"
+# @react-pdf/renderer ships ES modules only, so the benchmark is bundled (packages stay external) and run as ESM.
+node node_modules/esbuild/bin/esbuild bench/schedule/run.ts --bundle --platform=node --format=esm --packages=external --jsx=automatic --log-level=warning --outfile="$DATA_DIR/bench-schedule.mjs" || fail "the schedule benchmark did not build"
+node "$DATA_DIR/bench-schedule.mjs" || fail "the schedule benchmark failed"

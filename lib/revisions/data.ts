@@ -7,6 +7,7 @@ import { analysePlan, type RunResult } from '@/lib/plans/results';
 import { assertId } from '@/lib/team/ids';
 import { Plan, Project, Revision, Upload } from '@/models';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
+import { freezeExtras } from './freeze-extras';
 import { revisionPath } from './links';
 import { isRevisionState, type RevisionState } from './states';
 import type { RevisionExtras, RevisionSummary, RevisionView } from './types';
@@ -30,7 +31,7 @@ export async function submitRevision(teamId: string, actor: ActivityActor, planI
     throw new AppError('bad_input', 'This plan has no duct run yet. Draw at least one run before submitting it for review.');
   }
   const analysis = analysePlan(plan.document, plan.metresPerPixel);
-  const extras: RevisionExtras = plan.document.rooms.length > 0 ? { rooms: plan.document.rooms } : {};
+  const extras = freezeExtras(plan.document, plan.metresPerPixel);
   return sequelize.transaction(async (transaction) => {
     // One submission at a time per plan, so numbers never collide.
     await Plan.findOne({ where: { id: planId }, transaction, lock: transaction.LOCK.UPDATE });

@@ -6,13 +6,14 @@ import type { RevisionState } from './states';
 // Rooms, risk flags and treatments as they were when the revision was frozen (each present
 // only when the plan had them).
 export interface RevisionExtras {
-  rooms?: readonly unknown[];
+  rooms?: readonly RoomRow[];
   risks?: readonly RiskRow[];
   treatments?: readonly TreatmentRow[];
 }
 
-export interface RiskRow { id: string; runId: string | null; label: string; detail: string }
-export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; beforeDb: number | null; afterDb: number | null }
+export interface RiskRow { id: string; runId: string | null; label: string; detail: string; severity: string }
+export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; before: string; after: string; clears: boolean }
+export interface RoomRow { id: string; name: string; problem: string | null; summary: string }
 
 export interface RevisionSummary {
   id: string;

@@ -5,7 +5,7 @@ import { nodePositions } from '@/lib/plan/document';
 import type { RunResult } from '@/lib/plans/results';
 import { resonanceTarget } from '@/lib/revisions/rows';
 import { revisionStateLabel } from '@/lib/revisions/states';
-import type { RevisionView, RiskRow, TreatmentRow } from '@/lib/revisions/types';
+import type { RevisionView, RiskRow, RoomRow, TreatmentRow } from '@/lib/revisions/types';
 import type { DecisionView } from '@/lib/reviews/data';
 import { DECISION_LABELS } from '@/lib/reviews/decisions';
 import { describeSection, describeTermination } from './describe';
@@ -45,7 +45,7 @@ export interface ScheduleContent {
   runs: ScheduleRun[];
   risks: readonly RiskRow[];
   treatments: readonly TreatmentRow[];
-  rooms: readonly unknown[];
+  rooms: readonly RoomRow[];
   temperaturesC: number[];
 }
 
@@ -111,7 +111,7 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
       const segment = segments.get(piece.segmentId);
       return {
         index: index + 1, lengthM: piece.endM - piece.startM, section: segment ? describeSection(segment.section) : '—',
-        lining: segment?.lining ? `${(segment.lining.thicknessM * 1000).toFixed(0)} mm, α ${segment.lining.absorption.toFixed(2)}` : 'none',
+        lining: segment?.lining ? `${(segment.lining.thicknessM * 1000).toFixed(0)} mm, absorption ${segment.lining.absorption.toFixed(2)}` : 'none',
       };
     }),
     terminations,

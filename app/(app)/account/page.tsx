@@ -1,8 +1,10 @@
 import type { Metadata } from 'next';
 import { EmailChangeForm } from '@/components/account/email-change-form';
+import { NotificationSettingsSection } from '@/components/notifications/notification-settings-section';
 import { PasswordChangeForm } from '@/components/account/password-change-form';
 import { SignOutEverywhere } from '@/components/shell/sign-out-everywhere';
 import { requireActor } from '@/lib/auth/current';
+import { notificationSettings } from '@/lib/notifications/settings';
 import { ROLE_LABELS } from '@/lib/permissions';
 
 export const metadata: Metadata = { title: 'Account' };
@@ -30,6 +32,7 @@ export default async function AccountPage() {
         <p className="mb-3 text-sm text-graphite-500">Changing it signs out your other sessions; this one stays.</p>
         <PasswordChangeForm />
       </section>
+      <NotificationSettingsSection settings={await notificationSettings(actor.user.id)} />
       <section className="panel p-6" aria-labelledby="teams-title">
         <h2 id="teams-title" className="mb-3 font-semibold">Teams</h2>
         <ul className="divide-y divide-graphite-100 text-sm">

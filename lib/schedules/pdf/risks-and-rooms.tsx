@@ -5,14 +5,6 @@ import type { ScheduleContent } from '../content';
 import { Table } from './table';
 import { styles } from './styles';
 
-function db(value: number | null): string {
-  return value === null ? '—' : `${value.toFixed(1)} dB`;
-}
-
-function roomName(room: unknown, index: number): string {
-  if (room && typeof room === 'object' && 'name' in room && typeof room.name === 'string') return room.name;
-  return `Room ${index + 1}`;
-}
 
 export function RisksAndRooms({ content }: { content: ScheduleContent }) {
   const nearTones = content.runs.flatMap((run) => run.resonances.filter((row) => row.fanTone !== 'clear').map((row) => [run.name, `Order ${row.order} at ${row.frequencyHz.toFixed(1)} Hz`, row.fanTone]));
@@ -20,7 +12,7 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
     <View>
       <Text style={styles.h2}>3. Risk flags and treatments</Text>
       {content.risks.length > 0 ? (
-        <Table columns={[{ title: 'Risk', width: 0.4 }, { title: 'Detail', width: 0.6 }]} rows={content.risks.map((risk) => [risk.label, risk.detail])} />
+        <Table columns={[{ title: 'Risk', width: 0.34 }, { title: 'Severity', width: 0.1 }, { title: 'Detail', width: 0.56 }]} rows={content.risks.map((risk) => [risk.label, risk.severity, risk.detail])} />
       ) : nearTones.length > 0 ? (
         <>
           <Text style={styles.paragraph}>Resonances that coincide with a fan blade-pass tone:</Text>
@@ -31,8 +23,8 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
       )}
       {content.treatments.length > 0 ? (
         <Table
-          columns={[{ title: 'Treatment', width: 0.4 }, { title: 'Kind', width: 0.2 }, { title: 'Before', width: 0.2, numeric: true }, { title: 'After (predicted)', width: 0.2, numeric: true }]}
-          rows={content.treatments.map((treatment) => [treatment.label, treatment.kind, db(treatment.beforeDb), db(treatment.afterDb)])}
+          columns={[{ title: 'Chosen treatment', width: 0.4 }, { title: 'Before', width: 0.22 }, { title: 'After (predicted)', width: 0.22 }, { title: 'Clears the flag', width: 0.16 }]}
+          rows={content.treatments.map((treatment) => [treatment.label, treatment.before, treatment.after, treatment.clears ? 'yes' : 'no'])}
         />
       ) : (
         <View style={styles.note}><Text>No treatments are chosen in this revision. The schedule is issued with the analysis only; treatments added later appear in a new revision.</Text></View>
@@ -40,7 +32,7 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
       <Text style={styles.h2}>4. Rooms</Text>
       {content.rooms.length === 0
         ? <Text style={styles.paragraph}>No rooms are drawn on this plan, so no room results are given.</Text>
-        : content.rooms.map((room, index) => <Text key={index} style={styles.paragraph}>{roomName(room, index)}: drawn on the plan; see the plan results for its modes.</Text>)}
+        : <Table columns={[{ title: 'Room', width: 0.3 }, { title: 'Result', width: 0.7 }]} rows={content.rooms.map((room) => [room.name, room.problem ?? room.summary])} />}
     </View>
   );
 }

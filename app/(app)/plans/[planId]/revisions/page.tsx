@@ -1,0 +1,58 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { EmptyState } from '@/components/feedback/empty-state';
+import { ActivityList } from '@/components/revisions/activity-list';
+import { PlanRevisionActions } from '@/components/revisions/plan-revision-actions';
+import { RevisionList } from '@/components/revisions/revision-list';
+import { listPlanActivity } from '@/lib/activity/data';
+import { requireActor } from '@/lib/auth/current';
+import { AppError } from '@/lib/errors';
+import { can } from '@/lib/permissions';
+import { getPlan } from '@/lib/plans/data';
+import { listRevisions } from '@/lib/revisions/data';
+
+export const metadata: Metadata = { title: 'Revisions' };
+
+export default async function RevisionsPage({ params }: { params: Promise<{ planId: string }> }) {
+  const { planId } = await params;
+  const actor = await requireActor();
+  if (!actor.team || !/^[0-9a-f-]{36}$/i.test(planId)) notFound();
+  const teamId = actor.team.teamId;
+  const plan = await getPlan(teamId, planId).catch((error: unknown) => {
+    if (error instanceof AppError && error.code === 'not_found') return null;
+    throw error;
+  });
+  if (!plan) notFound();
+  const [revisions, activity] = await Promise.all([listRevisions(teamId, planId), listPlanActivity(teamId, planId)]);
+  return (
+    <div className="space-y-6">
+      <nav aria-label="Breadcrumb" className="text-sm text-graphite-500">
+        <Link href="/projects" className="hover:text-graphite">Projects</Link> <span aria-hidden="true">/</span>{' '}
+        <Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}
+        <Link href={`/plans/${plan.id}`} className="hover:text-graphite">{plan.name}</Link> <span aria-hidden="true">/</span> Revisions
+      </nav>
+      <div className="flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <h1 className="text-xl font-semibold">Revisions of {plan.name}</h1>
+          <p className="text-sm text-graphite-500">Each revision freezes the plan and its analysis as submitted. Edits after it make a new draft.</p>
+        </div>
+        <PlanRevisionActions planId={plan.id} latestRevisionNumber={revisions[0]?.number ?? null} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} />
+      </div>
+      {revisions.length === 0 ? (
+        <EmptyState title="No revision yet">
+          {can(actor.team.role, 'plan.edit') ? 'Draw the duct runs, then “Submit for review” freezes the plan as revision 1 and asks the engineers to review it.' : 'When the acoustician submits this plan for review, its revisions appear here.'}
+        </EmptyState>
+      ) : (
+        <RevisionList planId={plan.id} revisions={revisions} />
+      )}
+      {revisions[0] && plan.version !== revisions[0].planVersion && (
+        <p className="text-sm text-graphite-500" data-testid="draft-note">The plan has changed since revision {revisions[0].number}: the current drawing is a draft, not reviewed.</p>
+      )}
+      <section aria-labelledby="activity-title">
+        <h2 id="activity-title" className="mb-2 text-sm font-semibold text-graphite-700">Activity</h2>
+        <ActivityList lines={activity} />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,28 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { apiFetch } from '@/components/api-fetch';
+import { FormAlert } from '@/components/forms/form-alert';
+
+// Issues the schedule of a revision: renders it, stores it with its checksum.
+export function IssueSchedule({ revisionId, approved }: { revisionId: string; approved: boolean }) {
+  const router = useRouter();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const issue = async () => {
+    setBusy(true);
+    setError(null);
+    const answer = await apiFetch(`/api/v1/revisions/${revisionId}/schedules`, { method: 'POST', body: {} });
+    setBusy(false);
+    if (!answer.ok) setError(answer.error.message);
+    else router.refresh();
+  };
+  return (
+    <div className="space-y-2">
+      {!approved && <p className="text-sm text-risk-ink">This revision is not approved: the schedule is issued as a draft, watermarked as such.</p>}
+      <FormAlert message={error} />
+      <button type="button" className="btn-primary" disabled={busy} onClick={issue}>{busy ? 'Rendering the PDF…' : 'Issue schedule'}</button>
+    </div>
+  );
+}

@@ -1,0 +1,73 @@
+import { expect, test } from '@playwright/test';
+import { signIn } from './fixtures';
+import { linkInMailTo, teamWithRevision } from './review-fixtures';
+
+test('the engineer flags a resonance row and the acoustician sees it returned with the note', async ({ page }) => {
+  const { people, planId } = await teamWithRevision('Flag');
+  await signIn(page, people.engineer.email);
+  await page.goto(`/plans/${planId}/revisions/1`);
+  await expect(page.getByTestId('revision-state').first()).toHaveText(/Waiting for review/);
+  await page.getByRole('button', { name: 'Flag Supply run 1 order 1', exact: true }).click();
+  await page.getByLabel('Why is Supply run 1 order 1 flagged?').fill('Sits on the fan tone; retune the riser');
+  await page.getByRole('button', { name: 'Save flag' }).click();
+  const row = page.getByTestId('review-row-Supply run 1-1');
+  await expect(row.getByTestId('row-decision')).toHaveText(/Flagged/);
+  await page.getByRole('button', { name: 'Accept Supply run 1 order 2', exact: true }).click();
+  await expect(page.getByTestId('review-row-Supply run 1-2').getByTestId('row-decision')).toHaveText(/Accepted/);
+  await page.getByRole('button', { name: 'Finish review: request changes' }).click();
+  await expect(page.getByTestId('revision-state').first()).toHaveText('!Returned: changes requested');
+
+  await page.context().clearCookies();
+  await signIn(page, people.acoustician.email);
+  await page.goto(`/plans/${planId}/revisions`);
+  await expect(page.getByRole('list', { name: 'Revisions' })).toContainText('Returned: changes requested');
+  await page.getByRole('list', { name: 'Revisions' }).getByRole('link', { name: /Revision 1/ }).click();
+  const seen = page.getByTestId('review-row-Supply run 1-1');
+  await expect(seen).toContainText('Flagged');
+  await expect(seen).toContainText('Sits on the fan tone; retune the riser');
+  await expect(page.getByRole('button', { name: /^Flag / })).toHaveCount(0);
+});
+
+test('the architect pins a comment mentioning the acoustician, who follows the mailed link to it', async ({ page }) => {
+  const { people, planId } = await teamWithRevision('Pin');
+  await signIn(page, people.architect.email);
+  await page.goto(`/plans/${planId}/revisions/1`);
+  await page.getByRole('button', { name: 'Place a pin' }).click();
+  const canvas = page.getByTestId('plan-canvas');
+  await expect(canvas.locator('canvas').first()).toBeVisible();
+  const box = (await canvas.boundingBox())!;
+  await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+  await page.getByLabel('Mention').selectOption(people.acoustician.name);
+  const textarea = page.getByLabel('Comment', { exact: true });
+  await textarea.pressSequentially('can this run move 300 mm east?');
+  await expect(textarea).toHaveValue(`@${people.acoustician.name} can this run move 300 mm east?`);
+  await page.getByRole('button', { name: 'Post comment' }).click();
+  await expect(page.getByTestId('comment-pin')).toHaveCount(1);
+  await expect(page.getByTestId('comment-thread')).toContainText('can this run move 300 mm east?');
+
+  const link = await linkInMailTo(people.acoustician.email, `/plans/${planId}/revisions/1?comment=`);
+  await page.context().clearCookies();
+  await signIn(page, people.acoustician.email);
+  await page.goto(link);
+  const thread = page.locator('[data-testid="comment-thread"][aria-current="true"]');
+  await expect(thread).toContainText(`@${people.acoustician.name} can this run move 300 mm east?`);
+  await expect(page.getByTestId('comment-pin')).toHaveCount(1);
+  await thread.getByRole('button', { name: 'Resolve' }).click();
+  await expect(thread).toContainText('Resolved');
+});
+
+test('a viewer can neither review nor comment, and the route handlers answer 403', async ({ page }) => {
+  const { people, planId, revision } = await teamWithRevision('Viewer');
+  await signIn(page, people.viewer.email);
+  await page.goto(`/plans/${planId}/revisions/1`);
+  await expect(page.getByTestId('review-row-Supply run 1-1')).toContainText('Not reviewed');
+  await expect(page.getByRole('button', { name: /^(Accept|Flag) / })).toHaveCount(0);
+  await expect(page.getByRole('button', { name: 'Place a pin' })).toHaveCount(0);
+  await expect(page.getByRole('button', { name: /^Finish review/ })).toHaveCount(0);
+
+  const decide = await page.request.put(`/api/v1/revisions/${revision.id}/decisions`, { data: { target: 'resonance:x:1', decision: 'accepted' } });
+  expect(decide.status()).toBe(403);
+  const comment = await page.request.post('/api/v1/comments', { data: { planId, xPx: 10, yPx: 10, body: 'hello' } });
+  expect(comment.status()).toBe(403);
+  expect(await comment.json()).toMatchObject({ error: { code: 'forbidden' } });
+});
