@@ -27,5 +27,5 @@ ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli
 
 step "Treatment schedule PDF"
 # @react-pdf/renderer ships ES modules only, so the benchmark is bundled (packages stay external) and run as ESM.
-node node_modules/esbuild/bin/esbuild bench/schedule/run.ts --bundle --platform=node --format=esm --packages=external --jsx=automatic --log-level=warning --outfile="$DATA_DIR/bench-schedule.mjs" || fail "the schedule benchmark did not build"
+node_modules/.bin/esbuild bench/schedule/run.ts --bundle --platform=node --format=esm --packages=external --jsx=automatic --log-level=warning --outfile="$DATA_DIR/bench-schedule.mjs" || fail "the schedule benchmark did not build"
 node "$DATA_DIR/bench-schedule.mjs" || fail "the schedule benchmark failed"

@@ -14,12 +14,14 @@ export interface PlanRevisionActionsProps {
   latestRevisionNumber: number | null;
   canSubmit: boolean;
   canIssue: boolean;
+  // Off on the revision list itself.
+  showListLink?: boolean;
   // Called after a submission instead of opening the new revision (the editor may stay put).
   onSubmitted?: (revision: RevisionSummary) => void;
 }
 
 // The plan header's revision actions: submit for review, the revision list, issue schedule.
-export function PlanRevisionActions({ planId, latestRevisionNumber, canSubmit, canIssue, onSubmitted }: PlanRevisionActionsProps) {
+export function PlanRevisionActions({ planId, latestRevisionNumber, canSubmit, canIssue, showListLink = true, onSubmitted }: PlanRevisionActionsProps) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [note, setNote] = useState('');
@@ -40,7 +42,7 @@ export function PlanRevisionActions({ planId, latestRevisionNumber, canSubmit, c
 
   return (
     <div className="flex flex-wrap items-start gap-2">
-      <Link href={revisionsPath(planId)} className="btn-quiet">Revisions</Link>
+      {showListLink && <Link href={revisionsPath(planId)} className="btn-quiet">Revisions</Link>}
       {canIssue && latestRevisionNumber !== null && (
         <Link href={schedulePath(planId, latestRevisionNumber)} className="btn-quiet">Issue schedule</Link>
       )}

@@ -8,7 +8,10 @@ import path from 'node:path';
 import { extractText, getDocumentProxy } from 'unpdf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '@/lib/db';
+import { setPlanBackground } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
+import { storePlanBackground } from '@/lib/uploads/data';
+import { tinyPng } from '../helpers/files';
 import { getRevisionByNumber } from '@/lib/revisions/data';
 import { PRINTED_LOWEST_ORDERS } from '@/lib/schedules/content';
 import { call } from '../helpers/routes';
@@ -25,6 +28,9 @@ beforeAll(async () => {
   t = await createTestTeam('schedule');
   const project = await createProject(t.team.id, t.members.acoustician.id, { name: 'Harbour Lane Recital Hall', site: '' });
   planId = await planWithRuns(t, project.id, 2, 'Level 3 supply');
+  // A drawing behind the runs, so the plan page draws the stored image too.
+  const upload = await storePlanBackground(t.team.id, t.members.acoustician.id, 'level-3.png', tinyPng(4000, 3000));
+  await setPlanBackground(t.team.id, planId, upload.id);
   revisionId = (await submitted(t, planId)).id;
 });
 afterAll(async () => { await sequelize.close(); });
@@ -55,6 +61,7 @@ describe('treatment schedule', () => {
     expect(text).toContain('Harbour Lane Recital Hall');
     expect(text).toContain('DRAFT');
     expect(text).toContain('No treatments are chosen');
+    expect(text).not.toContain('No drawing image is attached');
     expect(text).toContain('fire and smoke');
     const revision = await getRevisionByNumber(t.team.id, planId, 1);
     const frequencies = revision.analysis.flatMap((run) => (run.analysis?.resonances ?? []).slice(0, PRINTED_LOWEST_ORDERS).map((row) => `${row.frequencyHz.toFixed(1)} Hz`));

@@ -37,7 +37,7 @@ export default async function RevisionsPage({ params }: { params: Promise<{ plan
           <h1 className="text-xl font-semibold">Revisions of {plan.name}</h1>
           <p className="text-sm text-graphite-500">Each revision freezes the plan and its analysis as submitted. Edits after it make a new draft.</p>
         </div>
-        <PlanRevisionActions planId={plan.id} latestRevisionNumber={revisions[0]?.number ?? null} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} />
+        <PlanRevisionActions planId={plan.id} latestRevisionNumber={revisions[0]?.number ?? null} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} showListLink={false} />
       </div>
       {revisions.length === 0 ? (
         <EmptyState title="No revision yet">
