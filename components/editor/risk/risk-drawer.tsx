@@ -30,7 +30,8 @@ interface RiskDrawerProps {
   onRemoveTreatment: (treatmentId: string) => void;
 }
 
-// The bottom drawer: every risk flag across the plan, the rooms, and the chosen treatments.
+// The bottom drawer: every risk flag across the plan, the rooms, and the chosen treatments. Its
+// height is fixed while open, so the canvas above keeps its size whatever the lists hold.
 export function RiskDrawer(props: RiskDrawerProps) {
   const [open, setOpen] = useState(true);
   const [tab, setTab] = useState<Tab>('risks');
@@ -56,7 +57,7 @@ export function RiskDrawer(props: RiskDrawerProps) {
         <button type="button" className="btn-quiet ml-auto px-2 py-0.5 text-xs" aria-expanded={open} onClick={() => setOpen(!open)}>{open ? 'Hide' : 'Show'}</button>
       </div>
       {open && (
-        <div className="max-h-[19rem] space-y-3 overflow-y-auto px-4 py-3" role="tabpanel">
+        <div className="h-56 space-y-3 overflow-y-auto px-4 py-3" role="tabpanel">
           {props.error && <p role="alert" className="text-sm text-risk-ink">{props.error}</p>}
           {tab === 'risks' && (props.loading && !props.flags ? <p className="text-sm text-graphite-500">Checking the plan for risks…</p> : (
             <>
