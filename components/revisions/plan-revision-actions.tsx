@@ -7,11 +7,14 @@ import { apiFetch } from '@/components/api-fetch';
 import { FormAlert } from '@/components/forms/form-alert';
 import { revisionPath, revisionsPath, schedulePath } from '@/lib/revisions/links';
 import type { RevisionSummary } from '@/lib/revisions/types';
+import { RevisionStateBadge } from './revision-state-badge';
 
 export interface PlanRevisionActionsProps {
   planId: string;
-  // The newest revision, if any (for "Issue schedule").
-  latestRevisionNumber: number | null;
+  // The newest revision, if any (lib/revisions/data.ts latestRevision), and the plan's saved
+  // version: when they differ the drawing is a draft, never shown as approved.
+  latest: Pick<RevisionSummary, 'number' | 'state' | 'planVersion'> | null;
+  planVersion: number;
   canSubmit: boolean;
   canIssue: boolean;
   // Off on the revision list itself.
@@ -21,7 +24,7 @@ export interface PlanRevisionActionsProps {
 }
 
 // The plan header's revision actions: submit for review, the revision list, issue schedule.
-export function PlanRevisionActions({ planId, latestRevisionNumber, canSubmit, canIssue, showListLink = true, onSubmitted }: PlanRevisionActionsProps) {
+export function PlanRevisionActions({ planId, latest, planVersion, canSubmit, canIssue, showListLink = true, onSubmitted }: PlanRevisionActionsProps) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [note, setNote] = useState('');
@@ -42,9 +45,18 @@ export function PlanRevisionActions({ planId, latestRevisionNumber, canSubmit, c
 
   return (
     <div className="flex flex-wrap items-start gap-2">
+      <span className="flex items-center gap-2 self-center text-sm" data-testid="plan-revision-state">
+        {latest === null ? (
+          <span className="text-graphite-500">Draft, never submitted</span>
+        ) : latest.planVersion === planVersion ? (
+          <>Revision {latest.number} <RevisionStateBadge state={latest.state} /></>
+        ) : (
+          <span className="text-graphite-500">Draft: changed since revision {latest.number}</span>
+        )}
+      </span>
       {showListLink && <Link href={revisionsPath(planId)} className="btn-quiet">Revisions</Link>}
-      {canIssue && latestRevisionNumber !== null && (
-        <Link href={schedulePath(planId, latestRevisionNumber)} className="btn-quiet">Issue schedule</Link>
+      {canIssue && latest !== null && (
+        <Link href={schedulePath(planId, latest.number)} className="btn-quiet">Issue schedule</Link>
       )}
       {canSubmit && !open && <button type="button" className="btn-primary" onClick={() => setOpen(true)}>Submit for review</button>}
       {canSubmit && open && (

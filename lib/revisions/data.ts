@@ -93,3 +93,10 @@ export async function previousRevision(teamId: string, planId: string, number: n
   const row = await Revision.findOne({ where: { teamId, planId, number: number - 1 } });
   return row ? toView(row) : null;
 }
+
+// The newest revision of a plan (for the plan header), or null before the first submission.
+export async function latestRevision(teamId: string, planId: string): Promise<RevisionSummary | null> {
+  assertId(planId, 'That plan');
+  const row = await Revision.findOne({ where: { teamId, planId }, attributes: { exclude: ['document', 'analysis', 'extras'] }, order: [['number', 'DESC']] });
+  return row ? toRevisionSummary(row) : null;
+}

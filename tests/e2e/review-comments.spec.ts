@@ -21,6 +21,8 @@ test('the engineer flags a resonance row and the acoustician sees it returned wi
   await signIn(page, people.acoustician.email);
   await page.goto(`/plans/${planId}/revisions`);
   await expect(page.getByRole('list', { name: 'Revisions' })).toContainText('Returned: changes requested');
+  await expect(page.getByTestId('plan-revision-state')).toContainText('Revision 1');
+  await expect(page.getByTestId('plan-revision-state')).toContainText('Returned: changes requested');
   await page.getByRole('list', { name: 'Revisions' }).getByRole('link', { name: /Revision 1/ }).click();
   const seen = page.getByTestId('review-row-Supply run 1-1');
   await expect(seen).toContainText('Flagged');

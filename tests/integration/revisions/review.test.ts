@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '@/lib/db';
 import { savePlanDocument, getPlan } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
-import { getRevisionByNumber } from '@/lib/revisions/data';
+import { getRevisionByNumber, latestRevision } from '@/lib/revisions/data';
 import { reviewRows } from '@/lib/revisions/rows';
 import { call } from '../helpers/routes';
 import { mailsTo } from '../helpers/inbox';
@@ -74,5 +74,13 @@ describe('revisions and review', () => {
     expect(approved.body).toMatchObject({ revision: { state: 'approved', number: 2 } });
     const listed = await call(list, 'GET', '/x', { cookie: await t.cookieFor('viewer'), params: { planId } });
     expect(listed.body).toMatchObject({ revisions: [{ number: 2, state: 'approved' }, { number: 1, state: 'returned' }] });
+
+    // The approval belongs to revision 2 only: the next save makes the drawing a draft again.
+    const approvedPlan = await getPlan(t.team.id, planId);
+    expect((await latestRevision(t.team.id, planId))?.planVersion).toBe(approvedPlan.version);
+    await savePlanDocument(t.team.id, t.members.acoustician.id, planId, { version: approvedPlan.version, metresPerPixel: TEST_METRES_PER_PIXEL, document: approvedPlan.document });
+    const latest = await latestRevision(t.team.id, planId);
+    expect(latest).toMatchObject({ number: 2, state: 'approved' });
+    expect(latest?.planVersion).not.toBe((await getPlan(t.team.id, planId)).version);
   });
 });

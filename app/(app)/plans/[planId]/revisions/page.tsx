@@ -37,7 +37,7 @@ export default async function RevisionsPage({ params }: { params: Promise<{ plan
           <h1 className="text-xl font-semibold">Revisions of {plan.name}</h1>
           <p className="text-sm text-graphite-500">Each revision freezes the plan and its analysis as submitted. Edits after it make a new draft.</p>
         </div>
-        <PlanRevisionActions planId={plan.id} latestRevisionNumber={revisions[0]?.number ?? null} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} showListLink={false} />
+        <PlanRevisionActions planId={plan.id} latest={revisions[0] ?? null} planVersion={plan.version} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} showListLink={false} />
       </div>
       {revisions.length === 0 ? (
         <EmptyState title="No revision yet">
@@ -45,9 +45,6 @@ export default async function RevisionsPage({ params }: { params: Promise<{ plan
         </EmptyState>
       ) : (
         <RevisionList planId={plan.id} revisions={revisions} />
-      )}
-      {revisions[0] && plan.version !== revisions[0].planVersion && (
-        <p className="text-sm text-graphite-500" data-testid="draft-note">The plan has changed since revision {revisions[0].number}: the current drawing is a draft, not reviewed.</p>
       )}
       <section aria-labelledby="activity-title">
         <h2 id="activity-title" className="mb-2 text-sm font-semibold text-graphite-700">Activity</h2>
