@@ -47,6 +47,16 @@ test('the architect pins a comment mentioning the acoustician, who follows the m
   await expect(page.getByTestId('comment-pin')).toHaveCount(1);
   await expect(page.getByTestId('comment-thread')).toContainText('can this run move 300 mm east?');
 
+  // The pin stays on its plan point while the plan zooms about another point.
+  const pin = page.getByTestId('comment-pin');
+  const tip = async () => { const pinBox = (await pin.boundingBox())!; return { x: pinBox.x + pinBox.width / 2, y: pinBox.y + pinBox.height }; };
+  const before = await tip();
+  const anchor = { x: box.x + box.width / 2 - 150, y: box.y + box.height / 2 };
+  await page.mouse.move(anchor.x, anchor.y);
+  await page.mouse.wheel(0, -100);
+  const expectedX = anchor.x + (before.x - anchor.x) * 1.15; // the canvas zooms by 1.15 per wheel step
+  await expect.poll(async () => Math.abs((await tip()).x - expectedX) <= 1.5 && Math.abs((await tip()).y - before.y) <= 1.5).toBe(true);
+
   const link = await linkInMailTo(people.acoustician.email, `/plans/${planId}/revisions/1?comment=`);
   await page.context().clearCookies();
   await signIn(page, people.acoustician.email);
