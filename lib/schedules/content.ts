@@ -11,7 +11,7 @@ import { DECISION_LABELS } from '@/lib/reviews/decisions';
 import { describeSection, describeTermination } from './describe';
 
 export interface ScheduleLine { x1: number; y1: number; x2: number; y2: number }
-export interface ScheduleFigure { widthPx: number; heightPx: number; originX: number; originY: number; image: { data: Buffer; format: 'png' | 'jpg' } | null; lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[] }
+export interface ScheduleFigure { metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number; image: { data: Buffer; format: 'png' | 'jpg' } | null; lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[] }
 
 export interface ScheduleRun {
   name: string;
@@ -67,7 +67,7 @@ function figureOf(revision: RevisionView, image: ScheduleFigure['image']): Sched
     return start ? [{ x: start.x, y: start.y, text: run.name }] : [];
   });
   if (image && revision.background?.widthPx && revision.background.heightPx) {
-    return { widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, lines, labels };
+    return { metresPerPixel: revision.metresPerPixel, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, lines, labels };
   }
   const xs = doc.nodes.map((node) => node.x);
   const ys = doc.nodes.map((node) => node.y);
@@ -75,7 +75,7 @@ function figureOf(revision: RevisionView, image: ScheduleFigure['image']): Sched
   const minY = Math.min(...ys, 0) - FIGURE_MARGIN_PX;
   const maxX = Math.max(...xs, 400) + FIGURE_MARGIN_PX;
   const maxY = Math.max(...ys, 300) + FIGURE_MARGIN_PX;
-  return { widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels };
+  return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels };
 }
 
 function magnitudeText(bands: readonly { hz: number; magnitude: number }[]): string {

@@ -18,6 +18,8 @@ export function PlanFigure({ content }: { content: ScheduleContent }) {
       <Text style={styles.h2}>1. Plan with the duct runs</Text>
       <Text style={[styles.paragraph, styles.muted]}>
         Duct runs as frozen in revision {content.revisionNumber}; the filled dot marks each run’s start (fan side).
+        {' '}Scale as set on the plan: {(figure.metresPerPixel * 1000).toFixed(1)} mm per drawing pixel; the area shown is
+        {' '}{(figure.widthPx * figure.metresPerPixel).toFixed(1)} m × {(figure.heightPx * figure.metresPerPixel).toFixed(1)} m.
         {figure.image ? '' : ' No drawing image is attached to this plan, so the runs are shown on a blank sheet.'}
       </Text>
       <View style={{ width, height, borderWidth: 0.5, borderColor: '#cfd1d4', position: 'relative' }}>
