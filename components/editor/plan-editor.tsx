@@ -7,7 +7,10 @@ import { findNode, findRun, findSegment, matchKeyBinding, normalizeState, runOfN
 import { formatLength } from '@/lib/plan/units';
 import type { PlanView } from '@/lib/plans/data';
 import type { UnitSystem } from '@/models/user';
+import { CommentPins, CommentsPanel, CommentsProvider, useComments, type PinView } from '@/components/comments/plan-comments';
+import { PlanRevisionActions } from '@/components/revisions/plan-revision-actions';
 import { UnitSystemToggle } from '@/components/shell/unit-system-toggle';
+import type { RevisionSummary } from '@/lib/revisions/types';
 import { BackgroundUpload } from './background-upload';
 import { ConflictDialog } from './dialogs/conflict-dialog';
 import { HelpOverlay } from './dialogs/help-overlay';
@@ -35,7 +38,31 @@ const PlanCanvas = dynamic(() => import('./canvas/plan-canvas'), { ssr: false, l
 const TOOL_KEYS: Record<string, ToolName> = { h: 'pan', k: 'scale', r: 'room' };
 
 // canEvaluate: may open a flag's candidate treatments (analysis.run); defaults to editable.
-export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable }: { plan: PlanView; editable: boolean; unitSystem: UnitSystem; canEvaluate?: boolean }) {
+export interface PlanEditorProps {
+  plan: PlanView;
+  editable: boolean;
+  unitSystem: UnitSystem;
+  canEvaluate?: boolean;
+  // The plan's latest revision and what this person may do with revisions.
+  revisions: { latest: RevisionSummary | null; canSubmit: boolean; canIssue: boolean };
+  // Comment pins and threads on the live plan.
+  comments: { canWrite: boolean; members: string[]; initialActiveId: string | null };
+}
+
+export function PlanEditor(props: PlanEditorProps) {
+  return (
+    <CommentsProvider planId={props.plan.id} canWrite={props.comments.canWrite} members={props.comments.members} initialActiveId={props.comments.initialActiveId}>
+      <PlanEditorBody {...props} />
+    </CommentsProvider>
+  );
+}
+
+function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, revisions, comments: commentSettings }: PlanEditorProps) {
+  const comments = useComments();
+  const [pinView, setPinView] = useState<PinView | null>(null);
+  const onViewChange = useCallback((next: PinView) => setPinView({ scale: next.scale, offsetX: next.offsetX, offsetY: next.offsetY }), []);
+  const [sideTab, setSideTab] = useState<'results' | 'comments'>(commentSettings.initialActiveId ? 'comments' : 'results');
+  useEffect(() => { if (comments.placing || comments.activeId) setSideTab('comments'); }, [comments.placing, comments.activeId]);
   const [model, dispatch] = useReducer(editorReducer, plan, (initial) => initialModel(initial.document, initial.version, initial.metresPerPixel));
   const [tool, setTool] = useState<ToolName>(editable && plan.document.segments.length === 0 ? 'draw' : editable ? 'select' : 'pan');
   const [helpOpen, setHelpOpen] = useState(false);
@@ -112,6 +139,7 @@ export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable 
           <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
         </nav>
         {editable ? <SaveStatusLabel status={model.saveStatus} version={model.version} /> : <span className="rounded bg-paper-sunk px-2 py-0.5 text-xs">Read only</span>}
+        <PlanRevisionActions planId={plan.id} latest={revisions.latest} planVersion={model.version} canSubmit={revisions.canSubmit && model.saveStatus === 'saved'} canIssue={revisions.canIssue} />
         <div className="ml-auto flex items-center gap-2">
           {editable && (
             <>
@@ -146,11 +174,13 @@ export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable 
               selectedRoomId={openRoomId}
               flaggedRoomIds={flaggedRoomIds}
               calibration={tools.feedback.calibration}
-              onPointer={tools.onPointer}
+              onPointer={(pointer) => { if (comments.placing && pointer.type === 'down') comments.placeAt(pointer.point.x, pointer.point.y); else tools.onPointer(pointer); }}
               onNodeDrag={onNodeDrag}
+              onViewChange={onViewChange}
             />
           )}
-          <p className="pointer-events-none absolute bottom-2 left-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700">{tool_hint}</p>
+          <CommentPins view={pinView} />
+          <p className="pointer-events-none absolute bottom-2 left-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700">{comments.placing ? 'Click the plan where the comment belongs.' : tool_hint}</p>
           {model.notice && model.saveStatus !== 'conflict' && (
             <p role="alert" className="absolute left-1/2 top-2 -translate-x-1/2 rounded border border-risk bg-risk-soft px-3 py-1 text-sm text-risk-ink">
               {model.notice} <button type="button" className="ml-2 underline" onClick={() => dispatch({ type: 'notice', message: null })}>Dismiss</button>
@@ -180,6 +210,15 @@ export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable 
               onChooseEnd={() => runCommand(model, dispatch, 'choose-end', { runId: nodeRun.id, nodeId: selectedNode.id })} />
           ) : (
             <div className="space-y-6">
+              <div role="tablist" aria-label="Side panel" className="flex gap-1 border-b border-graphite-100">
+                {(['results', 'comments'] as const).map((tab) => (
+                  <button key={tab} type="button" role="tab" aria-selected={sideTab === tab} onClick={() => setSideTab(tab)}
+                    className={`-mb-px border-b-2 px-3 py-1.5 text-sm ${sideTab === tab ? 'border-select font-medium text-graphite' : 'border-transparent text-graphite-500 hover:text-graphite'}`}>
+                    {tab === 'results' ? 'Results' : `Comments${comments.threads.length ? ` (${comments.threads.filter((thread) => !thread.resolved).length} open)` : ''}`}
+                  </button>
+                ))}
+              </div>
+              {sideTab === 'comments' ? <CommentsPanel /> : (<>
               {doc.runs.length > 1 && (
                 <div>
                   <label htmlFor="run-picker" className="block text-xs font-medium text-graphite-700">Results for</label>
@@ -192,6 +231,7 @@ export function PlanEditor({ plan, editable, unitSystem, canEvaluate = editable 
                 onApply={(document) => dispatch({ type: 'apply', document, state: normalizeState(document, model.state) })} />
               <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
                 selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} />
+              </>)}
             </div>
           )}
           {panelRun && !openRoom && (selectedSegment || selectedNode || editable) && (

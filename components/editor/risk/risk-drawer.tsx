@@ -33,10 +33,12 @@ interface RiskDrawerProps {
 // The bottom drawer: every risk flag across the plan, the rooms, and the chosen treatments. Its
 // height is fixed while open, so the canvas above keeps its size whatever the lists hold.
 export function RiskDrawer(props: RiskDrawerProps) {
-  const [open, setOpen] = useState(true);
+  // Until someone opens or hides it, the drawer is open only when there is something in it.
+  const [chosenOpen, setOpen] = useState<boolean | null>(null);
   const [tab, setTab] = useState<Tab>('risks');
   const [openFlag, setOpenFlag] = useState<PlacedFlag | null>(null);
   const flagCount = props.flags?.length ?? 0;
+  const open = chosenOpen ?? (flagCount > 0 || props.rooms.length > 0 || props.treatments.length > 0);
   const tabs: { name: Tab; label: string }[] = [
     { name: 'risks', label: `Risks (${flagCount})` },
     { name: 'rooms', label: `Rooms (${props.rooms.length})` },
