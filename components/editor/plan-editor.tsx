@@ -133,8 +133,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
 
   return (
     <div className="flex h-full flex-col">
-      <div className="flex flex-wrap items-center gap-3 border-b border-graphite-100 bg-paper px-4 py-2">
-        <nav aria-label="Breadcrumb" className="text-sm text-graphite-500">
+      <div className="flex flex-wrap items-center gap-x-2 gap-y-1 border-b border-graphite-100 bg-paper px-4 py-2">
+        <nav aria-label="Breadcrumb" className="min-w-0 max-w-[22rem] truncate text-sm text-graphite-500" title={`${plan.project.name} / ${plan.name}`}>
           <Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}
           <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
         </nav>
@@ -149,7 +149,6 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             </>
           )}
           <UnitSystemToggle unitSystem={unitSystem} />
-          <span className="num text-xs text-graphite-500" title="Plan scale">1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')}</span>
           <button type="button" className="btn-quiet" onClick={() => setHelpOpen(true)} aria-label="Keyboard shortcuts">?</button>
         </div>
       </div>
@@ -180,6 +179,9 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             />
           )}
           <CommentPins view={pinView} />
+          <p className="num pointer-events-none absolute bottom-2 right-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700" title="Plan scale">
+            Scale 1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')} · grid {formatLength(gridSpacingPx(model.metresPerPixel) * model.metresPerPixel, unitSystem, 'run')}
+          </p>
           <p className="pointer-events-none absolute bottom-2 left-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700">{comments.placing ? 'Click the plan where the comment belongs.' : tool_hint}</p>
           {model.notice && model.saveStatus !== 'conflict' && (
             <p role="alert" className="absolute left-1/2 top-2 -translate-x-1/2 rounded border border-risk bg-risk-soft px-3 py-1 text-sm text-risk-ink">
