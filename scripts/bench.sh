@@ -18,7 +18,7 @@ prepare_database antinode_bench
 export ANTINODE_DIST_DIR=.next-bench
 BENCH_PORT="${ANTINODE_BENCH_PORT:-3200}"
 step "Building the app for the editor benchmark"
-node node_modules/next/dist/bin/next build >"$DATA_DIR/bench-build.log" 2>&1 || { tail -n 40 "$DATA_DIR/bench-build.log" >&2; fail "the build failed (log in .data/bench-build.log)"; }
+build_app bench-build.log
 node node_modules/next/dist/bin/next start -p "$BENCH_PORT" -H 127.0.0.1 >"$DATA_DIR/bench-server.log" 2>&1 &
 SERVER_PID=$!
 trap 'kill $SERVER_PID 2>/dev/null' EXIT

@@ -205,3 +205,9 @@ start_fakes() {
 ensure_pdftoppm() {
   if ! command -v pdftoppm >/dev/null; then apt_install poppler-utils; fi
 }
+
+# next build into $ANTINODE_DIST_DIR (default .next), its output kept in .data/<log name>.
+build_app() {
+  local log="$DATA_DIR/$1"
+  node node_modules/next/dist/bin/next build >"$log" 2>&1 || { tail -n 40 "$log" >&2; fail "the build failed (full log in .data/$1)"; }
+}

@@ -19,7 +19,7 @@ else
 fi
 
 step "Building the app (next build)"
-node node_modules/next/dist/bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log" >&2; fail "the build failed (full log in .data/build.log)"; }
+build_app build.log
 
 stop_pid_file "$DATA_DIR/server.pid" "the previous web server"
 export ANTINODE_BASE_URL="${ANTINODE_BASE_URL:-http://localhost:$APP_PORT}"

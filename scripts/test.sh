@@ -23,7 +23,7 @@ step "Integration tests (database antinode_test)"
 node node_modules/vitest/vitest.mjs run --project integration || fail "integration tests failed"
 
 step "Building the app for the browser tests"
-node node_modules/next/dist/bin/next build >"$DATA_DIR/test-build.log" 2>&1 || { tail -n 40 "$DATA_DIR/test-build.log" >&2; fail "the build failed (log in .data/test-build.log)"; }
+build_app test-build.log
 
 step "Browser tests (Chromium)"
 node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/"

@@ -2,10 +2,10 @@
 import { cookies } from 'next/headers';
 import { redirect } from 'next/navigation';
 import { cache } from 'react';
-import { assertTeamWritable } from '@/lib/billing/standing';
-import { AppError, forbidden } from '@/lib/errors';
-import { can, isWriteAction, type Action } from '@/lib/permissions';
+import { AppError } from '@/lib/errors';
+import type { Action } from '@/lib/permissions';
 import { actorFromSessionId, type Actor } from './actor';
+import { assertMayAct } from './may-act';
 import { lucia } from './lucia';
 
 export const currentActor = cache(async (): Promise<Actor | null> => {
@@ -24,7 +24,6 @@ export async function requireActor(): Promise<Actor> {
 export async function authorize(action: Action): Promise<Actor & { team: NonNullable<Actor['team']> }> {
   const actor = await currentActor();
   if (!actor) throw new AppError('not_signed_in', 'Your session has ended. Sign in again.');
-  if (!actor.team || !can(actor.team.role, action)) throw forbidden();
-  if (isWriteAction(action)) await assertTeamWritable(actor.team.teamId);
+  await assertMayAct(actor.team, action);
   return actor as Actor & { team: NonNullable<Actor['team']> };
 }

@@ -3,9 +3,9 @@
 import { verifyRequestOrigin } from 'lucia';
 import { z } from 'zod';
 import { actorFromSessionId, sessionIdFromCookieHeader, type Actor, type TeamMembership } from '@/lib/auth/actor';
-import { assertTeamWritable } from '@/lib/billing/standing';
-import { AppError, forbidden, notSignedIn } from '@/lib/errors';
-import { can, isWriteAction, type Action } from '@/lib/permissions';
+import { assertMayAct } from '@/lib/auth/may-act';
+import { AppError, notSignedIn } from '@/lib/errors';
+import type { Action } from '@/lib/permissions';
 import { zodToAppError } from '@/lib/validation';
 
 export type Access = 'public' | 'signed-in' | Action;
@@ -89,8 +89,7 @@ export function route<Params extends Record<string, string> = Record<string, nev
       }
       let team: TeamMembership | null = actor?.team ?? null;
       if (options.access !== 'public' && options.access !== 'signed-in') {
-        if (!team || !can(team.role, options.access)) throw forbidden();
-        if (isWriteAction(options.access)) await assertTeamWritable(team.teamId);
+        await assertMayAct(team, options.access);
       } else if (options.access === 'public') {
         team = null;
       }

@@ -4,7 +4,7 @@ import { emptyDocument, type PlanDocument } from '@/lib/plan/document';
 import { planDocumentSchema } from '@/lib/plan/schema';
 import { sequelize } from '@/lib/db';
 import { Plan, Project, Upload } from '@/models';
-import type { UploadSummary } from '@/lib/uploads/data';
+import { toUploadSummary, type UploadSummary } from '@/lib/uploads/data';
 import type { SavePlanInput } from './schemas';
 
 export interface PlanSummary { id: string; name: string; archived: boolean; version: number; updatedAt: string; hasBackground: boolean }
@@ -69,9 +69,7 @@ export async function getPlan(teamId: string, planId: string): Promise<PlanView>
     version: row.version,
     metresPerPixel: row.metresPerPixel,
     document: planDocumentSchema.parse(row.document),
-    background: background && {
-      id: background.id, fileName: background.fileName, contentType: background.contentType, bytes: background.bytes, widthPx: background.widthPx, heightPx: background.heightPx,
-    },
+    background: background && toUploadSummary(background),
     project: { id: row.project!.id, name: row.project!.name },
     updatedAt: row.updatedAt.toISOString(),
   };

@@ -1,6 +1,6 @@
 // The analysis of every run on a plan, computed from the document (never stored as truth
 // for a draft). A run that cannot be analysed says why instead.
-import { analyzeRun, bladePassHz, type Resonance, type RunAnalysis } from '@/lib/acoustic';
+import { analyzeRun, bladePassHarmonicsHz, type Resonance, type RunAnalysis } from '@/lib/acoustic';
 import type { PlanDocument } from '@/lib/plan/document';
 import { toRunInputWithMap } from '@/lib/plan/to-run-input';
 
@@ -38,8 +38,7 @@ const NEAR_TONE_FRACTION = 0.03;
 
 function fanTones(fan: PlanDocument['runs'][number]['fan'], maxHz: number): number[] {
   if (!fan || fan.blades <= 0 || fan.rpm <= 0) return [];
-  const base = bladePassHz(fan.blades, fan.rpm);
-  return Array.from({ length: FAN_HARMONICS }, (_, index) => base * (index + 1)).filter((hz) => hz <= maxHz * 1.05);
+  return bladePassHarmonicsHz(fan.blades, fan.rpm, FAN_HARMONICS).filter((hz) => hz <= maxHz * 1.05);
 }
 
 export function analysePlanRun(document: PlanDocument, runId: string, metresPerPixel: number): RunResult {

@@ -10,7 +10,7 @@ export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
 
 export interface UploadSummary { id: string; fileName: string; contentType: string; bytes: number; widthPx: number | null; heightPx: number | null }
 
-function toSummary(row: Upload): UploadSummary {
+export function toUploadSummary(row: Upload): UploadSummary {
   return { id: row.id, fileName: row.fileName, contentType: row.contentType, bytes: row.bytes, widthPx: row.widthPx, heightPx: row.heightPx };
 }
 
@@ -40,11 +40,11 @@ export async function storePlanBackground(teamId: string, userId: string, fileNa
     teamId, uploadedById: userId, storageKey, fileName: storedName, contentType: sniffed.contentType,
     bytes: stored.byteLength, sha256: createHash('sha256').update(stored).digest('hex'), widthPx: sniffed.widthPx, heightPx: sniffed.heightPx,
   });
-  return toSummary(row);
+  return toUploadSummary(row);
 }
 
 export async function readUpload(teamId: string, uploadId: string): Promise<{ summary: UploadSummary; bytes: Uint8Array } | null> {
   const row = await Upload.findOne({ where: { id: uploadId, teamId } });
   if (!row) return null;
-  return { summary: toSummary(row), bytes: await getObject(row.storageKey) };
+  return { summary: toUploadSummary(row), bytes: await getObject(row.storageKey) };
 }
