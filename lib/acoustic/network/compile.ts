@@ -51,6 +51,8 @@ export interface CompiledNetwork {
   opImpedance: Float64Array;
   opKirchhoffPerSqrtHz: Float64Array;
   opLiningNpPerM: Float64Array;
+  /** For a segment op at position op / 2: the op index just past its run of consecutive segment ops. */
+  opSegmentRunEnd: Int32Array;
   /** Pairs (opcode, operand), post-order: evaluates the main path from its end back to the start. */
   program: Int32Array;
   stackDepth: number;
@@ -167,6 +169,17 @@ function compileChain(builder: Builder, segments: Segment[], end: Termination, w
   return { depth, segments: indices, endTermination, branches: branchLists };
 }
 
+/** For each op position, where its run of consecutive segment ops ends (the inner loop then reads no opcodes). */
+function segmentRunEnds(ops: number[]): Int32Array {
+  const ends = new Int32Array(ops.length / 2);
+  let runEnd = ops.length;
+  for (let op = ops.length - 2; op >= 0; op -= 2) {
+    if (ops[op] !== OP_SEGMENT) runEnd = op;
+    ends[op / 2] = runEnd;
+  }
+  return ends;
+}
+
 /** Compiles a validated run. */
 export function compileNetwork(input: RunInput, options: CompileOptions = {}): CompiledNetwork {
   const air = airProperties(input.temperatureC ?? DEFAULT_TEMPERATURE_C);
@@ -185,6 +198,7 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
     opImpedance: new Float64Array(0),
     opKirchhoffPerSqrtHz: new Float64Array(0),
     opLiningNpPerM: new Float64Array(0),
+    opSegmentRunEnd: new Int32Array(0),
     stackDepth: 0,
     startTermination: 0,
     endTermination: 0,
@@ -221,6 +235,7 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
   network.opImpedance = byOp(network.segmentImpedance);
   network.opKirchhoffPerSqrtHz = byOp(network.segmentKirchhoffPerSqrtHz);
   network.opLiningNpPerM = byOp(network.segmentLiningNpPerM);
+  network.opSegmentRunEnd = segmentRunEnds(builder.ops);
   network.mainLengthM = input.segments.reduce((sum, segment) => sum + segment.lengthM, 0);
   return network;
 }

@@ -9,9 +9,18 @@
 // nothing has a pole. At the start end, with the start reflection Rs,
 //   D(f) = p (1 - Rs) + Zc (1 + Rs) U
 // vanishes exactly at the natural frequencies of the whole network (complex f, time convention exp(+j omega t)).
-import { terminationReflection } from '../terminations';
+import { openEndReflectionInto } from '../terminations';
 import { OP_SEGMENT, OP_SHUNT, OP_TERMINATION, type CompiledNetwork } from './compile';
 import { propagateSegments, propagateSegmentsWithDerivative, type WaveFactors } from './propagate-segments';
+
+// Read once: under module loaders that turn imports into getters, each read of an import is a call,
+// and the search runs the program some 1,500 times per analysis.
+const SEGMENT_OP = OP_SEGMENT;
+const TERMINATION_OP = OP_TERMINATION;
+const SHUNT_OP = OP_SHUNT;
+const carrySegments = propagateSegments;
+const carrySegmentsWithDerivative = propagateSegmentsWithDerivative;
+const openEndReflection = openEndReflectionInto;
 
 const SLOT = 8;
 const RELATIVE_DERIVATIVE_STEP = 1e-6;
@@ -21,6 +30,8 @@ export class NetworkEvaluator {
   readonly network: CompiledNetwork;
   private readonly stack: Float64Array;
   private readonly reflection = new Float64Array(4);
+  /** R just above and below the frequency, for dR/df. */
+  private readonly neighbourReflections = new Float64Array(4);
   /** D(f) and dD/df after characteristic(). */
   valueRe = 0;
   valueIm = 0;
@@ -45,17 +56,18 @@ export class NetworkEvaluator {
       return;
     }
     const speed = this.network.speedOfSoundMps;
-    const value = terminationReflection(compiled.termination, { re: frequencyRe, im: frequencyIm }, compiled.radiusM, speed);
-    out[0] = value.re;
-    out[1] = value.im;
+    const flange = compiled.termination.flange;
+    openEndReflection(flange, frequencyRe, frequencyIm, compiled.radiusM, speed, out, 0);
     out[2] = 0;
     out[3] = 0;
-    if (withDerivative && compiled.termination.kind === 'open') {
+    if (withDerivative) {
+      // dR/df by central difference: a slightly inexact D' only changes Newton's path, not the zeros of D it converges to.
       const step = RELATIVE_DERIVATIVE_STEP * Math.hypot(frequencyRe, frequencyIm) + 1e-9;
-      const above = terminationReflection(compiled.termination, { re: frequencyRe + step, im: frequencyIm }, compiled.radiusM, speed);
-      const below = terminationReflection(compiled.termination, { re: frequencyRe - step, im: frequencyIm }, compiled.radiusM, speed);
-      out[2] = (above.re - below.re) / (2 * step);
-      out[3] = (above.im - below.im) / (2 * step);
+      const neighbours = this.neighbourReflections;
+      openEndReflection(flange, frequencyRe + step, frequencyIm, compiled.radiusM, speed, neighbours, 0);
+      openEndReflection(flange, frequencyRe - step, frequencyIm, compiled.radiusM, speed, neighbours, 2);
+      out[2] = (neighbours[0] - neighbours[2]) / (2 * step);
+      out[3] = (neighbours[1] - neighbours[3]) / (2 * step);
     }
   }
 
@@ -70,16 +82,16 @@ export class NetworkEvaluator {
     let op = opStart;
     while (op < opEnd) {
       const code = program[op];
-      if (code === OP_SEGMENT) {
+      if (code === SEGMENT_OP) {
         op = withDerivative
-          ? propagateSegmentsWithDerivative(this.network, this.stack, this.wave, op, opEnd, top)
-          : propagateSegments(this.network, this.stack, this.wave, op, opEnd, top);
+          ? carrySegmentsWithDerivative(this.network, this.stack, this.wave, op, opEnd, top)
+          : carrySegments(this.network, this.stack, this.wave, op, opEnd, top);
         continue;
       }
-      if (code === OP_TERMINATION) {
+      if (code === TERMINATION_OP) {
         top += SLOT;
         this.pushTermination(program[op + 1], top, frequencyRe, frequencyIm, withDerivative);
-      } else if (code === OP_SHUNT) {
+      } else if (code === SHUNT_OP) {
         this.joinBranch(top - SLOT, top, withDerivative);
         top -= SLOT;
       }

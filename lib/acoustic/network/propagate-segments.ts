@@ -1,7 +1,10 @@
 // Inner loops of the transfer-matrix chain: carry the state inward through a run of consecutive
 // segment ops, holding it in locals, with hand-written complex arithmetic and no allocation.
-import { OP_SEGMENT, type CompiledNetwork } from './compile';
+import type { CompiledNetwork } from './compile';
 import { SMALL_GROWTH } from './complex-trig';
+
+// Read once: under module loaders that turn imports into getters, each read of an import is a call.
+const smallGrowth = SMALL_GROWTH;
 
 /** Per-frequency factors shared by all segments: k0 = 2 pi f / c, (1 - j) sqrt(f) and its derivative (1 - j) / (2 sqrt(f)). */
 export interface WaveFactors {
@@ -15,7 +18,6 @@ export interface WaveFactors {
 
 /** Carries the top state inward through consecutive segment ops, in locals; returns the next op. */
 export function propagateSegments(network: CompiledNetwork, stack: Float64Array, wave: WaveFactors, opStart: number, opEnd: number, top: number): number {
-  const program = network.program;
   // Segment constants laid out by op position (op / 2), so the loop reads them in program order.
   const lengths = network.opLengthM;
   const impedances = network.opImpedance;
@@ -23,8 +25,9 @@ export function propagateSegments(network: CompiledNetwork, stack: Float64Array,
   const lining = network.opLiningNpPerM;
   const freeRe = wave.freeRe, freeIm = wave.freeIm, layerRe = wave.layerRe, layerIm = wave.layerIm;
   let pRe = stack[top], pIm = stack[top + 1], uRe = stack[top + 2], uIm = stack[top + 3];
+  const runEnd = Math.min(opEnd, network.opSegmentRunEnd[opStart >> 1]);
   let op = opStart;
-  for (; op < opEnd && program[op] === OP_SEGMENT; op += 2) {
+  for (; op < runEnd; op += 2) {
     const segment = op >> 1;
     const lengthM = lengths[segment];
     const impedance = impedances[segment];
@@ -35,7 +38,7 @@ export function propagateSegments(network: CompiledNetwork, stack: Float64Array,
     const sinPhase = Math.sin(phase);
     let coshGrowth: number;
     let sinhGrowth: number;
-    if (growth < SMALL_GROWTH && growth > -SMALL_GROWTH) {
+    if (growth < smallGrowth && growth > -smallGrowth) {
       // Taylor series of cosh and sinh, as in complex-trig.ts; written out so the hot loop keeps them in registers (a call through a scratch array costs ~10 %)
       const squared = growth * growth;
       coshGrowth = 1 + squared * (0.5 + squared * (1 / 24 + squared * (1 / 720 + squared / 40320)));
@@ -70,7 +73,7 @@ export function propagateSegments(network: CompiledNetwork, stack: Float64Array,
   return op;
 }
 
-/** As segmentsPlain, also carrying d/df of the state; d cos kL = -sin kL d(kL), d sin kL = cos kL d(kL). */
+/** As propagateSegments, also carrying d/df of the state; d cos kL = -sin kL d(kL), d sin kL = cos kL d(kL). */
 export function propagateSegmentsWithDerivative(
 network: CompiledNetwork,
 stack: Float64Array,
@@ -79,7 +82,6 @@ opStart: number,
 opEnd: number,
 top: number,
 ): number {
-  const program = network.program;
   // Segment constants laid out by op position (op / 2), so the loop reads them in program order.
   const lengths = network.opLengthM;
   const impedances = network.opImpedance;
@@ -90,8 +92,9 @@ top: number,
   const layerSlopeRe = wave.layerSlopeRe, layerSlopeIm = wave.layerSlopeIm;
   let pRe = stack[top], pIm = stack[top + 1], uRe = stack[top + 2], uIm = stack[top + 3];
   let dpRe = stack[top + 4], dpIm = stack[top + 5], duRe = stack[top + 6], duIm = stack[top + 7];
+  const runEnd = Math.min(opEnd, network.opSegmentRunEnd[opStart >> 1]);
   let op = opStart;
-  for (; op < opEnd && program[op] === OP_SEGMENT; op += 2) {
+  for (; op < runEnd; op += 2) {
     const segment = op >> 1;
     const lengthM = lengths[segment];
     const impedance = impedances[segment];
@@ -102,7 +105,7 @@ top: number,
     const sinPhase = Math.sin(phase);
     let coshGrowth: number;
     let sinhGrowth: number;
-    if (growth < SMALL_GROWTH && growth > -SMALL_GROWTH) {
+    if (growth < smallGrowth && growth > -smallGrowth) {
       // Taylor series of cosh and sinh, as in complex-trig.ts; written out so the hot loop keeps them in registers (a call through a scratch array costs ~10 %)
       const squared = growth * growth;
       coshGrowth = 1 + squared * (0.5 + squared * (1 / 24 + squared * (1 / 720 + squared / 40320)));

@@ -5,8 +5,8 @@ import type { Termination } from '../types';
 import { anechoicReflection } from './anechoic';
 import { closedReflection } from './closed';
 import { linedReflection } from './lined';
-import { flangedReflection } from './open-flanged';
-import { unflangedReflection } from './open-unflanged';
+import { flangedReflectionInto } from './open-flanged';
+import { unflangedReflectionInto } from './open-unflanged';
 
 /**
  * Pressure reflection coefficient of a termination for a plane wave arriving at it, at complex
@@ -26,10 +26,30 @@ export function terminationReflection(
     case 'lined':
       return linedReflection(termination.absorption);
     case 'open': {
-      const helmholtzNumber = cScale(frequencyHz, (2 * Math.PI * radiusM) / speedOfSoundMps);
-      return termination.flange === 'flanged' ? flangedReflection(helmholtzNumber) : unflangedReflection(helmholtzNumber);
+      const out = new Float64Array(2);
+      openEndReflectionInto(termination.flange, frequencyHz.re, frequencyHz.im, radiusM, speedOfSoundMps, out, 0);
+      return { re: out[0], im: out[1] };
     }
   }
+}
+
+/**
+ * Reflection coefficient of an open end at complex frequency into out[offset] (re) and out[offset + 1] (im),
+ * without allocation: the network evaluator's path, called at every step of the resonance search.
+ */
+export function openEndReflectionInto(
+  flange: Extract<Termination, { kind: 'open' }>['flange'],
+  frequencyRe: number,
+  frequencyIm: number,
+  radiusM: number,
+  speedOfSoundMps: number,
+  out: Float64Array,
+  offset: number,
+): void {
+  // Helmholtz number ka = 2 pi f a / c
+  const scale = (2 * Math.PI * radiusM) / speedOfSoundMps;
+  if (flange === 'flanged') flangedReflectionInto(frequencyRe * scale, frequencyIm * scale, out, offset);
+  else unflangedReflectionInto(frequencyRe * scale, frequencyIm * scale, out, offset);
 }
 
 /** Low-frequency end correction, m; 0 for ends that do not radiate. */
