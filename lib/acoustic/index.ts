@@ -70,4 +70,5 @@ export { evaluateTreatment } from './treatments/evaluate-treatment';
 export { candidateTreatments } from './treatments/candidate-treatments';
 export { applyTreatment } from './treatments/apply-treatment';
 export { quarterWaveLengthM } from './treatments/quarter-wave';
+export { branchMouthCorrectionM } from './tee-junction';
 export type { Treatment, TreatmentResult } from './treatments/treatment-types';

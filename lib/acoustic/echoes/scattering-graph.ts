@@ -1,5 +1,6 @@
 // The run as a graph for the echo lattice: edges are uniform stretches of duct, nodes are the start,
-// ends, area changes and tees. Each node scatters with real, low-frequency coefficients.
+// ends, area changes and tees. Each node scatters with real, low-frequency coefficients (so a tee is
+// a plain junction of areas: its branch mouth's mass, tee-junction.ts, only acts as frequency rises).
 import { airProperties } from '../air';
 import { DEFAULT_TEMPERATURE_C } from '../constants';
 import { sabineLinedDuctNpPerM } from '../lining-attenuation';

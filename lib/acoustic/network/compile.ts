@@ -5,6 +5,7 @@ import { DEFAULT_TEMPERATURE_C } from '../constants';
 import { lowFrequencyEndCorrectionM, terminationReflection } from '../terminations';
 import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
 import { sabineLinedDuctNpPerM } from '../lining-attenuation';
+import { branchMouthCorrectionM } from '../tee-junction';
 import { kirchhoffAttenuationPerSqrtHz } from '../wall-losses';
 import type { RunInput, Segment, Termination } from '../types';
 import { mergeMainStretches, sameUniformDuct, type MainStretch } from './uniform-stretches';
@@ -17,6 +18,8 @@ export const OP_TERMINATION = 0;
 export const OP_SEGMENT = 1;
 /** Pop a side branch's state and join it, as a shunt, to the state below it. Operand unused. */
 export const OP_SHUNT = 2;
+/** Carry the top state (a branch's) through the mass of its mouth: p += j omega M U. Operand: index into mouthInertance. */
+export const OP_MOUTH = 3;
 
 export interface CompiledTermination {
   termination: Termination;
@@ -46,6 +49,8 @@ export interface CompiledNetwork {
   segmentLiningNpPerM: Float64Array;
   segmentLiningDbPerM: Float64Array;
   terminations: CompiledTermination[];
+  /** Inertance rho t_i / S_b of each branch mouth, kg/m^4 (tee-junction.ts). */
+  mouthInertance: Float64Array;
   /** Segment constants indexed by op position (op / 2) for the inner loop; unused entries are 0. */
   opLengthM: Float64Array;
   opImpedance: Float64Array;
@@ -90,6 +95,7 @@ interface Builder {
   kirchhoff: number[];
   liningNp: number[];
   liningDb: number[];
+  mouthInertances: number[];
 }
 
 function addTermination(builder: Builder, termination: Termination, lastSegment: Segment): number {
@@ -118,6 +124,15 @@ function addSegment(builder: Builder, segment: Segment, wallLosses: boolean): nu
   builder.liningDb.push(liningNp * (20 / Math.LN10));
   builder.network.totalLengthM += segment.lengthM;
   return builder.lengths.length - 1;
+}
+
+/** The mouth of a branch whose first segment is branchSegment, on the wall of host. */
+function addMouth(builder: Builder, branchSegment: Segment, host: Segment): number {
+  const branchRadiusM = equivalentRadiusM(branchSegment.section);
+  const correctionM = branchMouthCorrectionM(branchRadiusM, equivalentRadiusM(host.section));
+  // The air plug of length t_i: M = rho t_i / S_b (Kinsler & Frey, Fundamentals of Acoustics, ch. 10, acoustic inertance)
+  builder.mouthInertances.push((builder.network.air.densityKgM3 * correctionM) / sectionArea(branchSegment.section));
+  return builder.mouthInertances.length - 1;
 }
 
 interface CompiledChain {
@@ -152,6 +167,7 @@ function compileChain(builder: Builder, segments: Segment[], end: Termination, w
     for (const branch of segments[position].branches ?? []) {
       const programStart = builder.ops.length;
       const chain = compileChain(builder, branch.segments, branch.end, wallLosses);
+      pushOp(builder, OP_MOUTH, addMouth(builder, branch.segments[0], segments[position]));
       chain.segments.forEach((segmentIndex, nestedPosition) =>
         builder.network.branchesAtSegment.set(segmentIndex, chain.branches[nestedPosition]),
       );
@@ -193,6 +209,7 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
     segmentLiningNpPerM: new Float64Array(0),
     segmentLiningDbPerM: new Float64Array(0),
     terminations: [],
+    mouthInertance: new Float64Array(0),
     program: new Int32Array(0),
     opLengthM: new Float64Array(0),
     opImpedance: new Float64Array(0),
@@ -209,7 +226,7 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
     mainLengthM: 0,
     totalLengthM: 0,
   };
-  const builder: Builder = { network, ops: [], opLengths: [], mergeUniform: options.mergeUniformStretches ?? true, lengths: [], areas: [], impedances: [], kirchhoff: [], liningNp: [], liningDb: [] };
+  const builder: Builder = { network, ops: [], opLengths: [], mergeUniform: options.mergeUniformStretches ?? true, lengths: [], areas: [], impedances: [], kirchhoff: [], liningNp: [], liningDb: [], mouthInertances: [] };
   network.startTermination = addTermination(builder, input.start, input.segments[0]);
   const wallLosses = input.wallLosses ?? true;
   const mainChain = compileChain(builder, input.segments, input.end, wallLosses);
@@ -221,6 +238,7 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
     : mainChain.segments.map((segment, position) => ({ segment, lengthM: builder.lengths[segment], branches: mainChain.branches[position] }));
   network.endTermination = mainChain.endTermination;
   network.program = Int32Array.from(builder.ops);
+  network.mouthInertance = Float64Array.from(builder.mouthInertances);
   network.segmentLengthM = Float64Array.from(builder.lengths);
   network.segmentAreaM2 = Float64Array.from(builder.areas);
   network.segmentImpedance = Float64Array.from(builder.impedances);

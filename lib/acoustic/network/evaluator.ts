@@ -10,7 +10,7 @@
 //   D(f) = p (1 - Rs) + Zc (1 + Rs) U
 // vanishes exactly at the natural frequencies of the whole network (complex f, time convention exp(+j omega t)).
 import { openEndReflectionInto } from '../terminations';
-import { OP_SEGMENT, OP_SHUNT, OP_TERMINATION, type CompiledNetwork } from './compile';
+import { OP_MOUTH, OP_SEGMENT, OP_SHUNT, OP_TERMINATION, type CompiledNetwork } from './compile';
 import { propagateSegments, propagateSegmentsWithDerivative, type WaveFactors } from './propagate-segments';
 
 // Read once: under module loaders that turn imports into getters, each read of an import is a call,
@@ -18,6 +18,7 @@ import { propagateSegments, propagateSegmentsWithDerivative, type WaveFactors } 
 const SEGMENT_OP = OP_SEGMENT;
 const TERMINATION_OP = OP_TERMINATION;
 const SHUNT_OP = OP_SHUNT;
+const MOUTH_OP = OP_MOUTH;
 const carrySegments = propagateSegments;
 const carrySegmentsWithDerivative = propagateSegmentsWithDerivative;
 const openEndReflection = openEndReflectionInto;
@@ -94,6 +95,8 @@ export class NetworkEvaluator {
       } else if (code === SHUNT_OP) {
         this.joinBranch(top - SLOT, top, withDerivative);
         top -= SLOT;
+      } else if (code === MOUTH_OP) {
+        this.throughMouth(this.network.mouthInertance[program[op + 1]], top, frequencyRe, frequencyIm, withDerivative);
       }
       op += 2;
     }
@@ -135,6 +138,26 @@ export class NetworkEvaluator {
     stack[top + 5] = impedance * reflection[3];
     stack[top + 6] = -reflection[2];
     stack[top + 7] = -reflection[3];
+  }
+
+  /**
+   * Through a branch mouth's series mass M towards the host duct: p <- p + j omega M U, U unchanged
+   * (a lumped inertance, Kinsler & Frey, Fundamentals of Acoustics, ch. 10); j omega = 2 pi (-fi + j fr).
+   */
+  private throughMouth(inertance: number, top: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): void {
+    const stack = this.stack;
+    const massRe = -2 * Math.PI * inertance * frequencyIm;
+    const massIm = 2 * Math.PI * inertance * frequencyRe;
+    const uRe = stack[top + 2], uIm = stack[top + 3];
+    if (withDerivative) {
+      // d/df (j omega M U) = j 2 pi M U + j omega M dU/df
+      const slope = 2 * Math.PI * inertance;
+      const duRe = stack[top + 6], duIm = stack[top + 7];
+      stack[top + 4] += -slope * uIm + massRe * duRe - massIm * duIm;
+      stack[top + 5] += slope * uRe + massRe * duIm + massIm * duRe;
+    }
+    stack[top] += massRe * uRe - massIm * uIm;
+    stack[top + 1] += massRe * uIm + massIm * uRe;
   }
 
   /** (p, U) <- (p pb, U pb + Ub p), with the product rule for the derivatives; rescales if large. */

@@ -50,8 +50,7 @@ function resolve(input: RiskInput, flag: RiskFlag, treatment: Treatment, notes: 
     const diameterM = treatment.diameterM ?? 2 * hostRadiusM * RESONATOR_BORE_FRACTION;
     const tuneHz = treatment.tuneHz ?? flag.targetHz;
     const speedMps = speedOfSound(input.run.temperatureC ?? DEFAULT_TEMPERATURE_C);
-    const lengthM = treatment.lengthM ?? quarterWaveLengthM(tuneHz, speedMps, diameterM / 2);
-    notes.push('the engine models the tee without a mouth mass correction, so the modelled branch tunes slightly above the tone');
+    const lengthM = treatment.lengthM ?? quarterWaveLengthM(tuneHz, speedMps, diameterM / 2, hostRadiusM);
     return { kind: 'side-branch-resonator', segmentIndex, tuneHz, diameterM, lengthM };
   }
   return treatment;

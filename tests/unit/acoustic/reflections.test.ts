@@ -38,7 +38,7 @@ describe('reflections at discontinuities', () => {
     for (const band of run.reflections[2].bands) expectClose(band.magnitude * Math.cos(band.phaseRad), 2 / 6, 1e-12, `R ${band.hz}`);
   });
 
-  it('tee with its own closed branch: side-branch admittance j (Sb/rho c) tan kLb (Kinsler & Frey ch. 10, side branch)', () => {
+  it('tee with its own closed branch: side-branch admittance j (Sb/rho c) tan kLb (Kinsler & Frey ch. 10, side branch) through its mouth mass', () => {
     const lossless = analyzeRun({ ...runInput, wallLosses: false });
     const c = lossless.speedOfSoundMps;
     expect(lossless.reflections[2].bandsWithBranch).toHaveLength(4);
@@ -46,12 +46,17 @@ describe('reflections at discontinuities', () => {
       const k = (2 * Math.PI * band.hz) / c;
       const s1 = Math.PI * 0.04;
       const sb = Math.PI * 0.01;
-      // Y = (S2 + j Sb tan kLb)/rho c seen from Zc1 = rho c / S1: R = (S1 - S2 - j Sb tan kLb)/(S1 + S2 + j Sb tan kLb)
+      // Mouth mass rho t_i / Sb in series, t_i = b (0.82 - 0.193 d - 1.09 d^2 + 1.27 d^3 - 0.71 d^4), b = 0.1 m, d = 0.5
+      // (Dubos et al. 1999, Acta Acustica 85, 153; from memory): the branch's tan kLb becomes tan kLb / (1 - k t_i tan kLb).
+      const d = 0.5;
+      const mouthM = 0.1 * (0.82 - 0.193 * d - 1.09 * d ** 2 + 1.27 * d ** 3 - 0.71 * d ** 4);
+      const branchTan = Math.tan(k * 0.6) / (1 - k * mouthM * Math.tan(k * 0.6));
+      // Y = (S2 + j Sb tan)/rho c seen from Zc1 = rho c / S1: R = (S1 - S2 - j Sb tan)/(S1 + S2 + j Sb tan)
       const sideRe = s1 - sb;
-      const sideIm = -sb * Math.tan(k * 0.6);
+      const sideIm = -sb * branchTan;
       const reflection = { re: 0, im: 0 };
       const denominatorRe = s1 + sb;
-      const denominatorIm = sb * Math.tan(k * 0.6);
+      const denominatorIm = sb * branchTan;
       const norm = denominatorRe ** 2 + denominatorIm ** 2;
       reflection.re = (sideRe * denominatorRe + sideIm * denominatorIm) / norm;
       reflection.im = (sideIm * denominatorRe - sideRe * denominatorIm) / norm;

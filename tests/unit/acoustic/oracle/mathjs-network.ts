@@ -26,6 +26,16 @@ const perimeter = (section: Section) => (section.shape === 'round' ? Math.PI * s
 const radius = (section: Section) => Math.sqrt(area(section) / Math.PI);
 const c = (re: number, im = 0): Complex => complex(re, im);
 
+/**
+ * Inner length correction of a side branch's mouth: Dubos et al. (1999), Acta Acustica 85, 153 (from memory),
+ * t_i = b (0.82 - 0.193 d - 1.09 d^2 + 1.27 d^3 - 0.71 d^4), d = b / a taken at most 1.
+ */
+export function mouthCorrection(branch: Section, host: Section): number {
+  const b = radius(branch);
+  const d = Math.min(1, b / radius(host));
+  return b * (0.82 - 0.193 * d - 1.09 * d ** 2 + 1.27 * d ** 3 - 0.71 * d ** 4);
+}
+
 /** Reflection coefficient of a termination at complex frequency (Dalmont & Nederveen 2001; Norris & Sheng 1989). */
 export function oracleReflection(termination: Termination, frequencyHz: Complex, radiusM: number, speedMps: number): Complex {
   if (termination.kind === 'closed') return c(1);
@@ -92,7 +102,11 @@ export function chainAdmittance(segments: Segment[], end: Termination, frequency
   let admittance = divide(subtract(c(1), reflection), multiply(add(c(1), reflection), zcLast)) as Complex;
   for (let index = segments.length - 1; index >= 0; index--) {
     for (const branch of segments[index].branches ?? []) {
-      admittance = add(admittance, chainAdmittance(branch.segments, branch.end, frequencyHz, air, wallLosses)) as Complex;
+      const branchAdmittance = chainAdmittance(branch.segments, branch.end, frequencyHz, air, wallLosses);
+      // Mouth mass in series: Y' = Y / (1 + j omega M Y), M = rho t_i / S_b
+      const mass = (air.densityKgM3 * mouthCorrection(branch.segments[0].section, segments[index].section)) / area(branch.segments[0].section);
+      const jOmegaMass = multiply(frequencyHz, c(0, 2 * Math.PI * mass)) as Complex;
+      admittance = add(admittance, divide(branchAdmittance, add(c(1), multiply(jOmegaMass, branchAdmittance)))) as Complex;
     }
     const state = multiply(inverseMatrix(segments[index], frequencyHz, air, wallLosses), matrix([[c(1)], [admittance]])) as Matrix;
     admittance = divide(state.get([1, 0]) as Complex, state.get([0, 0]) as Complex) as Complex;

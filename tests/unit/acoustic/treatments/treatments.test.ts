@@ -4,15 +4,42 @@ import { expectClose } from '../tolerance';
 import { toneInput } from '../risk/risk-fixtures';
 
 describe('quarter-wave side-branch resonator', () => {
-  it('L = c / 4f - delta, delta = 0.8216 a (Kinsler & Frey ch. 10; Norris & Sheng 1989 flanged end correction)', () => {
-    expectClose(quarterWaveLengthM(240, 343.2, 0.05), 343.2 / (4 * 240) - 0.8216 * 0.05, 1e-12, '[calc] 0.31642 m');
-    expectClose(quarterWaveLengthM(240, 343.2, 0.05), 0.31642, 1e-5, '[calc] value');
+  // A 100 mm branch on a 200 mm duct: d = b / a = 0.5, t_i = b (0.82 - 0.193 d - 1.09 d^2 + 1.27 d^3 - 0.71 d^4) = 0.56538 b
+  // (Dubos et al. 1999, Acta Acustica 85, 153; coefficients from memory).
+  const mouthCorrectionM = 0.05 * (0.82 - 0.193 * 0.5 - 1.09 * 0.25 + 1.27 * 0.125 - 0.71 * 0.0625);
+
+  it('cot kL = k t_i: a closed tube (Z = -j Zc cot kL, Kinsler & Frey ch. 10) in series with its mouth mass j Zc k t_i', () => {
+    const k = (2 * Math.PI * 240) / 343.2;
+    const lengthM = quarterWaveLengthM(240, 343.2, 0.05, 0.1);
+    expectClose(1 / Math.tan(k * lengthM), k * mouthCorrectionM, 1e-12, 'cot kL = k t_i');
+    expect(lengthM).toBeGreaterThan(0);
+    expect(lengthM).toBeLessThan(343.2 / (4 * 240));
+    // to first order in k t_i, L = c / 4f - t_i (Munjal, Acoustics of Ducts and Mufflers, ch. 3): here within (k t_i)^3 / 3k
+    expectClose(lengthM, 343.2 / (4 * 240) - mouthCorrectionM, (k * mouthCorrectionM) ** 3 / (3 * k) * 1.01, 'c / 4f - t_i');
+    expectClose(lengthM, 0.329375, 1e-6, '[calc] 0.329375 m');
   });
 
-  it('the engine agrees: that tube, closed at one end and flanged-open at the other, resonates at c / 4(L + delta) = 240 Hz (Kinsler & Frey ch. 10)', () => {
-    const closedOpen = analyzeRun({ segments: [{ lengthM: quarterWaveLengthM(240, 343.2, 0.05), section: { shape: 'round', diameterM: 0.1 } }], start: { kind: 'closed' }, end: { kind: 'open', flange: 'flanged' }, wallLosses: false, maxHz: 400 });
-    // ka = 0.22 at 240 Hz: the flanged end correction is 0.8216 a (1 - ~3 %) there (Norris & Sheng fit), so within 1 %
-    expectClose(closedOpen.resonances[0].frequencyHz, 240, 2.4, 'f_1 within 1 %');
+  it('the engine agrees: the branch shorts its junction at 240 Hz, so a closed quarter-wave stretch before it rings there undamped', () => {
+    // Closed start, L1 = c / 4f to the tee, anechoic beyond: at f the tuned branch's input impedance through its
+    // mouth is zero, p = 0 at the junction, the stretch before it is a closed-to-pressure-release quarter-wave
+    // tube at f (Kinsler & Frey ch. 10) and nothing leaks to the anechoic end: a resonance at f with no damping.
+    const host = { shape: 'round' as const, diameterM: 0.2 };
+    const branch = { segments: [{ lengthM: quarterWaveLengthM(240, 343.2, 0.05, 0.1), section: { shape: 'round' as const, diameterM: 0.1 } }], end: { kind: 'closed' as const } };
+    const analysis = analyzeRun({
+      segments: [
+        { lengthM: 343.2 / (4 * 240), section: host, branches: [branch] },
+        { lengthM: 1.5, section: host },
+      ],
+      start: { kind: 'closed' },
+      end: { kind: 'anechoic' },
+      wallLosses: false,
+      temperatureC: 20,
+      maxHz: 400,
+    });
+    const tuned = analysis.resonances.find((resonance) => Math.abs(resonance.frequencyHz - 240) < 5);
+    expect(tuned, 'a resonance near 240 Hz').toBeDefined();
+    expectClose(tuned?.frequencyHz ?? NaN, 240, 0.01, 'f at the tuning');
+    expect(Math.abs(tuned?.dampingHz ?? NaN)).toBeLessThan(1e-6);
   });
 });
 
@@ -46,7 +73,7 @@ describe('treatments evaluated by re-running the engine', () => {
       expect(Number.isFinite(result.after.valueHz ?? NaN)).toBe(true);
     }
     const resonator = results[1];
-    expect(resonator.treatment.kind === 'side-branch-resonator' && resonator.treatment.lengthM).toBeCloseTo(quarterWaveLengthM(240, 343.2, 0.05), 9);
+    expect(resonator.treatment.kind === 'side-branch-resonator' && resonator.treatment.lengthM).toBeCloseTo(quarterWaveLengthM(240, 343.2, 0.05, 0.1), 9);
     // lining the duct damps the resonance: its bandwidth grows, and the flagged coincidence window with it
     expect(results[2].after.windowHz ?? 0).toBeGreaterThanOrEqual(results[2].before.windowHz ?? Infinity);
   });
