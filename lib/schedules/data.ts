@@ -8,6 +8,7 @@ import { schedulePath } from '@/lib/revisions/links';
 import type { RevisionView } from '@/lib/revisions/types';
 import { listDecisions } from '@/lib/reviews/data';
 import { getObject, putObject } from '@/lib/storage/object-store';
+import { imageAsPng } from '@/lib/uploads/as-png';
 import { assertId } from '@/lib/team/ids';
 import { Schedule, Upload } from '@/models';
 import { scheduleContent, type ScheduleFigure } from './content';
@@ -26,11 +27,13 @@ function toSummary(row: Schedule, revision: { planName: string; number: number }
 
 async function planImage(revision: RevisionView): Promise<ScheduleFigure['image']> {
   if (!revision.background) return null;
-  const format = revision.background.contentType === 'image/png' ? 'png' : revision.background.contentType === 'image/jpeg' ? 'jpg' : null;
-  if (!format) return null; // the PDF renderer carries PNG and JPEG only; the runs still draw
   const upload = await Upload.findOne({ where: { id: revision.background.id, teamId: revision.teamId } });
   if (!upload) return null;
-  return { data: Buffer.from(await getObject(upload.storageKey)), format };
+  const bytes = await getObject(upload.storageKey);
+  if (upload.contentType === 'image/png') return { data: Buffer.from(bytes), format: 'png' };
+  if (upload.contentType === 'image/jpeg') return { data: Buffer.from(bytes), format: 'jpg' };
+  // The PDF renderer carries PNG and JPEG only: other stored images (WebP) are re-encoded as PNG.
+  return { data: await imageAsPng(bytes), format: 'png' };
 }
 
 export async function renderRevisionSchedule(revision: RevisionView, issuedBy: string | null, at: Date): Promise<Buffer> {

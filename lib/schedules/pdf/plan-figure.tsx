@@ -1,7 +1,8 @@
 // The plan: the background drawing (when it is an image the PDF can carry) with every duct
-// segment drawn over it and each run named at its start.
-import { Image, Svg, Line, Circle, Text, View } from '@react-pdf/renderer';
+// segment drawn over it and each run named at its start; a scale bar under it.
+import { Image, Svg, Line, Circle, Rect, Text, View } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
+import { scaleBarFor } from '../scale-bar';
 import { RUN_LINE, styles } from './styles';
 
 const FIGURE_WIDTH_PT = 499;
@@ -34,6 +35,25 @@ export function PlanFigure({ content }: { content: ScheduleContent }) {
           <Text key={index} style={{ position: 'absolute', left: (label.x - figure.originX) * scale + 5, top: (label.y - figure.originY) * scale - 11, fontSize: 7, color: RUN_LINE, fontWeight: 600 }}>{label.text}</Text>
         ))}
       </View>
+      <ScaleBarView widthShownM={figure.widthPx * figure.metresPerPixel} pointsPerMetre={scale / figure.metresPerPixel} />
+    </View>
+  );
+}
+
+/** Alternating dark and light divisions with 0 and the bar's length written at its ends. */
+function ScaleBarView({ widthShownM, pointsPerMetre }: { widthShownM: number; pointsPerMetre: number }) {
+  const bar = scaleBarFor(widthShownM);
+  const lengthPt = bar.lengthM * pointsPerMetre;
+  const divisionPt = lengthPt / bar.divisions;
+  return (
+    <View style={{ flexDirection: 'row', alignItems: 'center', marginTop: 6 }}>
+      <Text style={{ fontSize: 7, marginRight: 4 }}>0</Text>
+      <Svg width={lengthPt} height={5}>
+        {Array.from({ length: bar.divisions }, (_, index) => (
+          <Rect key={index} x={index * divisionPt} y={0} width={divisionPt} height={5} fill={index % 2 === 0 ? '#1f2328' : '#ffffff'} stroke="#1f2328" strokeWidth={0.5} />
+        ))}
+      </Svg>
+      <Text style={{ fontSize: 7, marginLeft: 4 }}>{bar.label}</Text>
     </View>
   );
 }

@@ -17,6 +17,8 @@ import { PRINTED_LOWEST_ORDERS } from '@/lib/schedules/content';
 import { call } from '../helpers/routes';
 import { createTestTeam, type TestTeam } from '../helpers/people';
 import { planWithRuns, submitted } from '../helpers/revisions';
+import { previewSchedule } from '@/lib/schedules/data';
+import sharp from 'sharp';
 import { POST as issue } from '@/app/api/v1/revisions/[revisionId]/schedules/route';
 import { GET as download } from '@/app/api/v1/schedules/[scheduleId]/route';
 
@@ -75,5 +77,21 @@ describe('treatment schedule', () => {
     const png = readFileSync(path.join(dir, 'page-2.png'));
     expect(png.subarray(1, 4).toString('latin1')).toBe('PNG');
     expect(png.byteLength).toBeGreaterThan(2000);
+  });
+
+  it('draws a WebP drawing too (re-encoded as PNG for the PDF)', async () => {
+    const project = await createProject(t.team.id, t.members.acoustician.id, { name: 'Quay Street Studios', site: '' });
+    const webpPlanId = await planWithRuns(t, project.id, 1, 'Level 1 extract');
+    const webp = await sharp({ create: { width: 1600, height: 1200, channels: 3, background: '#c8c8c8' } }).webp().toBuffer();
+    const upload = await storePlanBackground(t.team.id, t.members.acoustician.id, 'level-1.webp', new Uint8Array(webp));
+    expect(upload.contentType).toBe('image/webp');
+    await setPlanBackground(t.team.id, webpPlanId, upload.id);
+    const revision = await submitted(t, webpPlanId);
+    const { bytes } = await previewSchedule(t.team.id, revision.id);
+    const { text } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
+    expect(text).toContain('Level 1 extract');
+    expect(text).not.toContain('No drawing image is attached');
+    // The embedded image is the drawing at its own size (PDF 1.7, ISO 32000-1, 8.9.5: an image XObject's /Width and /Height).
+    expect(Buffer.from(bytes).toString('latin1')).toMatch(/\/Width 1600\s*\/Height 1200|\/Height 1200[\s\S]{0,200}\/Width 1600|\/Width 1600[\s\S]{0,200}\/Height 1200/);
   });
 });
