@@ -154,7 +154,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
       </div>
       <div className="flex min-h-0 flex-1">
         <ToolStrip tool={tool} editable={editable} onTool={chooseTool} />
-        <div className="relative min-w-0 flex-1 bg-paper-sunk" ref={canvasArea}>
+        <div className="relative min-w-0 flex-1 bg-paper-sunk" ref={canvasArea} data-testid="plan-canvas">
           {canvasSize.width > 0 && (
             <PlanCanvas
               document={doc}

@@ -1,5 +1,7 @@
 // Helpers for plan editor browser tests.
 import { expect, type Page } from '@playwright/test';
+import { fitView } from '@/components/editor/canvas/view';
+import type { Point } from '@/lib/plan';
 import { Project } from '@/models';
 import { createPerson, createTeam, signIn } from './fixtures';
 
@@ -24,6 +26,14 @@ export async function canvasBox(page: Page) {
   const box = await page.locator('[data-testid="plan-canvas"] canvas, .konvajs-content canvas').first().boundingBox();
   if (!box) throw new Error('the canvas is not on the page');
   return box;
+}
+
+// Where a plan point is on the screen while the canvas shows a plan without a drawing fitted:
+// the 4000 × 3000 px grid area (plan-canvas.tsx), fitted by the app's own fitView.
+export async function fittedPlanToScreen(page: Page, point: Point): Promise<Point> {
+  const box = await canvasBox(page);
+  const view = fitView(4000, 3000, box.width, box.height);
+  return { x: box.x + view.offsetX + point.x * view.scale, y: box.y + view.offsetY + point.y * view.scale };
 }
 
 // Clicks with Shift held so that grid and angle snapping stay out of the way.

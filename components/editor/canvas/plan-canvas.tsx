@@ -14,7 +14,7 @@ import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
 import { SegmentLine } from './segment-line';
 import { TerminationGlyph } from './termination-glyph';
-import { fitView, screenToPlan, zoomAt, type View } from './view';
+import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
 
 export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
 export interface CanvasPointer { type: 'down' | 'move' | 'dblclick'; point: Point; target: CanvasTarget; shiftKey: boolean; scale: number }
@@ -71,17 +71,28 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   const contentWidth = background?.widthPx ?? GRID_AREA_PX.width;
   const contentHeight = background?.heightPx ?? GRID_AREA_PX.height;
   const [view, setView] = useState<View>(() => fitView(contentWidth, contentHeight, widthPx, heightPx));
-  const fittedFor = useRef<string>('');
+  // What the view was last fitted to, the viewport size it was last laid out for, and whether
+  // the person has panned or zoomed since the fit (then a resize keeps the centre instead).
+  const fitted = useRef({ key: '', widthPx, heightPx, movedSinceFit: false });
   const image = useImage(background?.url ?? null);
   // A vertex being dragged: it and the segments touching it are drawn on their own layer, so
   // each move redraws a handful of shapes instead of the whole plan.
   const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number; moved: boolean } | null>(null);
 
   useEffect(() => {
-    const key = `${background?.url ?? 'grid'}:${widthPx > 0 && heightPx > 0}`;
-    if (fittedFor.current === key || widthPx === 0) return;
-    fittedFor.current = key;
-    setView(fitView(contentWidth, contentHeight, widthPx, heightPx));
+    if (widthPx <= 0 || heightPx <= 0) return;
+    const key = background?.url ?? 'grid';
+    const last = fitted.current;
+    if (last.key === key && last.widthPx === widthPx && last.heightPx === heightPx) return;
+    const to = { widthPx, heightPx };
+    if (last.key !== key) {
+      fitted.current = { key, ...to, movedSinceFit: false };
+      setView(fitView(contentWidth, contentHeight, widthPx, heightPx));
+      return;
+    }
+    const resize = { content: { widthPx: contentWidth, heightPx: contentHeight }, from: { widthPx: last.widthPx, heightPx: last.heightPx }, to, movedSinceFit: last.movedSinceFit };
+    fitted.current = { ...last, ...to };
+    setView((current) => viewAfterResize(current, resize));
   }, [background?.url, contentWidth, contentHeight, widthPx, heightPx]);
 
   const { onViewChange } = props;
@@ -168,7 +179,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   const onWheel = (event: Konva.KonvaEventObject<WheelEvent>) => {
     event.evt.preventDefault();
     const pointer = event.target.getStage()?.getPointerPosition();
-    if (pointer) setView((current) => zoomAt(current, pointer, event.evt.deltaY < 0 ? ZOOM_STEP : 1 / ZOOM_STEP));
+    if (!pointer) return;
+    fitted.current.movedSinceFit = true;
+    setView((current) => zoomAt(current, pointer, event.evt.deltaY < 0 ? ZOOM_STEP : 1 / ZOOM_STEP));
   };
 
   const dragPositions = useMemo(() => {
@@ -187,7 +200,11 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       scaleX={view.scale}
       scaleY={view.scale}
       draggable={props.panning}
-      onDragEnd={(event) => { if (event.target === event.target.getStage()) setView((current) => ({ ...current, offsetX: event.target.x(), offsetY: event.target.y() })); }}
+      onDragEnd={(event) => {
+        if (event.target !== event.target.getStage()) return;
+        fitted.current.movedSinceFit = true;
+        setView((current) => ({ ...current, offsetX: event.target.x(), offsetY: event.target.y() }));
+      }}
       onWheel={onWheel}
       onMouseDown={emit('down')}
       onMouseMove={emit('move')}

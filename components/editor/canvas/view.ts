@@ -28,3 +28,29 @@ export function fitView(contentWidthPx: number, contentHeightPx: number, viewpor
     offsetY: (viewportHeightPx - contentHeightPx * safeScale) / 2,
   };
 }
+
+// A width and height in pixels: of the viewport (screen) or of the plan area (plan pixels).
+export interface SizePx { widthPx: number; heightPx: number }
+
+// The same scale, moved so that the plan point at the centre of the old viewport sits at the
+// centre of the new one.
+export function keepCentre(view: View, from: SizePx, to: SizePx): View {
+  const centre = screenToPlan(view, { x: from.widthPx / 2, y: from.heightPx / 2 });
+  return { scale: view.scale, offsetX: to.widthPx / 2 - centre.x * view.scale, offsetY: to.heightPx / 2 - centre.y * view.scale };
+}
+
+// The view after the viewport changes size: fitted again while the person has not panned or
+// zoomed since the last fit (or the old viewport was empty), otherwise the centre is kept.
+export interface Resize {
+  /** The plan area that a fit shows whole, plan pixels. */
+  content: SizePx;
+  from: SizePx;
+  to: SizePx;
+  movedSinceFit: boolean;
+}
+
+export function viewAfterResize(view: View, { content, from, to, movedSinceFit }: Resize): View {
+  const wasEmpty = from.widthPx <= 0 || from.heightPx <= 0;
+  if (!movedSinceFit || wasEmpty) return fitView(content.widthPx, content.heightPx, to.widthPx, to.heightPx);
+  return keepCentre(view, from, to);
+}
