@@ -3,7 +3,7 @@
 import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
-import { findNode, findRun, findSegment, matchKeyBinding, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
+import { findNode, findRoom, findRun, findSegment, matchKeyBinding, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
 import { formatLength } from '@/lib/plan/units';
 import type { PlanView } from '@/lib/plans/data';
 import type { UnitSystem } from '@/models/user';
@@ -114,6 +114,15 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)) });
   }, []);
 
+  // A dragged room's corner lands on the grid, as a dragged point does; a drag back to where it was changes nothing.
+  const onRoomDrag = useCallback((roomId: string, corner: Point) => {
+    const current = modelRef.current;
+    const to = snapToGrid(corner, gridSpacingPx(current.metresPerPixel));
+    const room = findRoom(current.history.present, roomId);
+    if (room && room.x === to.x && room.y === to.y) return;
+    runCommand(current, dispatch, 'move-room', { roomId, to });
+  }, []);
+
   const selection = model.state.selection;
   const selectedSegment = selection.segmentIds.length === 1 && selection.nodeIds.length === 0 ? findSegment(doc, selection.segmentIds[0]) : undefined;
   const selectedNode = selection.nodeIds.length === 1 && selection.segmentIds.length === 0 ? findNode(doc, selection.nodeIds[0]) : undefined;
@@ -129,7 +138,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
-  const tool_hint = { select: 'Click to select; drag points to move them.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
+  const tool_hint = { select: 'Click to select; drag points or rooms to move them.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
 
   return (
     <div className="flex h-full flex-col">
@@ -175,6 +184,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               calibration={tools.feedback.calibration}
               onPointer={(pointer) => { if (comments.placing && pointer.type === 'down') comments.placeAt(pointer.point.x, pointer.point.y); else tools.onPointer(pointer); }}
               onNodeDrag={onNodeDrag}
+              onRoomDrag={onRoomDrag}
               onViewChange={onViewChange}
             />
           )}

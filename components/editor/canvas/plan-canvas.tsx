@@ -14,6 +14,7 @@ import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
 import { SegmentLine } from './segment-line';
 import { TerminationGlyph } from './termination-glyph';
+import { useRoomDrag } from './use-room-drag';
 import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
 
 export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
@@ -39,12 +40,15 @@ export interface PlanCanvasProps {
   calibration: readonly Point[];
   onPointer: (pointer: CanvasPointer) => void;
   onNodeDrag: (nodeId: string, point: Point, phase: 'move' | 'end') => void;
+  /** A room dragged with the select tool: its top-left corner where it was let go, plan pixels (not snapped). */
+  onRoomDrag?: (roomId: string, corner: Point) => void;
   // Told whenever the view pans or zooms, so HTML overlays (comment pins) can follow the plan.
   onViewChange?: (view: View) => void;
 }
 
 const GRID_AREA_PX = { width: 4000, height: 3000 };
 const ZOOM_STEP = 1.15;
+const ignoreRoomDrag = () => {};
 
 function targetOf(event: Konva.KonvaEventObject<MouseEvent>): CanvasTarget {
   const id = event.target.id();
@@ -78,6 +82,8 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   // A vertex being dragged: it and the segments touching it are drawn on their own layer, so
   // each move redraws a handful of shapes instead of the whole plan.
   const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number; moved: boolean } | null>(null);
+  const roomDrag = useRoomDrag(props.onRoomDrag ?? ignoreRoomDrag);
+  const draggedRoomId = roomDrag.drag?.roomId ?? null;
 
   useEffect(() => {
     if (widthPx <= 0 || heightPx <= 0) return;
@@ -169,9 +175,17 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       setDrag({ ...drag, x: point.x, y: point.y, moved: true });
       return;
     }
+    if (type === 'move' && roomDrag.drag) {
+      roomDrag.moveTo(point, view.scale);
+      return;
+    }
     if (type === 'down' && editable && target.nodeId && !event.evt.shiftKey) {
       const node = positions.get(target.nodeId);
       if (node) setDrag({ nodeId: target.nodeId, x: node.x, y: node.y, moved: false });
+    }
+    if (type === 'down' && editable && props.onRoomDrag && target.roomId && !event.evt.shiftKey) {
+      const room = doc.rooms.find((candidate) => candidate.id === target.roomId);
+      if (room) roomDrag.grab(room.id, { x: room.x, y: room.y }, point);
     }
     props.onPointer({ type, point, target, shiftKey: event.evt.shiftKey, scale: view.scale });
   };
@@ -191,6 +205,8 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     return moved;
   }, [positions, drag]);
 
+  const draggedRoom = draggedRoomId ? doc.rooms.find((room) => room.id === draggedRoomId) ?? null : null;
+
   return (
     <Stage
       width={widthPx}
@@ -209,7 +225,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       onMouseDown={emit('down')}
       onMouseMove={emit('move')}
       onDblClick={emit('dblclick')}
-      style={{ cursor: props.panning ? 'grab' : drag ? 'grabbing' : 'crosshair' }}
+      style={{ cursor: props.panning ? 'grab' : drag || roomDrag.drag ? 'grabbing' : 'crosshair' }}
     >
       <Layer listening={false}>
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
@@ -217,12 +233,15 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.gridSpacingPx} scale={view.scale} />
       </Layer>
       <Layer>
-        {doc.rooms.map((room) => (
+        {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (
           <RoomShape key={room.id} room={room} metresPerPixel={props.metresPerPixel} selected={props.selectedRoomId === room.id} flagged={props.flaggedRoomIds?.has(room.id) ?? false} scale={view.scale} />
-        ))}
+        )))}
       </Layer>
       <Layer>{staticShapes}</Layer>
       <Layer>
+        {draggedRoom && roomDrag.drag && (
+          <RoomShape room={{ ...draggedRoom, x: roomDrag.drag.corner.x, y: roomDrag.drag.corner.y }} metresPerPixel={props.metresPerPixel} selected flagged={props.flaggedRoomIds?.has(draggedRoom.id) ?? false} scale={view.scale} />
+        )}
         {drag && doc.segments.filter((segment) => activeSegmentIds.has(segment.id)).map((segment) => segmentLine(segment, dragPositions))}
         {drag && <NodeDot id={drag.nodeId} x={drag.x} y={drag.y} selected isStart={startNodes.has(drag.nodeId)} scale={view.scale} />}
         {props.mode && !drag && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}

@@ -20,6 +20,7 @@ export type CommandName =
   | 'set-length-override'
   | 'add-room'
   | 'update-room'
+  | 'move-room'
   | 'delete-room'
   | 'add-treatment'
   | 'remove-treatment';

@@ -11,7 +11,7 @@ import { moveNode } from './move-node';
 import { chooseEnd, setRunProperties, setTermination } from './run-properties';
 import { setLengthOverride, setLining, setSection } from './segment-properties';
 import { splitSegment } from './split-segment';
-import { addRoom, deleteRoom, updateRoom } from './rooms';
+import { addRoom, deleteRoom, moveRoom, updateRoom } from './rooms';
 import { addTreatment, removeTreatment } from './treatments';
 
 export const COMMANDS = {
@@ -28,6 +28,7 @@ export const COMMANDS = {
   'set-length-override': setLengthOverride,
   'add-room': addRoom,
   'update-room': updateRoom,
+  'move-room': moveRoom,
   'delete-room': deleteRoom,
   'add-treatment': addTreatment,
   'remove-treatment': removeTreatment,
@@ -60,7 +61,7 @@ export type { MoveNodeArgs } from './move-node';
 export type { DeleteSelectionArgs } from './delete-selection';
 export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs } from './segment-properties';
 export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs } from './run-properties';
-export type { AddRoomArgs, UpdateRoomArgs, DeleteRoomArgs } from './rooms';
+export type { AddRoomArgs, UpdateRoomArgs, MoveRoomArgs, DeleteRoomArgs } from './rooms';
 export type { AddTreatmentArgs, RemoveTreatmentArgs } from './treatments';
 export { applyPlanChange } from './treatments';
 export { KEY_BINDINGS, matchKeyBinding } from './key-bindings';

@@ -1,6 +1,7 @@
-// Room edits: add a room, change any of its properties, delete it.
+// Room edits: add a room, change any of its properties, move it, delete it.
 import { findNode, findRoom, type PlanDocument } from '../document';
 import { PlanError } from '../errors';
+import type { Point } from '../geometry/point';
 import { newRoom, type NewRoomShape } from '../rooms/room-input';
 import { roomSchema } from '../rooms/room-schema';
 import type { PlanRoom } from '../rooms/room-types';
@@ -13,6 +14,12 @@ export interface UpdateRoomArgs {
   readonly changes: Partial<Omit<PlanRoom, 'id'>>;
 }
 
+export interface MoveRoomArgs {
+  readonly roomId: string;
+  /** The room's new top-left corner, plan pixels. */
+  readonly to: Point;
+}
+
 export interface DeleteRoomArgs {
   readonly roomId: string;
 }
@@ -20,7 +27,7 @@ export interface DeleteRoomArgs {
 const AXES = [['xM', 'lengthM', 'length'], ['yM', 'widthM', 'width'], ['zM', 'heightM', 'height']] as const;
 
 /** The schema's checks plus: outlet and listener inside the box, the outlet's point on the plan. */
-function checkedRoom(doc: PlanDocument, candidate: PlanRoom): PlanRoom {
+function checkedRoom(doc: PlanDocument, candidate: unknown): PlanRoom {
   const room = checked(roomSchema, candidate, 'Room');
   for (const place of ['outlet', 'listener'] as const) {
     for (const [axis, side, word] of AXES) {
@@ -37,6 +44,10 @@ function targetRoom(doc: PlanDocument, roomId: string): PlanRoom {
   return room;
 }
 
+function replaceRoom(doc: PlanDocument, room: PlanRoom): PlanDocument {
+  return { ...doc, rooms: doc.rooms.map((candidate) => (candidate.id === room.id ? room : candidate)) };
+}
+
 export const addRoom = defineCommand('add-room', 'Add a rectangular room to the plan.', (doc, state, args: AddRoomArgs, newId) => {
   const room = checkedRoom(doc, newRoom(newId(), args));
   return { doc: { ...doc, rooms: [...doc.rooms, room] }, state };
@@ -45,7 +56,15 @@ export const addRoom = defineCommand('add-room', 'Add a rectangular room to the 
 export const updateRoom = defineCommand('update-room', "Change a room's size, place, finishes, criterion, outlet or listener.", (doc, state, args: UpdateRoomArgs) => {
   const room = targetRoom(doc, args.roomId);
   const changed = checkedRoom(doc, { ...room, ...args.changes, id: room.id });
-  return { doc: { ...doc, rooms: doc.rooms.map((candidate) => (candidate.id === room.id ? changed : candidate)) }, state };
+  return { doc: replaceRoom(doc, changed), state };
+});
+
+export const moveRoom = defineCommand('move-room', 'Move a room on the plan (its size, outlet and listener go with it).', (doc, state, args: MoveRoomArgs) => {
+  const room = targetRoom(doc, args.roomId);
+  // The schema names a missing or non-finite coordinate ("Room (x): …").
+  const to: Partial<Point> = args.to ?? {};
+  const moved = checkedRoom(doc, { ...room, x: to.x, y: to.y });
+  return { doc: replaceRoom(doc, moved), state };
 });
 
 export const deleteRoom = defineCommand('delete-room', 'Delete a room (its chosen treatments stay in the list).', (doc, state, args: DeleteRoomArgs) => {
