@@ -16,3 +16,4 @@ export * from './history';
 export * from './units';
 export * from './schedule-csv';
 export * from './rooms';
+export { drawnArea, type PlanArea } from './drawn-area';

@@ -1,7 +1,8 @@
 // Helpers for plan editor browser tests.
 import { expect, type Page } from '@playwright/test';
+import { openingArea } from '@/components/editor/canvas/opening-area';
 import { fitView } from '@/components/editor/canvas/view';
-import type { Point } from '@/lib/plan';
+import { emptyDocument, type PlanDocument, type Point } from '@/lib/plan';
 import { Project } from '@/models';
 import { createPerson, createTeam, signIn } from './fixtures';
 
@@ -28,11 +29,13 @@ export async function canvasBox(page: Page) {
   return box;
 }
 
-// Where a plan point is on the screen while the canvas shows a plan without a drawing fitted:
-// the 4000 × 3000 px grid area (plan-canvas.tsx), fitted by the app's own fitView.
-export async function fittedPlanToScreen(page: Page, point: Point): Promise<Point> {
+// Where a plan point is on the screen while the canvas shows a plan without a drawing, as it was
+// fitted when the plan opened: the app's own opening area (the drawn runs and rooms, or the whole
+// grid for an empty plan) and fitView. Pass the document as it was when the page was loaded.
+export async function fittedPlanToScreen(page: Page, point: Point, opened?: { document: PlanDocument; metresPerPixel: number }): Promise<Point> {
   const box = await canvasBox(page);
-  const view = fitView(4000, 3000, box.width, box.height);
+  const area = openingArea(opened?.document ?? emptyDocument(), opened?.metresPerPixel ?? 0.02, null);
+  const view = fitView(area.widthPx, area.heightPx, box.width, box.height, area.x, area.y);
   return { x: box.x + view.offsetX + point.x * view.scale, y: box.y + view.offsetY + point.y * view.scale };
 }
 

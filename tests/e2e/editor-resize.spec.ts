@@ -24,7 +24,7 @@ async function expectCanvasFillsArea(page: Page): Promise<void> {
 async function expectFanWhereFitted(page: Page): Promise<void> {
   await page.keyboard.press('Escape');
   await expect(page.getByText('Start end (fan side)')).toHaveCount(0);
-  const fan = await fittedPlanToScreen(page, FAN);
+  const fan = await fittedPlanToScreen(page, FAN, { document: roomPlanDocument(), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL });
   await page.mouse.click(fan.x, fan.y);
   await expect(page.getByText('Start end (fan side)')).toBeVisible();
 }

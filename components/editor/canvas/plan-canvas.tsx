@@ -15,6 +15,7 @@ import { NodeDot } from './node-dot';
 import { SegmentLine } from './segment-line';
 import { TerminationGlyph } from './termination-glyph';
 import { useRoomDrag } from './use-room-drag';
+import { GRID_AREA_PX, openingArea } from './opening-area';
 import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
 
 export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
@@ -46,7 +47,6 @@ export interface PlanCanvasProps {
   onViewChange?: (view: View) => void;
 }
 
-const GRID_AREA_PX = { width: 4000, height: 3000 };
 const ZOOM_STEP = 1.15;
 const ignoreRoomDrag = () => {};
 
@@ -72,12 +72,14 @@ function useImage(url: string | null): HTMLImageElement | null {
 
 export default function PlanCanvas(props: PlanCanvasProps) {
   const { document: doc, widthPx, heightPx, background, selection, editable } = props;
-  const contentWidth = background?.widthPx ?? GRID_AREA_PX.width;
-  const contentHeight = background?.heightPx ?? GRID_AREA_PX.height;
-  const [view, setView] = useState<View>(() => fitView(contentWidth, contentHeight, widthPx, heightPx));
-  // What the view was last fitted to, the viewport size it was last laid out for, and whether
-  // the person has panned or zoomed since the fit (then a resize keeps the centre instead).
-  const fitted = useRef({ key: '', widthPx, heightPx, movedSinceFit: false });
+  const contentWidth = background?.widthPx ?? GRID_AREA_PX.widthPx;
+  const contentHeight = background?.heightPx ?? GRID_AREA_PX.heightPx;
+  const fitFor = (area: ReturnType<typeof openingArea>, width: number, height: number) => fitView(area.widthPx, area.heightPx, width, height, area.x, area.y);
+  const [view, setView] = useState<View>(() => fitFor(openingArea(doc, props.metresPerPixel, background), widthPx, heightPx));
+  // What the view was last fitted to (the drawing, or the drawn area when the plan opened), the
+  // viewport size it was last laid out for, and whether the person has panned or zoomed since
+  // the fit (then a resize keeps the centre instead).
+  const fitted = useRef({ key: '', area: openingArea(doc, props.metresPerPixel, background), widthPx, heightPx, movedSinceFit: false });
   const image = useImage(background?.url ?? null);
   // A vertex being dragged: it and the segments touching it are drawn on their own layer, so
   // each move redraws a handful of shapes instead of the whole plan.
@@ -92,14 +94,17 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     if (last.key === key && last.widthPx === widthPx && last.heightPx === heightPx) return;
     const to = { widthPx, heightPx };
     if (last.key !== key) {
-      fitted.current = { key, ...to, movedSinceFit: false };
-      setView(fitView(contentWidth, contentHeight, widthPx, heightPx));
+      const area = openingArea(doc, props.metresPerPixel, background);
+      fitted.current = { key, area, ...to, movedSinceFit: false };
+      setView(fitFor(area, widthPx, heightPx));
       return;
     }
-    const resize = { content: { widthPx: contentWidth, heightPx: contentHeight }, from: { widthPx: last.widthPx, heightPx: last.heightPx }, to, movedSinceFit: last.movedSinceFit };
+    const resize = { content: last.area, from: { widthPx: last.widthPx, heightPx: last.heightPx }, to, movedSinceFit: last.movedSinceFit };
     fitted.current = { ...last, ...to };
     setView((current) => viewAfterResize(current, resize));
-  }, [background?.url, contentWidth, contentHeight, widthPx, heightPx]);
+    // Fitted when the drawing changes or the viewport resizes, not as the plan is edited.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [background?.url, widthPx, heightPx]);
 
   const { onViewChange } = props;
   useEffect(() => { onViewChange?.(view); }, [view, onViewChange]);

@@ -17,15 +17,16 @@ export function zoomAt(view: View, screen: Point, factor: number): View {
   return { scale, offsetX: screen.x - anchor.x * scale, offsetY: screen.y - anchor.y * scale };
 }
 
-// A view that fits a plan area of the given size into the viewport with a margin.
-export function fitView(contentWidthPx: number, contentHeightPx: number, viewportWidthPx: number, viewportHeightPx: number): View {
+// A view that fits a plan area of the given size, whose top-left corner is (originX, originY) in
+// plan pixels, into the viewport with a margin, centred.
+export function fitView(contentWidthPx: number, contentHeightPx: number, viewportWidthPx: number, viewportHeightPx: number, originX = 0, originY = 0): View {
   const margin = 24;
   const scale = Math.min((viewportWidthPx - 2 * margin) / contentWidthPx, (viewportHeightPx - 2 * margin) / contentHeightPx, 4);
   const safeScale = Number.isFinite(scale) && scale > 0 ? scale : 1;
   return {
     scale: safeScale,
-    offsetX: (viewportWidthPx - contentWidthPx * safeScale) / 2,
-    offsetY: (viewportHeightPx - contentHeightPx * safeScale) / 2,
+    offsetX: (viewportWidthPx - contentWidthPx * safeScale) / 2 - originX * safeScale,
+    offsetY: (viewportHeightPx - contentHeightPx * safeScale) / 2 - originY * safeScale,
   };
 }
 
@@ -42,8 +43,8 @@ export function keepCentre(view: View, from: SizePx, to: SizePx): View {
 // The view after the viewport changes size: fitted again while the person has not panned or
 // zoomed since the last fit (or the old viewport was empty), otherwise the centre is kept.
 export interface Resize {
-  /** The plan area that a fit shows whole, plan pixels. */
-  content: SizePx;
+  /** The plan area that a fit shows whole, plan pixels (top-left corner at x, y; 0, 0 when absent). */
+  content: SizePx & { x?: number; y?: number };
   from: SizePx;
   to: SizePx;
   movedSinceFit: boolean;
@@ -51,6 +52,6 @@ export interface Resize {
 
 export function viewAfterResize(view: View, { content, from, to, movedSinceFit }: Resize): View {
   const wasEmpty = from.widthPx <= 0 || from.heightPx <= 0;
-  if (!movedSinceFit || wasEmpty) return fitView(content.widthPx, content.heightPx, to.widthPx, to.heightPx);
+  if (!movedSinceFit || wasEmpty) return fitView(content.widthPx, content.heightPx, to.widthPx, to.heightPx, content.x, content.y);
   return keepCentre(view, from, to);
 }
