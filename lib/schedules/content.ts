@@ -2,6 +2,8 @@
 // PDF pieces only lay it out.
 import type { Termination } from '@/lib/acoustic';
 import { nodePositions } from '@/lib/plan/document';
+import { drawnArea } from '@/lib/plan/drawn-area';
+import { roomRectPx } from '@/lib/plan/rooms/room-input';
 import type { RunResult } from '@/lib/plans/results';
 import { resonanceTarget } from '@/lib/revisions/rows';
 import { revisionStateLabel } from '@/lib/revisions/states';
@@ -11,7 +13,8 @@ import { DECISION_LABELS } from '@/lib/reviews/decisions';
 import { describeSection, describeTermination } from './describe';
 
 export interface ScheduleLine { x1: number; y1: number; x2: number; y2: number }
-export interface ScheduleFigure { metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number; image: { data: Buffer; format: 'png' | 'jpg' } | null; lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[] }
+export interface ScheduleRoomOutline { x: number; y: number; widthPx: number; heightPx: number; name: string }
+export interface ScheduleFigure { metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number; image: { data: Buffer; format: 'png' | 'jpg' } | null; lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[]; rooms: ScheduleRoomOutline[] }
 
 export interface ScheduleRun {
   name: string;
@@ -54,7 +57,8 @@ const FIGURE_MARGIN_PX = 60;
 // matters beyond them (near a fan tone, or flagged); the revision holds the full list.
 export const PRINTED_LOWEST_ORDERS = 12;
 
-function figureOf(revision: RevisionView, image: ScheduleFigure['image']): ScheduleFigure {
+/** The plan figure: the drawing (or a blank sheet around what is drawn), run lines and names, room outlines. */
+export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerPixel' | 'background'>, image: ScheduleFigure['image']): ScheduleFigure {
   const doc = revision.document;
   const positions = nodePositions(doc);
   const lines = doc.segments.flatMap((segment) => {
@@ -66,16 +70,20 @@ function figureOf(revision: RevisionView, image: ScheduleFigure['image']): Sched
     const start = positions.get(run.startNodeId);
     return start ? [{ x: start.x, y: start.y, text: run.name }] : [];
   });
+  const rooms = doc.rooms.map((room) => {
+    const rect = roomRectPx(room, revision.metresPerPixel);
+    return { x: rect.x, y: rect.y, widthPx: rect.width, heightPx: rect.height, name: room.name };
+  });
   if (image && revision.background?.widthPx && revision.background.heightPx) {
-    return { metresPerPixel: revision.metresPerPixel, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, lines, labels };
+    return { metresPerPixel: revision.metresPerPixel, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, lines, labels, rooms };
   }
-  const xs = doc.nodes.map((node) => node.x);
-  const ys = doc.nodes.map((node) => node.y);
-  const minX = Math.min(...xs, 0) - FIGURE_MARGIN_PX;
-  const minY = Math.min(...ys, 0) - FIGURE_MARGIN_PX;
-  const maxX = Math.max(...xs, 400) + FIGURE_MARGIN_PX;
-  const maxY = Math.max(...ys, 300) + FIGURE_MARGIN_PX;
-  return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels };
+  // A blank sheet: the drawn runs and rooms with a margin (from the plan's origin, at least 400 × 300 px).
+  const drawn = drawnArea(doc, revision.metresPerPixel) ?? { x: 0, y: 0, widthPx: 0, heightPx: 0 };
+  const minX = Math.min(drawn.x, 0) - FIGURE_MARGIN_PX;
+  const minY = Math.min(drawn.y, 0) - FIGURE_MARGIN_PX;
+  const maxX = Math.max(drawn.x + drawn.widthPx, 400) + FIGURE_MARGIN_PX;
+  const maxY = Math.max(drawn.y + drawn.heightPx, 300) + FIGURE_MARGIN_PX;
+  return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels, rooms };
 }
 
 function magnitudeText(bands: readonly { hz: number; magnitude: number }[]): string {
@@ -145,7 +153,7 @@ export function scheduleContent(input: {
     stateLabel: revisionStateLabel(revision.state),
     draft: revision.state !== 'approved',
     issuedBy: input.issuedBy,
-    figure: figureOf(revision, input.image),
+    figure: planFigure(revision, input.image),
     runs: revision.analysis.map((result) => runOf(revision, result, decisions)),
     risks: revision.extras.risks ?? [],
     treatments: revision.extras.treatments ?? [],

@@ -1,11 +1,12 @@
-// The plan: the background drawing (when it is an image the PDF can carry) with every duct
-// segment drawn over it and each run named at its start; a scale bar under it.
+// The plan: the background drawing with every room outlined (dashed) and every duct segment
+// drawn over it, each run named at its start and each room under its outline; a scale bar under it.
 import { Image, Svg, Line, Circle, Rect, Text, View } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
 import { scaleBarFor } from '../scale-bar';
 import { RUN_LINE, styles } from './styles';
 
 const FIGURE_WIDTH_PT = 499;
+const ROOM_LINE = '#5d626b';
 const FIGURE_MAX_HEIGHT_PT = 600;
 
 export function PlanFigure({ content }: { content: ScheduleContent }) {
@@ -26,11 +27,17 @@ export function PlanFigure({ content }: { content: ScheduleContent }) {
       <View style={{ width, height, borderWidth: 0.5, borderColor: '#cfd1d4', position: 'relative' }}>
         {figure.image && <Image src={figure.image} style={{ position: 'absolute', top: 0, left: 0, width, height, opacity: 0.8 }} />}
         <Svg width={width} height={height} viewBox={`${figure.originX} ${figure.originY} ${figure.widthPx} ${figure.heightPx}`} style={{ position: 'absolute', top: 0, left: 0 }}>
+          {figure.rooms.map((room, index) => (
+            <Rect key={`room-${index}`} x={room.x} y={room.y} width={room.widthPx} height={room.heightPx} fill="none" stroke={ROOM_LINE} strokeWidth={0.8 / scale} strokeDasharray={`${4 / scale} ${2.5 / scale}`} />
+          ))}
           {figure.lines.map((line, index) => (
             <Line key={index} x1={line.x1} y1={line.y1} x2={line.x2} y2={line.y2} stroke={RUN_LINE} strokeWidth={strokePx} strokeLinecap="round" />
           ))}
           {figure.labels.map((label, index) => <Circle key={index} cx={label.x} cy={label.y} r={4 / scale} fill={RUN_LINE} />)}
         </Svg>
+        {figure.rooms.map((room, index) => (
+          <Text key={`room-${index}`} style={{ position: 'absolute', left: (room.x - figure.originX) * scale, top: (room.y + room.heightPx - figure.originY) * scale + 2, fontSize: 6.5, color: ROOM_LINE }}>{room.name}</Text>
+        ))}
         {figure.labels.map((label, index) => (
           <Text key={index} style={{ position: 'absolute', left: (label.x - figure.originX) * scale + 5, top: (label.y - figure.originY) * scale - 11, fontSize: 7, color: RUN_LINE, fontWeight: 600 }}>{label.text}</Text>
         ))}

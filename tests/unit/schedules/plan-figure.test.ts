@@ -1,0 +1,27 @@
+// The schedule's plan figure, worked out by hand from the fixture's coordinates (common practice, no source).
+import { describe, expect, it } from 'vitest';
+import { planFigure } from '@/lib/schedules/content';
+import { ROOM_PLAN_METRES_PER_PIXEL, roomPlanDocument } from '../plan/room-plan-fixture';
+
+describe('plan figure', () => {
+  const revision = { document: roomPlanDocument(), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL, background: null };
+
+  it('outlines every room at the plan scale: 12 m × 8 m at 20 mm per pixel is 600 × 400 px', () => {
+    expect(planFigure(revision, null).rooms).toEqual([{ x: 50, y: 250, widthPx: 600, heightPx: 400, name: 'Recital room' }]);
+  });
+
+  it('a blank sheet takes in the rooms as well as the runs, with a 60 px margin', () => {
+    const figure = planFigure(revision, null);
+    // drawn area x 50…650, y 200…650; the sheet starts at the plan origin or before
+    expect({ x: figure.originX, y: figure.originY, w: figure.widthPx, h: figure.heightPx }).toEqual({ x: -60, y: -60, w: 650 + 120, h: 650 + 120 });
+    expect(figure.lines).toHaveLength(2);
+    expect(figure.labels.map((label) => label.text)).toEqual(['Supply to recital room']);
+  });
+
+  it('a drawing fixes the sheet to its own size', () => {
+    const withDrawing = { ...revision, background: { id: 'x', contentType: 'image/png', widthPx: 2000, heightPx: 1500 } };
+    const figure = planFigure(withDrawing, { data: Buffer.from([]), format: 'png' });
+    expect({ x: figure.originX, y: figure.originY, w: figure.widthPx, h: figure.heightPx }).toEqual({ x: 0, y: 0, w: 2000, h: 1500 });
+    expect(figure.rooms).toHaveLength(1);
+  });
+});
