@@ -19,6 +19,12 @@ const MAX_ECHO_WAVEFRONTS = 200000;
 const SCAN_POINTS_PER_MODE_SPACING = 2;
 /** At least this many scan points across the analysed range, however sparse the modes. */
 const MIN_SCAN_POINTS = 16;
+/**
+ * Modes are numbered from the run's lowest natural frequency even when minHz leaves some out: the
+ * search starts at this fraction of the mean mode spacing (the lowest mode of a closed–open duct is
+ * half a spacing) when that is below minHz, and only the modes from minHz up are reported.
+ */
+const ORDER_SEARCH_FLOOR_SPACINGS = 0.1;
 /** Modes whose damping is below this fraction of their frequency count as undamped (Q null). */
 const UNDAMPED_FRACTION = 1e-9;
 
@@ -53,11 +59,14 @@ export function analyzeRun(input: RunInput): RunAnalysis {
     const endCorrectionsM = network.terminations.reduce((sum, termination) => sum + termination.lowFrequencyEndCorrectionM, 0);
     const modeSpacingHz = speedOfSoundMps / (2 * (network.totalLengthM + endCorrectionsM));
     const scanStepHz = Math.min(modeSpacingHz / SCAN_POINTS_PER_MODE_SPACING, (maxHz - minHz) / MIN_SCAN_POINTS);
-    resonances = findNaturalFrequencies(evaluator, { minHz, maxHz, scanStepHz }).map((zero, index) => {
+    const searchFromHz = Math.min(minHz, ORDER_SEARCH_FLOOR_SPACINGS * modeSpacingHz);
+    const zeros = findNaturalFrequencies(evaluator, { minHz: searchFromHz, maxHz, scanStepHz });
+    const hiddenBelow = zeros.filter((zero) => zero.frequencyHz < minHz).length;
+    resonances = zeros.slice(hiddenBelow).map((zero, index) => {
       const damped = zero.dampingHz > UNDAMPED_FRACTION * zero.frequencyHz;
       const shape = modeShape(evaluator, zero.frequencyHz);
       return attachLazyEnvelope({
-        order: index + 1,
+        order: hiddenBelow + index + 1,
         frequencyHz: zero.frequencyHz,
         // Q = fr / (2 fi) and the -3 dB bandwidth 2 fi of a single pole at fr + j fi (Kinsler & Frey, ch. 1, damped oscillator)
         q: damped ? zero.frequencyHz / (2 * zero.dampingHz) : null,

@@ -86,11 +86,16 @@ export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerP
   return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels, rooms };
 }
 
-function magnitudeText(bands: readonly { hz: number; magnitude: number }[]): string {
+/** |R| with a minus sign when the reflection is inverted (phase beyond ±90°), as the editor's table shows it. */
+function signedMagnitude(band: { magnitude: number; phaseRad: number }): string {
+  return `${Math.abs(band.phaseRad) > Math.PI / 2 ? '−' : ''}${band.magnitude.toFixed(2)}`;
+}
+
+function magnitudeText(bands: readonly { hz: number; magnitude: number; phaseRad: number }[]): string {
   if (bands.length === 0) return '—';
   const low = bands[0];
   const high = bands[bands.length - 1];
-  return `${low.magnitude.toFixed(2)} at ${low.hz.toFixed(0)} Hz · ${high.magnitude.toFixed(2)} at ${high.hz.toFixed(0)} Hz`;
+  return `${signedMagnitude(low)} at ${low.hz.toFixed(0)} Hz · ${signedMagnitude(high)} at ${high.hz.toFixed(0)} Hz`;
 }
 
 function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap<string, DecisionView>): ScheduleRun {

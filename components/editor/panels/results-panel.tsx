@@ -46,7 +46,11 @@ export function ResultsPanel({ result, loading, stale, error, selectedOrder, onS
       )}
       <Section title="Resonances">
         <ResonanceTable resonances={analysis.resonances} nearFanTone={result.nearFanTone} selectedOrder={selectedOrder} onSelect={onSelectOrder} />
-        <p className="text-xs text-graphite-500">Select a row to draw its pressure envelope on the plan (A antinode, N node).</p>
+        <p className="text-xs text-graphite-500">
+          Listed from {analysis.minHz.toFixed(0)} to {analysis.maxHz.toFixed(0)} Hz; orders count from the run’s lowest resonance
+          {(analysis.resonances[0]?.order ?? 1) > 1 ? `, so ${(analysis.resonances[0]?.order ?? 1) - 1} below ${analysis.minHz.toFixed(0)} Hz are not listed` : ''}.
+          {' '}Select a row to draw its pressure envelope on the plan (A antinode, N node).
+        </p>
       </Section>
       <Section title="Reflections">
         <ReflectionTable reflections={analysis.reflections} formatPosition={formatPosition} />

@@ -13,7 +13,8 @@ function Fact({ label, value }: { label: string; value: string }) {
 }
 
 export function Cover({ content }: { content: ScheduleContent }) {
-  const resonances = content.runs.reduce((sum, run) => sum + run.resonances.length, 0);
+  // Every resonance of the revision: the printed rows plus those the tables leave out.
+  const resonances = content.runs.reduce((sum, run) => sum + run.resonances.length + (run.omitted?.count ?? 0), 0);
   const nearTones = content.runs.reduce((sum, run) => sum + run.resonances.filter((row) => row.fanTone !== 'clear').length, 0);
   return (
     <View>

@@ -49,7 +49,7 @@ export function RunSection({ run, index }: { run: ScheduleRun; index: number }) 
       <Text style={styles.h3}>Reflections summary</Text>
       {run.reflections.length === 0 ? <Text style={styles.muted}>No reflecting discontinuity on the main path.</Text> : (
         <Table
-          columns={[{ title: 'At', width: 0.14, numeric: true }, { title: 'Discontinuity', width: 0.36 }, { title: 'Reflection coefficient |R|, lowest and highest band', width: 0.5 }]}
+          columns={[{ title: 'At', width: 0.14, numeric: true }, { title: 'Discontinuity', width: 0.36 }, { title: 'Reflection coefficient |R| (− inverted), lowest and highest band', width: 0.5 }]}
           rows={run.reflections.map((row) => [`${row.atM.toFixed(2)} m`, row.kind, row.magnitude])}
         />
       )}

@@ -163,4 +163,15 @@ describe('uniform pipe resonances (Kinsler & Frey, ch. 10)', () => {
       expectClose(resonance.q ?? NaN, ((2 * Math.PI * hz) / c) / (2 * perSqrtHz * Math.sqrt(hz)), 0.02 * (resonance.q ?? 1), `Q ${index + 1}`);
     });
   });
+
+  it('orders count from the fundamental even below minHz: a 7 m closed–open pipe lists (2n - 1) c / 4(L + delta) from n = 2', () => {
+    // f_1 = 343.2 / (4 x 7.06) = 12.2 Hz lies below the default minHz of 20 Hz; the first mode listed is f_2 = 3 f_1, order 2.
+    const analysis = analyzeRun({ segments: [{ lengthM: 7, section: { shape: 'round', diameterM: 2 * radiusM } }], start: closed, end: unflanged, maxHz: 100, wallLosses: false });
+    expect(analysis.minHz).toBe(20);
+    const [first, second] = analysis.resonances;
+    expect(first.order).toBe(2);
+    expectClose(first.frequencyHz, (3 * c) / (4 * (7 + unflangedDelta(first.frequencyHz))), 0.01, 'f_2');
+    expect(second.order).toBe(3);
+    expectClose(second.frequencyHz, (5 * c) / (4 * (7 + unflangedDelta(second.frequencyHz))), 0.02, 'f_3');
+  });
 });
