@@ -138,7 +138,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
-  const tool_hint = { select: 'Click to select; drag points or rooms to move them.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
+  const tool_hint = { select: editable ? 'Click to select; drag points or rooms to move them.' : 'Click a segment or room to read it.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
 
   return (
     <div className="flex h-full flex-col">
@@ -174,7 +174,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               metresPerPixel={model.metresPerPixel}
               selection={selection}
               editable={editable && tool === 'select'}
-              panning={tool === 'pan'}
+              panning={tool === 'pan' && !comments.placing}
               mainPath={activeResult?.path ?? []}
               mode={resonance && activeResult?.analysis ? { resonance, speedOfSoundMps: activeResult.analysis.speedOfSoundMps } : null}
               preview={tools.feedback.preview}

@@ -2,18 +2,20 @@ import { expect, test } from '@playwright/test';
 import { signIn } from './fixtures';
 import { linkInMailTo, teamWithRevision } from './review-fixtures';
 
+// The fixture's run has two resonances below 20 Hz, so the lowest listed orders are 3 and 4.
+
 test('the engineer flags a resonance row and the acoustician sees it returned with the note', async ({ page }) => {
   const { people, planId } = await teamWithRevision('Flag');
   await signIn(page, people.engineer.email);
   await page.goto(`/plans/${planId}/revisions/1`);
   await expect(page.getByTestId('revision-state').first()).toHaveText(/Waiting for review/);
-  await page.getByRole('button', { name: 'Flag Supply run 1 order 1', exact: true }).click();
-  await page.getByLabel('Why is Supply run 1 order 1 flagged?').fill('Sits on the fan tone; retune the riser');
+  await page.getByRole('button', { name: 'Flag Supply run 1 order 3', exact: true }).click();
+  await page.getByLabel('Why is Supply run 1 order 3 flagged?').fill('Sits on the fan tone; retune the riser');
   await page.getByRole('button', { name: 'Save flag' }).click();
-  const row = page.getByTestId('review-row-Supply run 1-1');
+  const row = page.getByTestId('review-row-Supply run 1-3');
   await expect(row.getByTestId('row-decision')).toHaveText(/Flagged/);
-  await page.getByRole('button', { name: 'Accept Supply run 1 order 2', exact: true }).click();
-  await expect(page.getByTestId('review-row-Supply run 1-2').getByTestId('row-decision')).toHaveText(/Accepted/);
+  await page.getByRole('button', { name: 'Accept Supply run 1 order 4', exact: true }).click();
+  await expect(page.getByTestId('review-row-Supply run 1-4').getByTestId('row-decision')).toHaveText(/Accepted/);
   await page.getByRole('button', { name: 'Finish review: request changes' }).click();
   await expect(page.getByTestId('revision-state').first()).toHaveText('!Returned: changes requested');
 
@@ -24,7 +26,7 @@ test('the engineer flags a resonance row and the acoustician sees it returned wi
   await expect(page.getByTestId('plan-revision-state')).toContainText('Revision 1');
   await expect(page.getByTestId('plan-revision-state')).toContainText('Returned: changes requested');
   await page.getByRole('list', { name: 'Revisions' }).getByRole('link', { name: /Revision 1/ }).click();
-  const seen = page.getByTestId('review-row-Supply run 1-1');
+  const seen = page.getByTestId('review-row-Supply run 1-3');
   await expect(seen).toContainText('Flagged');
   await expect(seen).toContainText('Sits on the fan tone; retune the riser');
   await expect(page.getByRole('button', { name: /^Flag / })).toHaveCount(0);
@@ -72,7 +74,7 @@ test('a viewer can neither review nor comment, and the route handlers answer 403
   const { people, planId, revision } = await teamWithRevision('Viewer');
   await signIn(page, people.viewer.email);
   await page.goto(`/plans/${planId}/revisions/1`);
-  await expect(page.getByTestId('review-row-Supply run 1-1')).toContainText('Not reviewed');
+  await expect(page.getByTestId('review-row-Supply run 1-3')).toContainText('Not reviewed');
   await expect(page.getByRole('button', { name: /^(Accept|Flag) / })).toHaveCount(0);
   await expect(page.getByRole('button', { name: 'Place a pin' })).toHaveCount(0);
   await expect(page.getByRole('button', { name: /^Finish review/ })).toHaveCount(0);
