@@ -21,5 +21,12 @@ export function candidateTreatments(input: RiskInput, flag: RiskFlag): Treatment
           { kind: 'line-segment', segmentIndex: longest, ...DEFAULT_LINING },
           { kind: 'change-termination', end: 'end', termination: { kind: 'open', flange: 'flanged' } },
         ];
-  return candidates.map((treatment) => evaluateTreatment(input, flag, treatment));
+  return candidates.filter((treatment) => !changesNothing(input, treatment)).map((treatment) => evaluateTreatment(input, flag, treatment));
+}
+
+/** A termination change to the termination the end already has is no treatment. */
+function changesNothing(input: RiskInput, treatment: Treatment): boolean {
+  if (treatment.kind !== 'change-termination') return false;
+  const current = treatment.end === 'end' ? input.run.end : input.run.start;
+  return JSON.stringify(current) === JSON.stringify(treatment.termination);
 }

@@ -12,6 +12,8 @@ import type { Treatment, TreatmentResult } from './treatment-types';
 
 /** Default resonator bore: half the host segment's equivalent diameter (product rule). */
 const RESONATOR_BORE_FRACTION = 0.5;
+/** A retune shorter than this (half a millimetre) is no change a builder can make. */
+const MIN_RETUNE_M = 0.0005;
 
 /** Main-path segment whose far end lies nearest a pressure antinode of the resonance at the target. */
 function segmentNearestAntinode(input: RiskInput, flag: RiskFlag): number {
@@ -37,8 +39,8 @@ function resolve(input: RiskInput, flag: RiskFlag, treatment: Treatment, notes: 
   if (treatment.kind === 'retune-length' && treatment.deltaLengthM === undefined) {
     const segmentIndex = treatment.segmentIndex ?? longestSegment(input.run);
     const search = searchRetune(input, flag, segmentIndex);
-    notes.push(`length search: ${search.analyses} re-runs of the engine on segment ${segmentIndex}`);
-    if (search.deltaLengthM === null) {
+    notes.push(`length search: ${search.analyses} re-runs of the engine on segment ${segmentIndex + 1}`);
+    if (search.deltaLengthM === null || Math.abs(search.deltaLengthM) < MIN_RETUNE_M) {
       notes.push('no length change of that segment (10 % to about 10x the first step) clears the flag');
       return null;
     }
@@ -56,16 +58,19 @@ function resolve(input: RiskInput, flag: RiskFlag, treatment: Treatment, notes: 
   return treatment;
 }
 
+/** Segments are numbered for people from 1 at the fan end, as in the section tables. */
+const segmentName = (index: number): string => `segment ${index + 1}`;
+
 function describe(treatment: Treatment): string {
   switch (treatment.kind) {
     case 'line-segment':
-      return `Line segment ${treatment.segmentIndex}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm, absorption ${treatment.absorption})`;
+      return `Line ${segmentName(treatment.segmentIndex)}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm, absorption ${treatment.absorption})`;
     case 'change-termination':
       return `Change the ${treatment.end} termination to ${treatment.termination.kind}${treatment.termination.kind === 'open' ? ` (${treatment.termination.flange})` : ''}`;
     case 'retune-length':
-      return `Change segment ${treatment.segmentIndex}'s length by ${((treatment.deltaLengthM ?? 0) * 1000).toFixed(0)} mm`;
+      return `${(treatment.deltaLengthM ?? 0) < 0 ? 'Shorten' : 'Lengthen'} ${segmentName(treatment.segmentIndex ?? 0)} by ${(Math.abs(treatment.deltaLengthM ?? 0) * 1000).toFixed(0)} mm`;
     case 'side-branch-resonator':
-      return `Add a closed quarter-wave side branch at segment ${treatment.segmentIndex}: ${(treatment.lengthM ?? 0).toFixed(3)} m long, ${((treatment.diameterM ?? 0) * 1000).toFixed(0)} mm bore, tuned to ${(treatment.tuneHz ?? 0).toFixed(1)} Hz`;
+      return `Add a closed quarter-wave side branch at ${segmentName(treatment.segmentIndex ?? 0)}: ${(treatment.lengthM ?? 0).toFixed(3)} m long, ${((treatment.diameterM ?? 0) * 1000).toFixed(0)} mm bore, tuned to ${(treatment.tuneHz ?? 0).toFixed(1)} Hz`;
   }
 }
 

@@ -44,7 +44,8 @@ describe('risks across the plan (server, from the document)', () => {
     const doc = roomPlanDocument();
     const tone = planRisks(doc, mpp).flags.find((flag) => flag.subject === 'tone:h1')!;
     const { options } = treatmentOptions(doc, mpp, { roomId: 'recital' }, tone.id);
-    expect(options.map((option) => option.treatment.kind)).toEqual(['retune-length', 'side-branch-resonator', 'line-segment', 'change-termination']);
+    // The outlet is already open and flanged, so changing it to that is not offered.
+    expect(options.map((option) => option.treatment.kind)).toEqual(['retune-length', 'side-branch-resonator', 'line-segment']);
     const retune = options[0];
     expect(retune.clears).toBe(true);
     expect(retune.planChange).toMatchObject({ kind: 'length-override', segmentId: 'main' });

@@ -78,6 +78,20 @@ describe('treatments evaluated by re-running the engine', () => {
     expect(results[2].after.windowHz ?? 0).toBeGreaterThanOrEqual(results[2].before.windowHz ?? Infinity);
   });
 
+  it('describes segments as people count them, from 1 at the fan end, and says longer or shorter', () => {
+    const shorter = evaluateTreatment(toneInput, flag, { kind: 'retune-length', segmentIndex: 0, deltaLengthM: -0.12 });
+    expect(shorter.description).toBe('Shorten segment 1 by 120 mm');
+    const longer = evaluateTreatment(toneInput, flag, { kind: 'retune-length', segmentIndex: 1, deltaLengthM: 0.05 });
+    expect(longer.description).toBe('Lengthen segment 2 by 50 mm');
+  });
+
+  it('does not offer to change an end to the termination it already has', () => {
+    const flangedEnd = { ...toneInput, run: { ...toneInput.run, end: { kind: 'open' as const, flange: 'flanged' as const } } };
+    const kinds = candidateTreatments(flangedEnd, flag).map((result) => result.treatment.kind);
+    expect(kinds).not.toContain('change-termination');
+    expect(kinds).toContain('retune-length');
+  });
+
   it('bad treatment input throws a RangeError naming the field', () => {
     expect(() => evaluateTreatment(toneInput, flag, { kind: 'line-segment', segmentIndex: 7, thicknessM: 0.05, absorption: 0.5 })).toThrow(RangeError);
     expect(() => evaluateTreatment(toneInput, flag, { kind: 'line-segment', segmentIndex: 0, thicknessM: 0.05, absorption: 1.5 })).toThrow(/treatment.absorption must be between 0 and 1/);
