@@ -46,7 +46,15 @@ export function TreatmentOptionsPanel({ planId, version, flag, editable, onChoos
                   {option.planChange === null && <span className="block text-xs text-graphite-500">Recorded in the list; draw it on the plan yourself.</span>}
                 </td>
                 <td className="num pr-2 text-xs">{formatQuantity(option.before)} → {formatQuantity(option.after)}</td>
-                <td className="pr-2 text-xs">{option.clears ? '✓ yes' : '✗ no'}</td>
+                <td className="pr-2 text-xs">
+                  {option.clears ? '✓ yes' : '✗ no'}
+                  {option.raises.length > 0 && (
+                    <details className="mt-0.5 text-risk-ink" data-testid="treatment-raises">
+                      <summary className="cursor-pointer">but raises {option.raises.length} other flag{option.raises.length === 1 ? '' : 's'}</summary>
+                      <ul className="mt-1 space-y-1 text-graphite-700">{option.raises.map((reason) => <li key={reason}>{reason}</li>)}</ul>
+                    </details>
+                  )}
+                </td>
                 <td className="py-1">{editable && <button type="button" className="btn-quiet whitespace-nowrap px-2 py-0.5 text-xs" onClick={() => onChoose(flag, option)}>Add to plan</button>}</td>
               </tr>
             ))}

@@ -7,6 +7,7 @@ import type { RiskFlag, RiskInput } from '../risk/risk-types';
 import { applyTreatment, longestSegment } from './apply-treatment';
 import { measureFlag } from './measure-flag';
 import { quarterWaveLengthM } from './quarter-wave';
+import { raisedFlags } from './raised-flags';
 import { searchRetune } from './retune-search';
 import type { Treatment, TreatmentResult } from './treatment-types';
 
@@ -77,7 +78,9 @@ function describe(treatment: Treatment): string {
 export function evaluateTreatment(input: RiskInput, flag: RiskFlag, treatment: Treatment): TreatmentResult {
   const notes: string[] = [];
   const resolved = resolve(input, flag, treatment, notes);
-  if (resolved === null) return { treatment, description: describe(treatment), before: flag.quantity, after: flag.quantity, clears: false, notes };
-  const after = measureFlag(input, flag, applyTreatment(input.run, resolved));
-  return { treatment: resolved, description: describe(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, notes };
+  if (resolved === null) return { treatment, description: describe(treatment), before: flag.quantity, after: flag.quantity, clears: false, raises: [], notes };
+  const treatedRun = applyTreatment(input.run, resolved);
+  const after = measureFlag(input, flag, treatedRun);
+  const raises = raisedFlags(input, treatedRun).map((raised) => `${raised.severity}: ${raised.reason}`);
+  return { treatment: resolved, description: describe(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, raises, notes };
 }

@@ -20,5 +20,7 @@ export interface TreatmentResult {
   after: FlaggedQuantity;
   /** No flag of the same kind and subject remains after re-running the engine on the changed model. */
   clears: boolean;
+  /** Flags the treated model raises that the untreated one did not (or raised at a lower severity), in words. */
+  raises: string[];
   notes: string[];
 }
