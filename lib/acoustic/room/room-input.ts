@@ -1,6 +1,7 @@
 // Input shape of a room served by a duct run, and its validation (RangeError naming the field path).
 import { OCTAVE_BANDS_HZ } from '../constants';
-import { inputError, requireAbove, requireAtLeast, requireBetween, requireFinite } from '../input-error';
+import { NC_CURVES } from '../nc-curves';
+import { inputError, requireAbove, requireBetween, requireFinite } from '../input-error';
 import type { Mounting, RoomBox } from '../types';
 
 /** A point in the room, m, from the corner at the origin: x along lengthM, y along widthM, z up (heightM). */
@@ -53,7 +54,8 @@ export function validateRoomInput(room: unknown, path = 'room'): RoomInput {
     }
     bands.forEach((value, band) => requireBetween(value, 0, 1, `${path}.surfaces.${name}[${band}]`));
   }
-  requireAtLeast(candidate.criterionNc, 0, `${path}.criterionNc`);
+  // The published curves run from NC 15 to NC 70 (ANSI S12.2); between them the criterion is interpolated.
+  requireBetween(candidate.criterionNc, NC_CURVES[0].rating, NC_CURVES[NC_CURVES.length - 1].rating, `${path}.criterionNc`);
   validatePoint(candidate.outlet, candidate.box, `${path}.outlet`);
   validatePoint(candidate.listener, candidate.box, `${path}.listener`);
   if (candidate.outletMounting !== undefined && candidate.outletMounting !== 'flush' && candidate.outletMounting !== 'free') {

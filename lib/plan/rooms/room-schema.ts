@@ -1,17 +1,19 @@
 // zod schemas of rooms and chosen treatments, part of the one plan document schema.
 import { z } from 'zod';
-import { SURFACE_NAMES, type SurfaceName } from '@/lib/acoustic';
+import { NC_CURVES, SURFACE_NAMES, type SurfaceName } from '@/lib/acoustic';
 import { finite, idSchema as id, liningSchema, terminationSchema } from '../schema-parts';
 
 const OCTAVE_BAND_COUNT = 8;
 export const MAX_ROOM_SIDE_M = 200;
-export const MAX_NC = 70;
+/** The published NC curves run from NC 15 to NC 70 (ANSI S12.2); ratings between them are interpolated. */
+export const MIN_NC = NC_CURVES[0].rating;
+export const MAX_NC = NC_CURVES[NC_CURVES.length - 1].rating;
 const MAX_TEXT = 400;
 
 
 export const roomSideMSchema = finite('a room dimension').gt(0, 'must be more than 0 m').max(MAX_ROOM_SIDE_M, `must be at most ${MAX_ROOM_SIDE_M} m`);
 export const roomNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the room a name').max(120, 'must be at most 120 characters');
-export const criterionNcSchema = finite('NC').min(0, 'must be at least NC 0').max(MAX_NC, `must be at most NC ${MAX_NC}`);
+export const criterionNcSchema = finite('NC').min(MIN_NC, `must be at least NC ${MIN_NC}, the lowest published curve`).max(MAX_NC, `must be at most NC ${MAX_NC}`);
 
 const coordinateM = finite('a position').min(0, 'must be inside the room (at least 0 m)').max(MAX_ROOM_SIDE_M, `must be at most ${MAX_ROOM_SIDE_M} m`);
 export const roomPointSchema = z.object({ xM: coordinateM, yM: coordinateM, zM: coordinateM });

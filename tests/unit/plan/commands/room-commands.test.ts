@@ -29,6 +29,10 @@ describe('room commands', () => {
     expect(noNode.ok === false && noNode.error.message).toMatch(/no point with id "nowhere"/);
     const badNc = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 90 } });
     expect(badNc.ok === false && badNc.error.message).toMatch(/criterionNc.*at most NC 70/);
+    // The published NC curves start at NC 15 (ANSI S12.2): below it there is no curve to hold the room to.
+    const lowNc = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 5 } });
+    expect(lowNc.ok === false && lowNc.error.message).toMatch(/criterionNc.*at least NC 15/);
+    expect(tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 22.5 } }).ok).toBe(true);
   });
 
   it('deletes a room; deleting the point an outlet names unlinks the room', () => {
