@@ -7,7 +7,19 @@ import type { RunInput } from '../types';
 
 const RANK: Record<Severity, number> = { low: 0, medium: 1, high: 2 };
 
-export function raisedFlags(baseline: RiskInput, treatedRun: RunInput, before: readonly RiskFlag[] = assessRisks(baseline)): RiskFlag[] {
+/** The untreated model's flags, assessed once per input however many candidates are weighed against it. */
+const flagsBefore = new WeakMap<RiskInput, readonly RiskFlag[]>();
+
+function assessedOnce(baseline: RiskInput): readonly RiskFlag[] {
+  let flags = flagsBefore.get(baseline);
+  if (!flags) {
+    flags = assessRisks(baseline);
+    flagsBefore.set(baseline, flags);
+  }
+  return flags;
+}
+
+export function raisedFlags(baseline: RiskInput, treatedRun: RunInput, before: readonly RiskFlag[] = assessedOnce(baseline)): RiskFlag[] {
   const worstBefore = new Map<string, number>();
   for (const flag of before) {
     const key = `${flag.kind}|${flag.subject}`;
