@@ -80,7 +80,9 @@ export function evaluateTreatment(input: RiskInput, flag: RiskFlag, treatment: T
   const resolved = resolve(input, flag, treatment, notes);
   if (resolved === null) return { treatment, description: describe(treatment), before: flag.quantity, after: flag.quantity, clears: false, raises: [], notes };
   const treatedRun = applyTreatment(input.run, resolved);
-  const after = measureFlag(input, flag, treatedRun);
-  const raises = raisedFlags(input, treatedRun).map((raised) => `${raised.severity}: ${raised.reason}`);
+  // One engine run of the treated model serves both the flag's measurement and the flags it raises.
+  const treatedAnalysis = analyzeRun(treatedRun);
+  const after = measureFlag(input, flag, treatedRun, treatedAnalysis);
+  const raises = raisedFlags(input, treatedRun, treatedAnalysis).map((raised) => `${raised.severity}: ${raised.reason}`);
   return { treatment: resolved, description: describe(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, raises, notes };
 }

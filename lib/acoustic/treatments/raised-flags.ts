@@ -3,7 +3,7 @@
 // resonance onto a harmonic).
 import { assessRisks } from '../risk/assess-risks';
 import type { RiskFlag, RiskInput, Severity } from '../risk/risk-types';
-import type { RunInput } from '../types';
+import type { RunAnalysis, RunInput } from '../types';
 
 const RANK: Record<Severity, number> = { low: 0, medium: 1, high: 2 };
 
@@ -19,14 +19,16 @@ function assessedOnce(baseline: RiskInput): readonly RiskFlag[] {
   return flags;
 }
 
-export function raisedFlags(baseline: RiskInput, treatedRun: RunInput, before: readonly RiskFlag[] = assessedOnce(baseline)): RiskFlag[] {
+/** treatedAnalysis: the engine's analysis of treatedRun, when the caller already has it. */
+export function raisedFlags(baseline: RiskInput, treatedRun: RunInput, treatedAnalysis?: RunAnalysis): RiskFlag[] {
+  const before = assessedOnce(baseline);
   const worstBefore = new Map<string, number>();
   for (const flag of before) {
     const key = `${flag.kind}|${flag.subject}`;
     worstBefore.set(key, Math.max(worstBefore.get(key) ?? -1, RANK[flag.severity]));
   }
   const raised = new Map<string, RiskFlag>();
-  for (const flag of assessRisks({ ...baseline, run: treatedRun })) {
+  for (const flag of assessRisks({ ...baseline, run: treatedRun }, treatedAnalysis)) {
     const key = `${flag.kind}|${flag.subject}`;
     if (RANK[flag.severity] <= (worstBefore.get(key) ?? -1)) continue;
     const kept = raised.get(key);
