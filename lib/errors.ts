@@ -8,8 +8,10 @@ export const ERROR_STATUS = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  too_much_work: 422,
   throttled: 429,
   internal: 500,
+  busy: 503,
 } as const;
 export type ErrorCode = keyof typeof ERROR_STATUS;
 

@@ -7,6 +7,7 @@ import { Membership } from './membership';
 import { NotificationSetting } from './notification-setting';
 import { PasswordReset } from './password-reset';
 import { Plan } from './plan';
+import { PlanAnalysisRow } from './plan-analysis';
 import { PlanActivity } from './plan-activity';
 import { Project } from './project';
 import { ReviewDecision } from './review-decision';
@@ -70,6 +71,8 @@ NotificationSetting.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Plan.hasMany(PlanActivity, { foreignKey: 'planId', as: 'activities' });
 PlanActivity.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 PlanActivity.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+Plan.hasMany(PlanAnalysisRow, { foreignKey: 'planId', as: 'analyses' });
+PlanAnalysisRow.belongsTo(Plan, { foreignKey: 'planId', as: 'plan' });
 
 export { AuditEvent, BillingEvent, Invitation, Membership, PasswordReset, Plan, Project, Session, SignInThrottle, Team, TeamBilling, Upload, User };
-export { Comment, NotificationSetting, PlanActivity, ReviewDecision, Revision, Schedule };
+export { Comment, NotificationSetting, PlanActivity, PlanAnalysisRow, ReviewDecision, Revision, Schedule };

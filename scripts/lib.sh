@@ -206,8 +206,14 @@ ensure_pdftoppm() {
   if ! command -v pdftoppm >/dev/null; then apt_install poppler-utils; fi
 }
 
+# The compute pool's worker thread, bundled into .compute/worker.mjs (lib/compute/).
+build_compute_worker() {
+  node node_modules/tsx/dist/cli.mjs scripts/build-worker.ts >/dev/null || fail "the compute worker did not build" "read the error above"
+}
+
 # next build into $ANTINODE_DIST_DIR (default .next), its output kept in .data/<log name>.
 build_app() {
   local log="$DATA_DIR/$1"
+  build_compute_worker
   node node_modules/next/dist/bin/next build >"$log" 2>&1 || { tail -n 40 "$log" >&2; fail "the build failed (full log in .data/$1)"; }
 }

@@ -148,7 +148,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
         </nav>
         {editable ? <SaveStatusLabel status={model.saveStatus} version={model.version} /> : <span className="rounded bg-paper-sunk px-2 py-0.5 text-xs">Read only</span>}
-        <PlanRevisionActions planId={plan.id} latest={revisions.latest} planVersion={model.version} canSubmit={revisions.canSubmit && model.saveStatus === 'saved'} canIssue={revisions.canIssue} />
+        <PlanRevisionActions planId={plan.id} latest={revisions.latest} planVersion={model.version} contentHash={model.saveStatus === 'saved' && results.data?.version === model.version ? results.data.contentHash : null} canSubmit={revisions.canSubmit && model.saveStatus === 'saved'} canIssue={revisions.canIssue} />
         <div className="ml-auto flex items-center gap-2">
           {editable && (
             <>

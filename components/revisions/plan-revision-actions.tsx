@@ -13,8 +13,10 @@ export interface PlanRevisionActionsProps {
   planId: string;
   // The newest revision, if any (lib/revisions/data.ts latestRevision), and the plan's saved
   // version: when they differ the drawing is a draft, never shown as approved.
-  latest: Pick<RevisionSummary, 'number' | 'state' | 'planVersion'> | null;
+  latest: Pick<RevisionSummary, 'number' | 'state' | 'planVersion' | 'contentHash'> | null;
   planVersion: number;
+  // The saved plan's content hash, when known: equal content counts as unchanged, however it got there.
+  contentHash?: string | null;
   canSubmit: boolean;
   canIssue: boolean;
   // Off on the revision list itself.
@@ -24,7 +26,7 @@ export interface PlanRevisionActionsProps {
 }
 
 // The plan header's revision actions: submit for review, the revision list, issue schedule.
-export function PlanRevisionActions({ planId, latest, planVersion, canSubmit, canIssue, showListLink = true, onSubmitted }: PlanRevisionActionsProps) {
+export function PlanRevisionActions({ planId, latest, planVersion, contentHash = null, canSubmit, canIssue, showListLink = true, onSubmitted }: PlanRevisionActionsProps) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [note, setNote] = useState('');
@@ -48,7 +50,7 @@ export function PlanRevisionActions({ planId, latest, planVersion, canSubmit, ca
       <span className="flex items-center gap-2 self-center text-sm" data-testid="plan-revision-state">
         {latest === null ? (
           <span className="text-graphite-500">Draft, never submitted</span>
-        ) : latest.planVersion === planVersion ? (
+        ) : latest.planVersion === planVersion || (contentHash !== null && latest.contentHash === contentHash) ? (
           <>Revision {latest.number} <RevisionStateBadge state={latest.state} /></>
         ) : (
           <span className="text-graphite-500">Draft: changed since revision {latest.number}</span>

@@ -66,9 +66,10 @@ export { A_WEIGHTING_OCTAVE_DB } from './constants';
 // Risks and treatments
 export { assessRisks } from './risk/assess-risks';
 export type { RiskInput, RiskOptions, FanInput, RiskFlag, RiskKind, Severity, FlaggedQuantity } from './risk/risk-types';
-export { evaluateTreatment } from './treatments/evaluate-treatment';
+export { evaluateTreatment, describeTreatment, type TreatmentNames } from './treatments/evaluate-treatment';
 export { candidateTreatments } from './treatments/candidate-treatments';
 export { applyTreatment } from './treatments/apply-treatment';
 export { quarterWaveLengthM } from './treatments/quarter-wave';
+export { measureFlag } from './treatments/measure-flag';
 export { branchMouthCorrectionM } from './tee-junction';
 export type { Treatment, TreatmentResult } from './treatments/treatment-types';

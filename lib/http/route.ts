@@ -7,6 +7,7 @@ import { assertMayAct } from '@/lib/auth/may-act';
 import { AppError, notSignedIn } from '@/lib/errors';
 import type { Action } from '@/lib/permissions';
 import { zodToAppError } from '@/lib/validation';
+import { consumeRateLimit, type RateLimitName } from './rate-limit';
 
 export type Access = 'public' | 'signed-in' | Action;
 
@@ -19,7 +20,7 @@ export interface RouteContext<Params> {
   readJson: <T extends z.ZodType>(schema: T) => Promise<z.infer<T>>;
 }
 
-export interface RouteOptions { access: Access; maxBodyBytes?: number }
+export interface RouteOptions { access: Access; maxBodyBytes?: number; rateLimit?: RateLimitName }
 
 export type RouteHandler = ((request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>) & {
   access: Access;
@@ -93,6 +94,7 @@ export function route<Params extends Record<string, string> = Record<string, nev
       } else if (options.access === 'public') {
         team = null;
       }
+      if (options.rateLimit && actor) await consumeRateLimit(options.rateLimit, actor.user.id);
       const params = ((await context?.params) ?? {}) as Params;
       const maxBytes = options.maxBodyBytes ?? DEFAULT_MAX_BODY_BYTES;
       const response = await handler({ request, params, actor, team, readJson: (schema) => readBody(request, schema, maxBytes) });

@@ -19,6 +19,8 @@ export interface PlanSegment {
   readonly lining?: Lining | null;
   /** When set, the segment's length instead of the drawn one (schematic drawings). */
   readonly lengthOverrideM?: number | null;
+  /** Stable number within its run, shown as the run letter and this number ("A3"); set by normalize. */
+  readonly number?: number;
 }
 
 export interface Fan {
@@ -29,6 +31,8 @@ export interface Fan {
 export interface PlanRun {
   readonly id: string;
   readonly name: string;
+  /** Stable letter of the run ("A"), the first part of every segment label; set by normalize. */
+  readonly letter?: string;
   readonly startNodeId: string;
   /** The leaf chosen as the run's end for results; null: the farthest leaf from the start. */
   readonly endNodeId: string | null;

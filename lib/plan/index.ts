@@ -17,3 +17,4 @@ export * from './units';
 export * from './schedule-csv';
 export * from './rooms';
 export { drawnArea, type PlanArea } from './drawn-area';
+export * from './labels';

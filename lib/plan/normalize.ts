@@ -1,10 +1,12 @@
 // Keeps a document consistent after an edit: no dangling segments or lone nodes, one run per
 // drawn tree (a tree without a run gets one), terminations exactly at each run's start and leaves,
-// the chosen end a leaf, and the editor selection pointing at things that exist.
+// the chosen end a leaf, every run lettered and every segment numbered (labels/), and the editor
+// selection pointing at things that exist.
 import { DEFAULT_END_TERMINATION, DEFAULT_START_TERMINATION, DEFAULT_TEMPERATURE_C, type PlanDocument, type PlanRun, type Termination } from './document';
 import type { EditorState } from './editor-state';
 import { buildAdjacency, componentOf, components, degreeIn, type Adjacency, type Component } from './graph';
 import type { IdGenerator } from './ids';
+import { assignLabels } from './labels/assign';
 
 /** "Run N" with the lowest N not already taken. */
 export function nextRunName(runs: readonly PlanRun[]): string {
@@ -71,7 +73,7 @@ export function normalizeDocument(input: PlanDocument, newId: IdGenerator): Plan
     const endValid = run.endNodeId !== null && run.endNodeId !== run.startNodeId && component.nodeIds.has(run.endNodeId) && degreeIn(adjacency, run.endNodeId) === 1;
     return { ...run, endNodeId: endValid ? run.endNodeId : null, terminations };
   });
-  return { ...doc, runs, rooms: unlinkMissingOutlets(doc) };
+  return assignLabels({ ...doc, runs, rooms: unlinkMissingOutlets(doc) });
 }
 
 /** A room whose outlet point was deleted keeps its place in the room but feeds from no run. */

@@ -53,3 +53,9 @@ export const fanSchema = z.object({
 });
 
 export const lengthOverrideMSchema = finite('length').gt(0, 'must be more than 0 m').max(100000, 'must be at most 100 km');
+
+/** A segment's stable number within its run (the "3" of "A3"). */
+export const segmentNumberSchema = z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(MAX_ITEMS, `must be at most ${MAX_ITEMS}`);
+
+/** A run's stable letter ("A", … "Z", "AA", …). */
+export const runLetterSchema = z.string({ error: 'must be text' }).regex(/^[A-Z]{1,3}$/, 'must be one to three capital letters');

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import type { PlanDocument } from './document';
 import { planTreatmentSchema, roomSchema } from './rooms/room-schema';
-import { fanSchema, finite, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, sectionSchema, temperatureCSchema, terminationSchema } from './schema-parts';
+import { fanSchema, finite, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, runLetterSchema, sectionSchema, segmentNumberSchema, temperatureCSchema, terminationSchema } from './schema-parts';
 
 export * from './schema-parts';
 
@@ -15,6 +15,7 @@ const segmentSchema = z.object({
   section: sectionSchema,
   lining: liningSchema.nullable().optional(),
   lengthOverrideM: lengthOverrideMSchema.nullable().optional(),
+  number: segmentNumberSchema.optional(),
 });
 
 export const runNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the run a name').max(120, 'must be at most 120 characters');
@@ -22,6 +23,7 @@ export const runNameSchema = z.string({ error: 'must be text' }).trim().min(1, '
 const runSchema = z.object({
   id: idSchema,
   name: runNameSchema,
+  letter: runLetterSchema.optional(),
   startNodeId: idSchema,
   endNodeId: idSchema.nullable(),
   temperatureC: temperatureCSchema,

@@ -1,10 +1,12 @@
 // Risk flags across the plan, computed from the document: every room with the run that feeds it,
 // and every run with a fan that feeds no room. Each entry carries what the room charts need.
 import {
-  analyzeRoom, analyzeRun, assessRisks, bladePassHarmonicsHz, ncCriterionCurveDb, ncRating, outletLevels,
-  type OutletLevelBand, type RiskFlag, type RoomAnalysis,
+  analyzeRoom, assessRisks, bladePassHarmonicsHz, ncCriterionCurveDb, ncRating, outletLevels,
+  type OutletLevelBand, type RiskFlag, type RoomAnalysis, type RunAnalysis,
 } from '@/lib/acoustic';
+import { PlanError } from '@/lib/plan/errors';
 import type { PlanDocument } from '@/lib/plan/document';
+import { analysePlan, type RunResult } from './results';
 import { RISK_OPTIONS, riskContext, type RiskContext } from './risk-context';
 
 /** Fan harmonics drawn on the room's mode chart (the flags check the engine's default, 3). */
@@ -60,16 +62,31 @@ function problemOf(error: unknown): string {
   throw error;
 }
 
-function roomResult(doc: PlanDocument, metresPerPixel: number, room: PlanDocument['rooms'][number]): { result: RoomResult; flags: PlacedFlag[] } {
+/** The run's one analysis (from its results), or the reason it has none. */
+function analysisOf(runs: ReadonlyMap<string, RunResult>, runId: string): RunAnalysis {
+  const result = runs.get(runId);
+  if (!result?.analysis) throw new PlanError(result?.problem ?? 'The run feeding it cannot be analysed.', { runId });
+  return result.analysis;
+}
+
+/** Level flags and band levels at the listener: the path to the outlet against the baseline the power was given for. */
+function levelsAt(context: RiskContext, runAnalysis: RunAnalysis): { flags: RiskFlag[]; levels: OutletLevelBand[] | null } {
+  if (!context.level) return { flags: [], levels: null };
+  const { input } = context.level;
+  const flags = assessRisks(input, runAnalysis).filter((flag) => flag.kind === 'level-above-criterion');
+  return { flags, levels: outletLevels(input.run, input.room!, input.outletSoundPowerDb!, input.baselineRun) };
+}
+
+function roomResult(doc: PlanDocument, metresPerPixel: number, runs: ReadonlyMap<string, RunResult>, room: PlanDocument['rooms'][number]): { result: RoomResult; flags: PlacedFlag[] } {
   const empty: RoomResult = { roomId: room.id, name: room.name, runId: null, problem: null, analysis: null, resonancesHz: [], fanTonesHz: [], criterionNc: room.criterionNc, criterionDb: ncCriterionCurveDb(room.criterionNc), levels: null, levelsNc: null };
   try {
     const context = riskContext(doc, metresPerPixel, { roomId: room.id });
-    const runAnalysis = analyzeRun(context.input.run);
+    const runAnalysis = analysisOf(runs, context.run.id);
     const roomInput = context.input.room!;
     // modes to twice the Schroeder frequency (the engine's default): above it they overlap
     const analysis = analyzeRoom(roomInput);
-    const flags = assessRisks(context.input, runAnalysis).filter((flag) => isDistinctMode(flag, analysis.schroederHz));
-    const levels = context.input.outletSoundPowerDb ? outletLevels(context.input.run, roomInput, context.input.outletSoundPowerDb) : null;
+    const resonanceFlags = assessRisks(context.input, runAnalysis).filter((flag) => isDistinctMode(flag, analysis.schroederHz));
+    const { flags: levelFlags, levels } = levelsAt(context, runAnalysis);
     const fan = context.input.fan;
     return {
       result: {
@@ -81,22 +98,24 @@ function roomResult(doc: PlanDocument, metresPerPixel: number, room: PlanDocumen
         levels,
         levelsNc: levels ? ncRating(levels.map((band) => band.levelDb)) : null,
       },
-      flags: place(flags, context),
+      flags: place([...resonanceFlags, ...levelFlags], context),
     };
   } catch (error) {
     return { result: { ...empty, problem: problemOf(error) }, flags: [] };
   }
 }
 
-export function planRisks(doc: PlanDocument, metresPerPixel: number): PlanRisks {
-  const rooms = doc.rooms.map((room) => roomResult(doc, metresPerPixel, room));
+/** Every room's results and every flag of the plan; runs: the plan's run results when already computed. */
+export function planRisks(doc: PlanDocument, metresPerPixel: number, runResults: readonly RunResult[] = analysePlan(doc, metresPerPixel)): PlanRisks {
+  const runs = new Map(runResults.map((result) => [result.runId, result]));
+  const rooms = doc.rooms.map((room) => roomResult(doc, metresPerPixel, runs, room));
   const fedRunIds = new Set(rooms.map((entry) => entry.result.runId).filter((runId): runId is string => runId !== null));
   const runFlags = doc.runs
     .filter((run) => run.fan !== null && !fedRunIds.has(run.id))
     .flatMap((run) => {
       try {
         const context = riskContext(doc, metresPerPixel, { runId: run.id });
-        return place(assessRisks(context.input), context);
+        return place(assessRisks(context.input, analysisOf(runs, run.id)), context);
       } catch (error) {
         problemOf(error);
         return [];

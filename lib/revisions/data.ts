@@ -3,7 +3,9 @@ import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
 import { planDocumentSchema } from '@/lib/plan/schema';
 import { getPlan } from '@/lib/plans/data';
-import { analysePlan, type RunResult } from '@/lib/plans/results';
+import { contentHash } from '@/lib/plans/analysis/content-hash';
+import { planAnalysisOf } from '@/lib/plans/analysis/store';
+import type { RunResult } from '@/lib/plans/results';
 import { assertId } from '@/lib/team/ids';
 import { Plan, Project, Revision, Upload } from '@/models';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
@@ -19,6 +21,7 @@ function stateOf(row: Revision): RevisionState {
 export function toRevisionSummary(row: Revision): RevisionSummary {
   return {
     id: row.id, planId: row.planId, number: row.number, planVersion: row.planVersion, state: stateOf(row), note: row.note,
+    contentHash: row.document ? contentHash(planDocumentSchema.parse(row.document), row.metresPerPixel) : null,
     submittedByName: row.submittedByName, reviewedByName: row.reviewedByName, reviewedAt: row.reviewedAt?.toISOString() ?? null,
     createdAt: row.createdAt.toISOString(),
   };
@@ -30,8 +33,9 @@ export async function submitRevision(teamId: string, actor: ActivityActor, planI
   if (plan.document.runs.length === 0) {
     throw new AppError('bad_input', 'This plan has no duct run yet. Draw at least one run before submitting it for review.');
   }
-  const analysis = analysePlan(plan.document, plan.metresPerPixel);
-  const extras = freezeExtras(plan.document, plan.metresPerPixel);
+  const planAnalysis = await planAnalysisOf(plan);
+  const analysis = planAnalysis.runs;
+  const extras = freezeExtras(plan.document, planAnalysis);
   return sequelize.transaction(async (transaction) => {
     // One submission at a time per plan, so numbers never collide.
     await Plan.findOne({ where: { id: planId }, transaction, lock: transaction.LOCK.UPDATE });
@@ -97,6 +101,6 @@ export async function previousRevision(teamId: string, planId: string, number: n
 // The newest revision of a plan (for the plan header), or null before the first submission.
 export async function latestRevision(teamId: string, planId: string): Promise<RevisionSummary | null> {
   assertId(planId, 'That plan');
-  const row = await Revision.findOne({ where: { teamId, planId }, attributes: { exclude: ['document', 'analysis', 'extras'] }, order: [['number', 'DESC']] });
+  const row = await Revision.findOne({ where: { teamId, planId }, attributes: { exclude: ['analysis', 'extras'] }, order: [['number', 'DESC']] });
   return row ? toRevisionSummary(row) : null;
 }

@@ -1,8 +1,8 @@
-// Rooms, risk flags and chosen treatments of a plan, as plain rows frozen into a revision
-// (computed from the document by lib/plans/risks.ts; absent when the plan has none).
+// Rooms, risk flags, labels and chosen treatments (with how each stands) of a plan version, as plain
+// rows frozen into a revision from the version's one analysis (absent when the plan has none).
 import type { FlaggedQuantity } from '@/lib/acoustic';
 import type { PlanDocument } from '@/lib/plan/document';
-import { planRisks } from '@/lib/plans/risks';
+import type { PlanAnalysis } from '@/lib/plans/analysis/types';
 import type { RevisionExtras, RoomRow } from './types';
 
 const KIND_WORDS: Record<string, string> = {
@@ -17,10 +17,10 @@ export function quantityText(quantity: FlaggedQuantity): string {
   return '—';
 }
 
-export function freezeExtras(document: PlanDocument, metresPerPixel: number): RevisionExtras {
-  const extras: { -readonly [K in keyof RevisionExtras]: RevisionExtras[K] } = {};
+export function freezeExtras(document: PlanDocument, analysis: PlanAnalysis): RevisionExtras {
+  const extras: { -readonly [K in keyof RevisionExtras]: RevisionExtras[K] } = { labels: analysis.labels, contentHash: analysis.contentHash };
   if (document.rooms.length > 0 || document.runs.some((run) => run.fan)) {
-    const risks = planRisks(document, metresPerPixel);
+    const risks = analysis.risks;
     if (risks.rooms.length > 0) {
       extras.rooms = risks.rooms.map((room): RoomRow => ({
         id: room.roomId, name: room.name, problem: room.problem,
@@ -35,10 +35,18 @@ export function freezeExtras(document: PlanDocument, metresPerPixel: number): Re
     }
   }
   if ((document.treatments ?? []).length > 0) {
-    extras.treatments = (document.treatments ?? []).map((treatment) => ({
-      id: treatment.id, riskId: treatment.flagId, kind: treatment.treatment.kind, label: treatment.description,
-      before: quantityText(treatment.before), after: quantityText(treatment.after), clears: treatment.clears,
-    }));
+    const checks = new Map(analysis.treatments.map((check) => [check.treatmentId, check]));
+    extras.treatments = (document.treatments ?? []).map((treatment) => {
+      const check = checks.get(treatment.id);
+      const current = analysis.risks.flags.find((flag) => flag.kind === treatment.flagKind && flag.subject === treatment.flagSubject && flag.runId === treatment.runId && flag.roomId === treatment.roomId);
+      return {
+        id: treatment.id, riskId: current?.id ?? treatment.flagId, kind: treatment.treatment.kind, label: treatment.description,
+        before: quantityText(check?.before ?? treatment.before), after: quantityText(check?.after ?? treatment.after),
+        clears: check ? check.standing === 'holds' && current === undefined : treatment.clears,
+        standing: check?.standing ?? 'holds', standingText: check?.message ?? '',
+      };
+    });
   }
   return extras;
 }
+

@@ -1,18 +1,24 @@
 // What a frozen revision holds, as read back by pages, routes and the schedule.
 import type { PlanDocument } from '@/lib/plan/document';
+import type { PlanLabels } from '@/lib/plan/labels';
+import type { TreatmentStanding } from '@/lib/plans/analysis/types';
 import type { RunResult } from '@/lib/plans/results';
 import type { RevisionState } from './states';
 
 // Rooms, risk flags and treatments as they were when the revision was frozen (each present
 // only when the plan had them).
 export interface RevisionExtras {
+  /** The stable labels of the frozen plan (absent in revisions frozen before labels existed). */
+  labels?: PlanLabels;
+  /** The frozen content's hash: a draft whose content hashes the same is unchanged since. */
+  contentHash?: string;
   rooms?: readonly RoomRow[];
   risks?: readonly RiskRow[];
   treatments?: readonly TreatmentRow[];
 }
 
 export interface RiskRow { id: string; runId: string | null; label: string; detail: string; severity: string }
-export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; before: string; after: string; clears: boolean }
+export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; before: string; after: string; clears: boolean; standing?: TreatmentStanding; standingText?: string }
 export interface RoomRow { id: string; name: string; problem: string | null; summary: string }
 
 export interface RevisionSummary {
@@ -20,6 +26,8 @@ export interface RevisionSummary {
   planId: string;
   number: number;
   planVersion: number;
+  /** The frozen content's hash (null where the summary was read without the document). */
+  contentHash: string | null;
   state: RevisionState;
   note: string;
   submittedByName: string;

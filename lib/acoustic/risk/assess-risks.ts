@@ -100,7 +100,7 @@ function roomModeFlags(input: RiskInput, analysis: RunAnalysis, percent: number,
 
 function levelFlags(input: RiskInput): RiskFlag[] {
   if (!input.room || !input.outletSoundPowerDb) return [];
-  return outletLevels(input.run, input.room, input.outletSoundPowerDb)
+  return outletLevels(input.run, input.room, input.outletSoundPowerDb, input.baselineRun ?? input.run)
     .filter((band) => band.levelDb > band.criterionDb)
     .map((band) => {
       const excessDb = band.levelDb - band.criterionDb;

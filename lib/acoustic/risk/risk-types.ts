@@ -22,6 +22,8 @@ export interface RiskInput {
   room?: RoomInput;
   /** Sound power arriving at the outlet through the run as given, octave bands 63 Hz to 8 kHz, dB re 1 pW. */
   outletSoundPowerDb?: number[];
+  /** The run the outlet sound power was given for (default: run); a run changed since adds the change of its path attenuation. */
+  baselineRun?: RunInput;
   options?: RiskOptions;
 }
 

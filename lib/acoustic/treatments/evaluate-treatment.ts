@@ -10,6 +10,7 @@ import { quarterWaveLengthM } from './quarter-wave';
 import { raisedFlags } from './raised-flags';
 import { searchRetune } from './retune-search';
 import type { Treatment, TreatmentResult } from './treatment-types';
+import type { Termination } from '../types';
 
 /** Default resonator bore: half the host segment's equivalent diameter (product rule). */
 const RESONATOR_BORE_FRACTION = 0.5;
@@ -59,30 +60,40 @@ function resolve(input: RiskInput, flag: RiskFlag, treatment: Treatment, notes: 
   return treatment;
 }
 
-/** Segments are numbered for people from 1 at the fan end, as in the section tables. */
-const segmentName = (index: number): string => `segment ${index + 1}`;
+/** How a treatment names main-path segments and run ends; the plan supplies its own stable labels. */
+export interface TreatmentNames {
+  segment(index: number): string;
+  end(end: 'start' | 'end'): string;
+}
 
-function describe(treatment: Treatment): string {
+/** Segments are numbered for people from 1 at the fan end, as in the section tables. */
+const PLAIN_NAMES: TreatmentNames = { segment: (index) => `segment ${index + 1}`, end: (end) => `the ${end} termination` };
+
+function terminationWords(termination: Termination): string {
+  return `${termination.kind}${termination.kind === 'open' ? ` (${termination.flange})` : ''}`;
+}
+
+export function describeTreatment(treatment: Treatment, names: TreatmentNames = PLAIN_NAMES): string {
   switch (treatment.kind) {
     case 'line-segment':
-      return `Line ${segmentName(treatment.segmentIndex)}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm, absorption ${treatment.absorption})`;
+      return `Line ${names.segment(treatment.segmentIndex)}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm, absorption ${treatment.absorption})`;
     case 'change-termination':
-      return `Change the ${treatment.end} termination to ${treatment.termination.kind}${treatment.termination.kind === 'open' ? ` (${treatment.termination.flange})` : ''}`;
+      return `Change ${names.end(treatment.end)} to ${terminationWords(treatment.termination)}`;
     case 'retune-length':
-      return `${(treatment.deltaLengthM ?? 0) < 0 ? 'Shorten' : 'Lengthen'} ${segmentName(treatment.segmentIndex ?? 0)} by ${(Math.abs(treatment.deltaLengthM ?? 0) * 1000).toFixed(0)} mm`;
+      return `${(treatment.deltaLengthM ?? 0) < 0 ? 'Shorten' : 'Lengthen'} ${names.segment(treatment.segmentIndex ?? 0)} by ${(Math.abs(treatment.deltaLengthM ?? 0) * 1000).toFixed(0)} mm`;
     case 'side-branch-resonator':
-      return `Add a closed quarter-wave side branch at ${segmentName(treatment.segmentIndex ?? 0)}: ${(treatment.lengthM ?? 0).toFixed(3)} m long, ${((treatment.diameterM ?? 0) * 1000).toFixed(0)} mm bore, tuned to ${(treatment.tuneHz ?? 0).toFixed(1)} Hz`;
+      return `Add a closed quarter-wave side branch at ${names.segment(treatment.segmentIndex ?? 0)}: ${(treatment.lengthM ?? 0).toFixed(3)} m long, ${((treatment.diameterM ?? 0) * 1000).toFixed(0)} mm bore, tuned to ${(treatment.tuneHz ?? 0).toFixed(1)} Hz`;
   }
 }
 
 export function evaluateTreatment(input: RiskInput, flag: RiskFlag, treatment: Treatment): TreatmentResult {
   const notes: string[] = [];
   const resolved = resolve(input, flag, treatment, notes);
-  if (resolved === null) return { treatment, description: describe(treatment), before: flag.quantity, after: flag.quantity, clears: false, raises: [], notes };
+  if (resolved === null) return { treatment, description: describeTreatment(treatment), before: flag.quantity, after: flag.quantity, clears: false, raises: [], notes };
   const treatedRun = applyTreatment(input.run, resolved);
   // One engine run of the treated model serves both the flag's measurement and the flags it raises.
   const treatedAnalysis = analyzeRun(treatedRun);
   const after = measureFlag(input, flag, treatedRun, treatedAnalysis);
   const raises = raisedFlags(input, treatedRun, treatedAnalysis).map((raised) => `${raised.severity}: ${raised.reason}`);
-  return { treatment: resolved, description: describe(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, raises, notes };
+  return { treatment: resolved, description: describeTreatment(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, raises, notes };
 }

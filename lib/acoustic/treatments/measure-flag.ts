@@ -3,7 +3,7 @@ import { analyzeRun } from '../analyze-run';
 import { coincidenceWindowHz, nearestResonance } from '../risk/coincidence';
 import { assessRisks } from '../risk/assess-risks';
 import type { FlaggedQuantity, RiskFlag, RiskInput } from '../risk/risk-types';
-import { outletLevels, pathAttenuationDb } from '../room/outlet-level';
+import { outletLevels } from '../room/outlet-level';
 import { DEFAULT_COINCIDENCE_PERCENT } from '../constants';
 import type { RunAnalysis, RunInput } from '../types';
 
@@ -18,10 +18,11 @@ export function measureFlag(baseline: RiskInput, flag: RiskFlag, run: RunInput, 
   const stillFlagged = (): boolean => assessRisks(input, analysis).some((other) => other.kind === flag.kind && other.subject === flag.subject);
   if (flag.kind === 'level-above-criterion') {
     if (!baseline.room || !baseline.outletSoundPowerDb) return { quantity: flag.quantity, clears: false };
-    const band = outletLevels(run, baseline.room, baseline.outletSoundPowerDb, baseline.run).find((level) => level.hz === flag.targetHz);
+    const baselineRun = baseline.baselineRun ?? baseline.run;
+    const band = outletLevels(run, baseline.room, baseline.outletSoundPowerDb, baselineRun).find((level) => level.hz === flag.targetHz);
     const quantity = { levelDb: band?.levelDb, criterionDb: band?.criterionDb };
     // the level flag depends on the re-computed level with the treated path and outlet
-    const clears = !assessRisks({ ...input, outletSoundPowerDb: shiftedPower(baseline, run) }, analysis).some((other) => other.kind === flag.kind && other.subject === flag.subject);
+    const clears = !assessRisks({ ...input, baselineRun }, analysis).some((other) => other.kind === flag.kind && other.subject === flag.subject);
     return { quantity, clears };
   }
   const resonance = nearestResonance(analysis.resonances, flag.targetHz);
@@ -35,12 +36,4 @@ export function measureFlag(baseline: RiskInput, flag: RiskFlag, run: RunInput, 
     },
     clears: !stillFlagged(),
   };
-}
-
-/** outletSoundPowerDb as seen through the treated run: less the added path attenuation. */
-function shiftedPower(baseline: RiskInput, run: RunInput): number[] | undefined {
-  if (!baseline.outletSoundPowerDb) return undefined;
-  const before = pathAttenuationDb(baseline.run);
-  const after = pathAttenuationDb(run);
-  return baseline.outletSoundPowerDb.map((levelDb, band) => levelDb - (after[band] - before[band]));
 }

@@ -72,6 +72,13 @@ export const planChangeSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('termination'), nodeId: id, termination: terminationSchema }),
 ]);
 
+/** What the element held before a treatment changed it, so removing the treatment can put it back. */
+export const planChangePreviousSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('length-override'), segmentId: id, lengthM: positive('length').nullable() }),
+  z.object({ kind: z.literal('lining'), segmentId: id, lining: liningSchema.nullable() }),
+  z.object({ kind: z.literal('termination'), nodeId: id, termination: terminationSchema }),
+]);
+
 export const planTreatmentSchema = z.object({
   id,
   runId: id,
@@ -86,4 +93,6 @@ export const planTreatmentSchema = z.object({
   after: quantitySchema,
   clears: z.boolean(),
   planChange: planChangeSchema.nullable(),
+  /** Set when the treatment was added (absent in lists saved before removal could revert). */
+  previous: planChangePreviousSchema.nullable().optional(),
 });

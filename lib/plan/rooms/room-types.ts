@@ -49,6 +49,12 @@ export type PlanChange =
   | { readonly kind: 'lining'; readonly segmentId: string; readonly lining: Lining }
   | { readonly kind: 'termination'; readonly nodeId: string; readonly termination: Termination };
 
+/** What the changed element held before: null for a segment without a length override or lining. */
+export type PlanChangePrevious =
+  | { readonly kind: 'length-override'; readonly segmentId: string; readonly lengthM: number | null }
+  | { readonly kind: 'lining'; readonly segmentId: string; readonly lining: Lining | null }
+  | { readonly kind: 'termination'; readonly nodeId: string; readonly termination: Termination };
+
 /** A treatment the acoustician chose for a flag, with the engine's before and after. */
 export interface PlanTreatment {
   readonly id: string;
@@ -64,4 +70,6 @@ export interface PlanTreatment {
   readonly after: FlaggedQuantity;
   readonly clears: boolean;
   readonly planChange: PlanChange | null;
+  /** What the element held before the change, for removing the treatment exactly (absent in older lists). */
+  readonly previous?: PlanChangePrevious | null;
 }

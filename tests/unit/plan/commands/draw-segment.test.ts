@@ -6,8 +6,8 @@ describe('draw-segment', () => {
   it('from empty space to empty space creates a run: Ø 250 mm, closed start, open unflanged end, 20 °C', () => {
     const { doc, state } = performCommand('draw-segment', emptyDocument(), initialEditorState(), { from: { point: { x: 0, y: 0 } }, to: { point: { x: 50, y: 0 } } }, sequentialIds('n'));
     expect(doc.nodes).toEqual([{ id: 'n1', x: 0, y: 0 }, { id: 'n2', x: 50, y: 0 }]);
-    expect(doc.segments).toEqual([{ id: 'n3', from: 'n1', to: 'n2', section: { shape: 'round', diameterM: 0.25 } }]);
-    expect(doc.runs).toEqual([{ id: 'n4', name: 'Run 1', startNodeId: 'n1', endNodeId: null, temperatureC: 20, fan: null, terminations: { n1: { kind: 'closed' }, n2: { kind: 'open', flange: 'unflanged' } } }]);
+    expect(doc.segments).toEqual([{ id: 'n3', from: 'n1', to: 'n2', section: { shape: 'round', diameterM: 0.25 }, number: 1 }]);
+    expect(doc.runs).toEqual([{ id: 'n4', name: 'Run 1', letter: 'A', startNodeId: 'n1', endNodeId: null, temperatureC: 20, fan: null, terminations: { n1: { kind: 'closed' }, n2: { kind: 'open', flange: 'unflanged' } } }]);
     expect(state).toEqual({ selection: { nodeIds: [], segmentIds: ['n3'] }, activeRunId: 'n4' });
   });
 

@@ -21,8 +21,8 @@ describe('split-segment', () => {
     const { doc, state } = performCommand('split-segment', result.doc, result.state, { segmentId, at: { x: 25, y: 6 } }, sequentialIds('s'));
     expect(doc.nodes.at(-1)).toEqual({ id: 's1', x: 25, y: 0 });
     expect(doc.segments).toEqual([
-      { id: segmentId, from: chain.nodeIds[0], to: 's1', section: { shape: 'round', diameterM: 0.25 }, lining: { thicknessM: 0.05, absorption: 0.8 }, lengthOverrideM: 2.5 },
-      { id: 's2', from: 's1', to: chain.nodeIds[1], section: { shape: 'round', diameterM: 0.25 }, lining: { thicknessM: 0.05, absorption: 0.8 }, lengthOverrideM: 7.5 },
+      { id: segmentId, from: chain.nodeIds[0], to: 's1', section: { shape: 'round', diameterM: 0.25 }, lining: { thicknessM: 0.05, absorption: 0.8 }, lengthOverrideM: 2.5, number: 1 },
+      { id: 's2', from: 's1', to: chain.nodeIds[1], section: { shape: 'round', diameterM: 0.25 }, lining: { thicknessM: 0.05, absorption: 0.8 }, lengthOverrideM: 7.5, number: 2 },
     ]);
     expect(state.selection).toEqual({ nodeIds: ['s1'], segmentIds: [] });
     expect(validateRunTree(doc, doc.runs[0].id)).toEqual([]);

@@ -59,15 +59,27 @@ describe('treatment list commands', () => {
     planChange: { kind: 'length-override', segmentId: 'main', lengthM: 3.13 },
   };
 
-  it('adds a chosen treatment to the list and applies its length change to the segment', () => {
-    const { doc } = performCommand('add-treatment', roomPlanDocument(), state, { treatment: chosen }, sequentialIds('t'));
+  it('adds a chosen treatment to the list and applies its length change to the segment; removing it puts the old length back', () => {
+    const before = roomPlanDocument();
+    const { doc } = performCommand('add-treatment', before, state, { treatment: chosen }, sequentialIds('t'));
     expect(doc.treatments).toHaveLength(1);
     expect(doc.treatments?.[0]).toMatchObject({ id: 't1', clears: true });
     expect(doc.segments.find((segment) => segment.id === 'main')?.lengthOverrideM).toBe(3.13);
     expect(parsePlanDocument(doc).ok).toBe(true);
     const removed = performCommand('remove-treatment', doc, state, { treatmentId: 't1' });
     expect(removed.doc.treatments).toHaveLength(0);
-    expect(removed.doc.segments.find((segment) => segment.id === 'main')?.lengthOverrideM).toBe(3.13);
+    expect(removed.doc.segments.find((segment) => segment.id === 'main')?.lengthOverrideM ?? null).toBe(before.segments.find((segment) => segment.id === 'main')?.lengthOverrideM ?? null);
+  });
+
+  it('refuses to remove a treatment whose element was edited since, and removes it from the list only when asked', () => {
+    const { doc } = performCommand('add-treatment', roomPlanDocument(), state, { treatment: chosen }, sequentialIds('t'));
+    const edited = performCommand('set-length-override', doc, state, { segmentIds: ['main'], lengthM: 4 });
+    const refused = tryCommand('remove-treatment', edited.doc, state, { treatmentId: 't1' });
+    expect(refused.ok).toBe(false);
+    if (!refused.ok) expect(refused.error.message).toMatch(/edited since/);
+    const listOnly = performCommand('remove-treatment', edited.doc, state, { treatmentId: 't1', keepDrawing: true });
+    expect(listOnly.doc.treatments).toHaveLength(0);
+    expect(listOnly.doc.segments.find((segment) => segment.id === 'main')?.lengthOverrideM).toBe(4);
   });
 
   it('applies a lining or a termination change, and refuses a change to a segment that is gone', () => {

@@ -10,7 +10,8 @@ import { requireActor } from '@/lib/auth/current';
 import { AppError } from '@/lib/errors';
 import { can } from '@/lib/permissions';
 import { getPlan } from '@/lib/plans/data';
-import { listRevisions } from '@/lib/revisions/data';
+import { contentHash } from '@/lib/plans/analysis/content-hash';
+import { latestRevision, listRevisions } from '@/lib/revisions/data';
 
 export const metadata: Metadata = { title: 'Revisions' };
 
@@ -37,7 +38,7 @@ export default async function RevisionsPage({ params }: { params: Promise<{ plan
           <h1 className="text-xl font-semibold">Revisions of {plan.name}</h1>
           <p className="text-sm text-graphite-500">Each revision freezes the plan and its analysis as submitted. Edits after it make a new draft.</p>
         </div>
-        <PlanRevisionActions planId={plan.id} latest={revisions[0] ?? null} planVersion={plan.version} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} showListLink={false} />
+        <PlanRevisionActions planId={plan.id} latest={revisions.length > 0 ? await latestRevision(actor.team.teamId, plan.id) : null} planVersion={plan.version} contentHash={contentHash(plan.document, plan.metresPerPixel)} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} showListLink={false} />
       </div>
       {revisions.length === 0 ? (
         <EmptyState title="No revision yet">

@@ -1,13 +1,12 @@
 import { json, route } from '@/lib/http/route';
-import { getPlan } from '@/lib/plans/data';
-import { analysePlan } from '@/lib/plans/results';
+import { getPlanWithAnalysis } from '@/lib/plans/analysis';
 
 type Params = { planId: string };
 
 export const dynamic = 'force-dynamic';
 
-// Results of every run on the saved plan, computed now from its document.
-export const GET = route<Params>({ access: 'plan.read' }, async ({ team, params }) => {
-  const plan = await getPlan(team!.teamId, params.planId);
-  return json({ version: plan.version, runs: analysePlan(plan.document, plan.metresPerPixel) });
+// Results of every run on the saved plan, from the stored analysis of that version.
+export const GET = route<Params>({ access: 'plan.read', rateLimit: 'analysis' }, async ({ team, params }) => {
+  const { plan, analysis } = await getPlanWithAnalysis(team!.teamId, params.planId);
+  return json({ version: plan.version, contentHash: analysis.contentHash, labels: analysis.labels, runs: analysis.runs });
 });

@@ -1,13 +1,12 @@
 import { json, route } from '@/lib/http/route';
-import { getPlan } from '@/lib/plans/data';
-import { planRisks } from '@/lib/plans/risks';
+import { getPlanWithAnalysis } from '@/lib/plans/analysis';
 
 type Params = { planId: string };
 
 export const dynamic = 'force-dynamic';
 
-// Risk flags and room results of the saved plan, computed now from its document.
-export const GET = route<Params>({ access: 'plan.read' }, async ({ team, params }) => {
-  const plan = await getPlan(team!.teamId, params.planId);
-  return json({ version: plan.version, ...planRisks(plan.document, plan.metresPerPixel) });
+// Risk flags, room results and the standing of each chosen treatment, from the stored analysis of the saved version.
+export const GET = route<Params>({ access: 'plan.read', rateLimit: 'analysis' }, async ({ team, params }) => {
+  const { plan, analysis } = await getPlanWithAnalysis(team!.teamId, params.planId);
+  return json({ version: plan.version, contentHash: analysis.contentHash, labels: analysis.labels, ...analysis.risks, treatmentChecks: analysis.treatments });
 });

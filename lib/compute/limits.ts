@@ -1,0 +1,16 @@
+// The compute budget: how many worker threads, how long and how much memory one job may take.
+import os from 'node:os';
+
+/** Worker threads: one per core, at least two, so one long job never queues every other person behind it. */
+export const COMPUTE_THREADS = Math.max(2, Number(process.env.ANTINODE_COMPUTE_THREADS ?? os.availableParallelism()));
+/** Jobs waiting for a thread beyond this are refused as busy (503) rather than queued without end. */
+export const COMPUTE_QUEUE = Number(process.env.ANTINODE_COMPUTE_QUEUE ?? 32);
+/** Heap of one worker thread, MB: a job that needs more is stopped (its thread is replaced). */
+export const COMPUTE_HEAP_MB = Number(process.env.ANTINODE_COMPUTE_HEAP_MB ?? 256);
+
+/** Time limits per kind of job, ms (a job past its limit is stopped and its thread replaced). */
+export const COMPUTE_TIME_LIMIT_MS = {
+  'analyze-run': Number(process.env.ANTINODE_RUN_TIME_LIMIT_MS ?? 5000),
+  'plan-analysis': Number(process.env.ANTINODE_PLAN_TIME_LIMIT_MS ?? 15000),
+  'treatment-options': Number(process.env.ANTINODE_TREATMENT_TIME_LIMIT_MS ?? 10000),
+} as const;

@@ -1,0 +1,85 @@
+// The compute pool: engine work runs in worker threads (piscina), each job with a time limit and
+// a heap limit, so no request can hold the server's own thread or memory. A job past a limit is
+// stopped and the caller gets an error that says what to reduce.
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { Piscina } from 'piscina';
+import { AppError } from '@/lib/errors';
+import { PlanError } from '@/lib/plan/errors';
+import { COMPUTE_HEAP_MB, COMPUTE_QUEUE, COMPUTE_THREADS, COMPUTE_TIME_LIMIT_MS } from './limits';
+import type { ComputeTask, TaskOutcome } from './tasks';
+
+/** Where scripts/build-worker.ts writes the bundled worker. */
+export const WORKER_FILE = process.env.ANTINODE_COMPUTE_WORKER ?? path.join(process.cwd(), '.compute', 'worker.mjs');
+
+const holder = globalThis as typeof globalThis & { antinodeComputePool?: Piscina };
+
+function pool(): Piscina {
+  holder.antinodeComputePool ??= new Piscina({
+    filename: pathToFileURL(WORKER_FILE).href,
+    minThreads: 1,
+    maxThreads: COMPUTE_THREADS,
+    maxQueue: COMPUTE_QUEUE,
+    idleTimeout: 60_000,
+    resourceLimits: { maxOldGenerationSizeMb: COMPUTE_HEAP_MB, maxYoungGenerationSizeMb: 32 },
+  });
+  return holder.antinodeComputePool;
+}
+
+export interface ComputeOptions {
+  /** What the person should make smaller when the job is stopped, e.g. "the run's length or its frequency range". */
+  reduce: string;
+  timeLimitMs?: number;
+}
+
+function rebuilt(outcome: Extract<TaskOutcome, { ok: false }>): Error {
+  const { name, message, code, field } = outcome.error;
+  if (name === 'AppError' && code) return new AppError(code, message, { field });
+  if (name === 'PlanError') return new PlanError(message);
+  if (name === 'RangeError') return new RangeError(message);
+  return new Error(`A computation failed: ${message}`);
+}
+
+function isOutOfMemory(error: unknown): boolean {
+  const code = (error as { code?: string } | null)?.code;
+  return code === 'ERR_WORKER_OUT_OF_MEMORY' || /out of memory|heap limit/i.test(String((error as Error)?.message ?? ''));
+}
+
+/** Runs the task in the pool; its result, or the task's own error (RangeError, PlanError, AppError). */
+export async function compute<T>(task: ComputeTask, options: ComputeOptions): Promise<T> {
+  const timeLimitMs = options.timeLimitMs ?? COMPUTE_TIME_LIMIT_MS[task.kind];
+  const controller = new AbortController();
+  const timer = setTimeout(() => controller.abort(), timeLimitMs);
+  let outcome: TaskOutcome;
+  try {
+    outcome = (await pool().run(task, { signal: controller.signal })) as TaskOutcome;
+  } catch (error) {
+    if (controller.signal.aborted) {
+      throw new AppError('too_much_work', `This needs more than the ${Math.round(timeLimitMs / 1000)} s one analysis may take, so it was stopped. Reduce ${options.reduce} and try again.`);
+    }
+    if (isOutOfMemory(error)) {
+      throw new AppError('too_much_work', `This needs more than the ${COMPUTE_HEAP_MB} MB one analysis may use, so it was stopped. Reduce ${options.reduce} and try again.`);
+    }
+    if (/queue is at limit/i.test(String((error as Error)?.message))) {
+      throw new AppError('busy', 'The server is busy with other analyses; try again in a few seconds.', { retryAfterS: 5 });
+    }
+    throw error;
+  } finally {
+    clearTimeout(timer);
+  }
+  if (!outcome.ok) throw rebuilt(outcome);
+  return outcome.value as T;
+}
+
+/** Jobs running and waiting now (for the health route). */
+export function computeLoad(): { threads: number; queued: number } {
+  const current = holder.antinodeComputePool;
+  return current ? { threads: current.threads.length, queued: current.queueSize } : { threads: 0, queued: 0 };
+}
+
+/** Stops the pool's threads (tests and shutdown). */
+export async function closeComputePool(): Promise<void> {
+  const current = holder.antinodeComputePool;
+  holder.antinodeComputePool = undefined;
+  if (current) await current.destroy();
+}

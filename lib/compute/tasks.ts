@@ -1,0 +1,41 @@
+// The work that runs off the request thread, as plain data in and out: one duct run's analysis,
+// the analysis of a plan version, and the candidate treatments of one flag. Pure: the worker
+// threads run these; errors come back as plain data so their kind survives the thread boundary.
+import { analyzeRun, type RunInput } from '@/lib/acoustic';
+import { AppError, type ErrorCode } from '@/lib/errors';
+import type { PlanDocument } from '@/lib/plan/document';
+import { PlanError } from '@/lib/plan/errors';
+import { computePlanAnalysis } from '@/lib/plans/analysis/compute';
+import { treatmentOptionsFromAnalysis } from '@/lib/plans/treatment-options';
+import type { PlanAnalysis } from '@/lib/plans/analysis/types';
+import type { RiskTarget } from '@/lib/plans/risk-context';
+
+export type ComputeTask =
+  | { kind: 'analyze-run'; input: unknown }
+  | { kind: 'plan-analysis'; document: PlanDocument; metresPerPixel: number }
+  | { kind: 'treatment-options'; document: PlanDocument; metresPerPixel: number; analysis: PlanAnalysis; target: RiskTarget; flagId: string };
+
+export interface TaskError { name: string; message: string; code?: ErrorCode; field?: string }
+export type TaskOutcome = { ok: true; value: unknown } | { ok: false; error: TaskError };
+
+function perform(task: ComputeTask): unknown {
+  switch (task.kind) {
+    case 'analyze-run':
+      return analyzeRun(task.input as RunInput);
+    case 'plan-analysis':
+      return computePlanAnalysis(task.document, task.metresPerPixel);
+    case 'treatment-options':
+      return treatmentOptionsFromAnalysis(task.document, task.metresPerPixel, task.analysis, task.target, task.flagId);
+  }
+}
+
+export function runComputeTask(task: ComputeTask): TaskOutcome {
+  try {
+    return { ok: true, value: perform(task) };
+  } catch (error) {
+    if (error instanceof AppError) return { ok: false, error: { name: 'AppError', message: error.message, code: error.code, field: error.field } };
+    if (error instanceof PlanError || error instanceof RangeError) return { ok: false, error: { name: error.name === 'PlanError' ? 'PlanError' : 'RangeError', message: error.message } };
+    const message = error instanceof Error ? `${error.name}: ${error.message}\n${error.stack ?? ''}` : String(error);
+    return { ok: false, error: { name: 'Error', message } };
+  }
+}
