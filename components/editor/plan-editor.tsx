@@ -3,6 +3,7 @@
 import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
+import { planLabels } from '@/lib/plan/labels';
 import { findNode, findRoom, findRun, findSegment, matchKeyBinding, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
 import { formatLength } from '@/lib/plan/units';
 import type { PlanView } from '@/lib/plans/data';
@@ -79,6 +80,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const risks = usePlanRisks(plan.id, model.version);
   const roomActions = useRoomActions(model, dispatch, setOpenRoomId);
   const doc = model.history.present;
+  const labels = useMemo(() => planLabels(doc), [doc]);
   const formatPosition = useCallback((metres: number) => formatLength(metres, unitSystem, 'run'), [unitSystem]);
 
   const activeRunId = model.state.activeRunId ?? doc.runs[0]?.id ?? null;
@@ -211,12 +213,12 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null} unitSystem={unitSystem} editable={editable}
               onChange={(changes) => roomActions.updateRoom(openRoom.id, changes)} onDelete={() => roomActions.deleteRoom(openRoom.id)} onClose={() => setOpenRoomId(null)} />
           ) : selectedSegment ? (
-            <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}
+            <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} label={labels.segments[selectedSegment.id] ?? ''} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}
               onSection={(section) => runCommand(model, dispatch, 'set-section', { section })}
               onLining={(lining) => runCommand(model, dispatch, 'set-lining', { lining })}
               onLengthOverride={(lengthM) => runCommand(model, dispatch, 'set-length-override', { lengthM })} />
           ) : selectedNode && nodeRun && nodeTermination ? (
-            <EndPanel key={selectedNode.id} run={nodeRun} nodeId={selectedNode.id} termination={nodeTermination} editable={editable}
+            <EndPanel key={selectedNode.id} run={nodeRun} nodeId={selectedNode.id} label={labels.nodes[selectedNode.id] ?? ''} termination={nodeTermination} editable={editable}
               isChosenEnd={activeResult?.path.at(-1)?.toNodeId === selectedNode.id}
               onTermination={(termination) => runCommand(model, dispatch, 'set-termination', { nodeId: selectedNode.id, termination })}
               onChooseEnd={() => runCommand(model, dispatch, 'choose-end', { runId: nodeRun.id, nodeId: selectedNode.id })} />
@@ -242,18 +244,20 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               <ScheduleCsvControls document={doc} runId={activeRunId} runName={(activeRunId && findRun(doc, activeRunId)?.name) || 'run'} metresPerPixel={model.metresPerPixel} editable={editable}
                 onApply={(document) => dispatch({ type: 'apply', document, state: normalizeState(document, model.state) })} />
               <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
-                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} />
+                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} nodeLabels={labels.nodes} />
               </>)}
             </div>
           )}
           {panelRun && !openRoom && (selectedSegment || selectedNode || editable) && (
             <div className="mt-6 border-t border-graphite-100 pt-4">
-              <RunPanel run={panelRun} editable={editable} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })} />
+              <RunPanel run={panelRun} editable={editable} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })}
+                onRenumber={editable ? () => runCommand(model, dispatch, 'renumber-run', { runId: panelRun.id }) : undefined} />
             </div>
           )}
         </aside>
       </div>
       <RiskDrawer planId={plan.id} version={model.version} flags={risks.data?.flags ?? null} rules={risks.data ?? null} roomResults={risks.data?.rooms ?? []} rooms={doc.rooms} treatments={doc.treatments ?? []}
+        treatmentChecks={risks.data && risks.data.version === model.version ? risks.data.treatmentChecks : null} document={doc}
         loading={risks.isLoading} stale={risksStale} error={risks.error ? risks.error.message : null} editable={editable} canEvaluate={canEvaluate}
         onOpenRoom={setOpenRoomId} onAddRoom={roomActions.addRoom} onChoose={roomActions.chooseTreatment} onRemoveTreatment={roomActions.removeTreatment} />
     </div>

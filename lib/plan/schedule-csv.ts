@@ -7,8 +7,9 @@ import { PlanError } from './errors';
 import { segmentLengthM } from './geometry/length';
 import { buildRunTree, mainPathOf, type ChildLink } from './run-tree';
 import { MIN_SECTION_M } from './schema';
+import { planLabels } from './labels/names';
 
-export const SCHEDULE_COLUMNS = ['order', 'from_m', 'length_m', 'shape', 'diameter_mm', 'width_mm', 'height_mm', 'lining_thickness_mm', 'lining_absorption', 'segment_id'] as const;
+export const SCHEDULE_COLUMNS = ['order', 'from_m', 'length_m', 'shape', 'diameter_mm', 'width_mm', 'height_mm', 'lining_thickness_mm', 'lining_absorption', 'segment_id', 'segment'] as const;
 export type ScheduleColumn = (typeof SCHEDULE_COLUMNS)[number];
 const REQUIRED_COLUMNS: readonly ScheduleColumn[] = ['order', 'length_m', 'shape', 'diameter_mm', 'width_mm', 'height_mm', 'lining_thickness_mm', 'lining_absorption'];
 
@@ -33,6 +34,7 @@ const roundTo = (value: number, decimals: number) => Number(value.toFixed(decima
 export function scheduleToCsv(doc: PlanDocument, runId: string, metresPerPixel: number): string {
   const tree = buildRunTree(doc, runId, metresPerPixel, ['missing-termination']);
   const { pieces, links } = mainPathOf(tree);
+  const labels = planLabels(doc);
   const data = links.map((link, index) => {
     const { section, lining } = link.segment;
     return [
@@ -46,6 +48,7 @@ export function scheduleToCsv(doc: PlanDocument, runId: string, metresPerPixel: 
       lining ? roundTo(lining.thicknessM * 1000, 2) : '',
       lining ? lining.absorption : '',
       link.segment.id,
+      labels.segments[link.segment.id] ?? '',
     ];
   });
   return Papa.unparse({ fields: [...SCHEDULE_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' });

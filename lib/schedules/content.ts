@@ -3,6 +3,7 @@
 import type { Termination } from '@/lib/acoustic';
 import { nodePositions } from '@/lib/plan/document';
 import { drawnArea } from '@/lib/plan/drawn-area';
+import { planLabels, type PlanLabels } from '@/lib/plan/labels';
 import { roomRectPx } from '@/lib/plan/rooms/room-input';
 import type { RunResult } from '@/lib/plans/results';
 import { resonanceTarget } from '@/lib/revisions/rows';
@@ -24,7 +25,7 @@ export interface ScheduleRun {
   lengthM: number | null;
   cutoffHz: number | null;
   speedOfSoundMps: number | null;
-  sections: { index: number; lengthM: number; section: string; lining: string }[];
+  sections: { index: number; label: string; lengthM: number; section: string; lining: string }[];
   terminations: { where: string; kind: string }[];
   resonances: { order: number; frequencyHz: number; q: number | null; bandwidthHz: number | null; fanTone: string; review: string }[];
   // Resonances of the revision left out of the printed table (above the lowest orders, clear
@@ -58,7 +59,7 @@ const FIGURE_MARGIN_PX = 60;
 export const PRINTED_LOWEST_ORDERS = 12;
 
 /** The plan figure: the drawing (or a blank sheet around what is drawn), run lines and names, room outlines. */
-export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerPixel' | 'background'>, image: ScheduleFigure['image']): ScheduleFigure {
+export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerPixel' | 'background' | 'extras'>, image: ScheduleFigure['image']): ScheduleFigure {
   const doc = revision.document;
   const positions = nodePositions(doc);
   const lines = doc.segments.flatMap((segment) => {
@@ -66,10 +67,17 @@ export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerP
     const to = positions.get(segment.to);
     return from && to ? [{ x1: from.x, y1: from.y, x2: to.x, y2: to.y }] : [];
   });
-  const labels = doc.runs.flatMap((run) => {
-    const start = positions.get(run.startNodeId);
-    return start ? [{ x: start.x, y: start.y, text: run.name }] : [];
+  const names = labelsOf(revision);
+  const segmentLabels = doc.segments.flatMap((segment) => {
+    const from = positions.get(segment.from);
+    const to = positions.get(segment.to);
+    const text = names.segments[segment.id];
+    return from && to && text ? [{ x: (from.x + to.x) / 2, y: (from.y + to.y) / 2, text }] : [];
   });
+  const labels = [...doc.runs.flatMap((run) => {
+    const start = positions.get(run.startNodeId);
+    return start ? [{ x: start.x, y: start.y, text: `${run.name} (${names.runs[run.id] ?? ''})` }] : [];
+  }), ...segmentLabels];
   const rooms = doc.rooms.map((room) => {
     const rect = roomRectPx(room, revision.metresPerPixel);
     return { x: rect.x, y: rect.y, widthPx: rect.width, heightPx: rect.height, name: room.name };
@@ -86,6 +94,11 @@ export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerP
   return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels, rooms };
 }
 
+/** The frozen plan's labels (revisions frozen before labels existed get the ones the editor gives). */
+function labelsOf(revision: Pick<RevisionView, 'document' | 'extras'>): PlanLabels {
+  return revision.extras.labels ?? planLabels(revision.document);
+}
+
 /** |R| with a minus sign when the reflection is inverted (phase beyond ±90°), as the editor's table shows it. */
 function signedMagnitude(band: { magnitude: number; phaseRad: number }): string {
   return `${Math.abs(band.phaseRad) > Math.PI / 2 ? '−' : ''}${band.magnitude.toFixed(2)}`;
@@ -100,6 +113,7 @@ function magnitudeText(bands: readonly { hz: number; magnitude: number; phaseRad
 
 function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap<string, DecisionView>): ScheduleRun {
   const run = revision.document.runs.find((candidate) => candidate.id === result.runId);
+  const labels = labelsOf(revision);
   const segments = new Map(revision.document.segments.map((segment) => [segment.id, segment]));
   const analysis = result.analysis;
   const all = analysis?.resonances ?? [];
@@ -109,7 +123,7 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
   const printed = all.filter(keep);
   const left = all.filter((resonance, index) => !keep(resonance, index));
   const terminations = Object.entries(run?.terminations ?? {}).map(([nodeId, termination]: [string, Termination]) => ({
-    where: nodeId === run?.startNodeId ? 'Start (fan side)' : nodeId === (result.path.at(-1)?.toNodeId ?? run?.endNodeId) ? 'End of the main path' : 'Branch end',
+    where: `${labels.nodes[nodeId] ?? ''} · ${nodeId === run?.startNodeId ? 'start (fan side)' : nodeId === (result.path.at(-1)?.toNodeId ?? run?.endNodeId) ? 'end of the main path' : 'branch end'}`,
     kind: describeTermination(termination),
   }));
   return {
@@ -123,7 +137,7 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
     sections: result.path.map((piece, index) => {
       const segment = segments.get(piece.segmentId);
       return {
-        index: index + 1, lengthM: piece.endM - piece.startM, section: segment ? describeSection(segment.section) : '—',
+        index: index + 1, label: labels.segments[piece.segmentId] ?? String(index + 1), lengthM: piece.endM - piece.startM, section: segment ? describeSection(segment.section) : '—',
         lining: segment?.lining ? `${(segment.lining.thicknessM * 1000).toFixed(0)} mm, absorption ${segment.lining.absorption.toFixed(2)}` : 'none',
       };
     }),

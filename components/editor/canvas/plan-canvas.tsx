@@ -2,9 +2,10 @@
 
 import type Konva from 'konva';
 import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
-import { Circle, Image as KonvaImage, Layer, Line, Rect, Stage } from 'react-konva';
+import { Circle, Image as KonvaImage, Layer, Line, Rect, Stage, Text } from 'react-konva';
 import type { Resonance } from '@/lib/acoustic';
 import { nodePositions, type PlanDocument } from '@/lib/plan/document';
+import { planLabels } from '@/lib/plan/labels';
 import type { Selection } from '@/lib/plan/editor-state';
 import type { Point } from '@/lib/plan/geometry';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
@@ -17,6 +18,9 @@ import { TerminationGlyph } from './termination-glyph';
 import { useRoomDrag } from './use-room-drag';
 import { GRID_AREA_PX, openingArea } from './opening-area';
 import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
+
+/** Screen distance from a run end to its label, px. */
+const END_LABEL_AWAY_PX = 26;
 
 export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
 export interface CanvasPointer { type: 'down' | 'move' | 'dblclick'; point: Point; target: CanvasTarget; shiftKey: boolean; scale: number }
@@ -116,6 +120,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   const selectedSegments = useMemo(() => new Set(selection.segmentIds), [selection.segmentIds]);
   const onPath = useMemo(() => new Set(props.mainPath.map((piece) => piece.segmentId)), [props.mainPath]);
   const startNodes = useMemo(() => new Set(doc.runs.map((run) => run.startNodeId)), [doc.runs]);
+  const labels = useMemo(() => planLabels(doc), [doc]);
 
   const sectionWidthPx = useCallback((sizeM: number) => Math.max(2, Math.min(9, (sizeM / props.metresPerPixel) * view.scale)), [props.metresPerPixel, view.scale]);
 
@@ -126,9 +131,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
     const sizeM = segment.section.shape === 'round' ? segment.section.diameterM : Math.max(segment.section.widthM, segment.section.heightM);
     return (
       <SegmentLine key={segment.id} id={segment.id} x1={from.x} y1={from.y} x2={to.x} y2={to.y} widthPx={sectionWidthPx(sizeM)}
-        selected={selectedSegments.has(segment.id)} onPath={onPath.has(segment.id)} lined={Boolean(segment.lining)} scale={view.scale} />
+        selected={selectedSegments.has(segment.id)} onPath={onPath.has(segment.id)} lined={Boolean(segment.lining)} scale={view.scale} label={labels.segments[segment.id]} />
     );
-  }, [sectionWidthPx, selectedSegments, onPath, view.scale]);
+  }, [sectionWidthPx, selectedSegments, onPath, view.scale, labels]);
 
   // Everything that stays still during a drag, built once per document, selection or zoom.
   const staticShapes = useMemo(() => {
@@ -139,7 +144,15 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         const segment = doc.segments.find((candidate) => candidate.from === nodeId || candidate.to === nodeId);
         const other = segment && positions.get(segment.from === nodeId ? segment.to : segment.from);
         if (!node || !other || nodeId === dragNodeId) continue;
-        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={Math.atan2(node.y - other.y, node.x - other.x)} termination={termination} scale={view.scale} />);
+        const angleRad = Math.atan2(node.y - other.y, node.x - other.x);
+        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={angleRad} termination={termination} scale={view.scale} />);
+        const endLabel = labels.nodes[nodeId];
+        if (endLabel) {
+          // beyond the end, along the segment's direction
+          const awayPx = END_LABEL_AWAY_PX / view.scale;
+          glyphs.push(<Text key={`l${nodeId}`} x={node.x + Math.cos(angleRad) * awayPx} y={node.y + Math.sin(angleRad) * awayPx} text={endLabel} fontSize={10 / view.scale}
+            fontFamily="IBM Plex Mono, monospace" fill="#5d626b" offsetX={(endLabel.length * 3) / view.scale} offsetY={5 / view.scale} listening={false} name="end-label" />);
+        }
       }
     }
     return (
@@ -151,7 +164,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         )))}
       </>
     );
-  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale]);
+  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale, labels]);
 
   const toPlan = (stage: Konva.Stage | null): Point | null => {
     const pointer = stage?.getPointerPosition();

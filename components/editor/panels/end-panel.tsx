@@ -18,6 +18,8 @@ function keyOf(termination: Termination): string {
 interface EndPanelProps {
   run: PlanRun;
   nodeId: string;
+  /** Its stable label, e.g. "A4 end". */
+  label: string;
   termination: Termination;
   isChosenEnd: boolean;
   editable: boolean;
@@ -26,11 +28,11 @@ interface EndPanelProps {
 }
 
 // An end of the run: its termination, and whether it is the end the results follow.
-export function EndPanel({ run, nodeId, termination, isChosenEnd, editable, onTermination, onChooseEnd }: EndPanelProps) {
+export function EndPanel({ run, nodeId, label, termination, isChosenEnd, editable, onTermination, onChooseEnd }: EndPanelProps) {
   const isStart = run.startNodeId === nodeId;
   return (
     <fieldset disabled={!editable} className="space-y-3">
-      <legend className="mb-2 text-sm font-semibold">{isStart ? 'Start end (fan side)' : 'Duct end'} · {run.name}</legend>
+      <legend className="mb-2 text-sm font-semibold">{isStart ? 'Start end (fan side)' : 'Duct end'} <span className="num" data-testid="end-label">{label}</span> · {run.name}</legend>
       <div>
         <label htmlFor="termination" className="block text-xs font-medium text-graphite-700">Termination</label>
         <select id="termination" className="field-input mt-0.5 py-1" value={keyOf(termination)} onChange={(event) => onTermination(CHOICES.find((choice) => choice.key === event.target.value)!.make(termination))}>

@@ -13,7 +13,12 @@ interface ResultsPanelProps {
   selectedOrder: number | null;
   onSelectOrder: (order: number | null) => void;
   formatPosition: (metres: number) => string;
+  /** Stable labels of the plan's points, for naming where each reflection happens. */
+  nodeLabels?: Readonly<Record<string, string>>;
 }
+
+/** Within this distance, m, a reflection is at the path point (the engine reports exact sums of lengths). */
+const SAME_POINT_M = 1e-6;
 
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
   return (
@@ -25,11 +30,16 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 }
 
 // The chosen run's results: cut-off and warnings, resonances, reflections, echo chart.
-export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition }: ResultsPanelProps) {
+export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition, nodeLabels }: ResultsPanelProps) {
   if (error) return <p role="alert" className="text-sm text-risk-ink">The results could not be computed: {error}</p>;
   if (!result) return <p className="text-sm text-graphite-500">{loading ? 'Computing…' : 'Draw a run to see its resonances here: pick Draw (D), click at the fan end, then at each bend.'}</p>;
   if (result.problem) return <p role="status" className="rounded border border-risk bg-risk-soft p-2 text-sm text-risk-ink"><span className="font-semibold">Cannot analyse {result.name}: </span>{result.problem}</p>;
   const analysis = result.analysis!;
+  const placeName = (atM: number, kind: string): string | null => {
+    if (!nodeLabels || result.path.length === 0) return null;
+    const nodeId = kind === 'start' ? result.path[0].fromNodeId : result.path.find((piece) => Math.abs(piece.endM - atM) < SAME_POINT_M)?.toNodeId;
+    return nodeId ? nodeLabels[nodeId] ?? null : null;
+  };
   return (
     <div className={`space-y-5 ${stale ? 'opacity-60' : ''}`} aria-busy={stale}>
       <dl className="num grid grid-cols-2 gap-x-3 gap-y-1 text-sm" aria-label="Run summary">
@@ -53,7 +63,7 @@ export function ResultsPanel({ result, loading, stale, error, selectedOrder, onS
         </p>
       </Section>
       <Section title="Reflections">
-        <ReflectionTable reflections={analysis.reflections} formatPosition={formatPosition} />
+        <ReflectionTable reflections={analysis.reflections} formatPosition={formatPosition} placeName={placeName} />
       </Section>
       <Section title="Echo chart">
         <EchoChart echoes={analysis.echoes} lengthM={analysis.lengthM} />

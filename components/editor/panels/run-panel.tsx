@@ -8,15 +8,17 @@ interface RunPanelProps {
   run: PlanRun;
   editable: boolean;
   onChange: (changes: { name?: string; temperatureC?: number; fan?: { blades: number; rpm: number } | null }) => void;
+  /** Numbers the run's segments 1, 2, … from the start again (labels elsewhere keep theirs until then). */
+  onRenumber?: () => void;
 }
 
 // The run as a whole: name, air temperature, and the fan whose blade-pass tone matters.
-export function RunPanel({ run, editable, onChange }: RunPanelProps) {
+export function RunPanel({ run, editable, onChange, onRenumber }: RunPanelProps) {
   const [name, setName] = useState(run.name);
   useEffect(() => setName(run.name), [run.name]);
   return (
     <fieldset disabled={!editable} className="space-y-3">
-      <legend className="mb-2 text-sm font-semibold">Run</legend>
+      <legend className="mb-2 text-sm font-semibold">Run <span className="num">{run.letter ?? ''}</span></legend>
       <div>
         <label htmlFor="run-name" className="block text-xs font-medium text-graphite-700">Name</label>
         <input id="run-name" className="field-input mt-0.5 py-1" value={name} onChange={(event) => setName(event.target.value)}
@@ -29,6 +31,12 @@ export function RunPanel({ run, editable, onChange }: RunPanelProps) {
         <NumberInput label="Fan speed" unit="rpm" value={run.fan?.rpm ?? null} min={1} max={100000} allowEmpty
           onCommit={(rpm) => onChange({ fan: rpm === null ? null : { blades: run.fan?.blades ?? 12, rpm } })} />
       </div>
+      {onRenumber && (
+        <div className="flex items-center gap-2">
+          <button type="button" className="btn-quiet" onClick={onRenumber}>Renumber segments</button>
+          <span className="text-xs text-graphite-500">Labels stay as they are until you do this.</span>
+        </div>
+      )}
       {run.fan && <p className="num text-xs text-graphite-500">Blade-pass tone {((run.fan.blades * run.fan.rpm) / 60).toFixed(1)} Hz (blades × rpm / 60) and its harmonics.</p>}
     </fieldset>
   );

@@ -9,6 +9,8 @@ import { NumberInput } from './number-input';
 interface SegmentPanelProps {
   document: PlanDocument;
   segment: PlanSegment;
+  /** Its stable label, e.g. "A3". */
+  label: string;
   metresPerPixel: number;
   unitSystem: UnitSystem;
   editable: boolean;
@@ -18,14 +20,14 @@ interface SegmentPanelProps {
 }
 
 // The selected segment: section, lining and length (drawn, or typed when drawn schematically).
-export function SegmentPanel({ document: doc, segment, metresPerPixel, unitSystem, editable, onSection, onLining, onLengthOverride }: SegmentPanelProps) {
+export function SegmentPanel({ document: doc, segment, label, metresPerPixel, unitSystem, editable, onSection, onLining, onLengthOverride }: SegmentPanelProps) {
   const from = doc.nodes.find((node) => node.id === segment.from)!;
   const to = doc.nodes.find((node) => node.id === segment.to)!;
   const drawnM = segmentLengthM(from, to, metresPerPixel);
   const section = segment.section;
   return (
     <fieldset disabled={!editable} className="space-y-4">
-      <legend className="mb-2 text-sm font-semibold">Segment</legend>
+      <legend className="mb-2 text-sm font-semibold">Segment <span className="num" data-testid="segment-label">{label}</span></legend>
       <div>
         <p className="mb-1 text-xs font-medium text-graphite-700">Section</p>
         <div className="flex gap-3 text-sm" role="radiogroup" aria-label="Section shape">

@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import type { PlanRoom, PlanTreatment } from '@/lib/plan';
+import type { PlanDocument, PlanRoom, PlanTreatment } from '@/lib/plan';
+import type { TreatmentCheck } from '@/lib/plans/analysis/types';
 import type { PlacedFlag, RoomResult } from '@/lib/plans/risks';
 import type { TreatmentOption } from '@/lib/plans/treatment-options';
 import { RoomList } from '../rooms/room-list';
@@ -19,6 +20,8 @@ interface RiskDrawerProps {
   roomResults: RoomResult[];
   rooms: readonly PlanRoom[];
   treatments: readonly PlanTreatment[];
+  treatmentChecks: readonly TreatmentCheck[] | null;
+  document: PlanDocument;
   loading: boolean;
   stale: boolean;
   error: string | null;
@@ -27,7 +30,7 @@ interface RiskDrawerProps {
   onOpenRoom: (roomId: string) => void;
   onAddRoom: () => void;
   onChoose: (flag: PlacedFlag, option: TreatmentOption) => void;
-  onRemoveTreatment: (treatmentId: string) => void;
+  onRemoveTreatment: (treatmentId: string, keepDrawing: boolean) => void;
 }
 
 // The bottom drawer: every risk flag across the plan, the rooms, and the chosen treatments. Its
@@ -68,7 +71,7 @@ export function RiskDrawer(props: RiskDrawerProps) {
             </>
           ))}
           {tab === 'rooms' && <RoomList rooms={props.rooms} results={props.roomResults} editable={props.editable} onOpen={props.onOpenRoom} onAdd={props.onAddRoom} />}
-          {tab === 'treatments' && <TreatmentList treatments={props.treatments} editable={props.editable} onRemove={props.onRemoveTreatment} />}
+          {tab === 'treatments' && <TreatmentList document={props.document} treatments={props.treatments} checks={props.treatmentChecks} editable={props.editable} onRemove={props.onRemoveTreatment} />}
         </div>
       )}
     </section>

@@ -1,5 +1,6 @@
 'use client';
 
+import { planLabels } from '@/lib/plan/labels';
 import { useEffect, useState } from 'react';
 import { runLeaves, type PlanDocument, type PlanRoom } from '@/lib/plan';
 import type { RoomResult } from '@/lib/plans/risks';
@@ -25,7 +26,8 @@ interface RoomPanelProps {
 
 /** The open ends of every run, for choosing the one that feeds the room. */
 function runEnds(doc: PlanDocument): { nodeId: string; label: string }[] {
-  return doc.runs.flatMap((run) => runLeaves(doc, run.id).filter((nodeId) => nodeId !== run.startNodeId).map((nodeId, index) => ({ nodeId, label: `${run.name}, end ${index + 1}` })));
+  const labels = planLabels(doc);
+  return doc.runs.flatMap((run) => runLeaves(doc, run.id).filter((nodeId) => nodeId !== run.startNodeId).map((nodeId) => ({ nodeId, label: `${labels.nodes[nodeId] ?? 'an end'} (${run.name})` })));
 }
 
 // The room's form (name, size, finishes, criterion, outlet and listener) and its results.

@@ -38,8 +38,8 @@ export function useRoomActions(model: EditorModel, dispatch: Dispatch<EditorActi
     });
   }, [dispatch]);
 
-  const removeTreatment = useCallback((treatmentId: string) => {
-    runCommand(modelRef.current, dispatch, 'remove-treatment', { treatmentId });
+  const removeTreatment = useCallback((treatmentId: string, keepDrawing = false) => {
+    runCommand(modelRef.current, dispatch, 'remove-treatment', { treatmentId, keepDrawing });
   }, [dispatch]);
 
   return { updateRoom, deleteRoom, addRoom, chooseTreatment, removeTreatment };

@@ -17,6 +17,7 @@ export type CommandName =
   | 'set-termination'
   | 'set-run-properties'
   | 'choose-end'
+  | 'renumber-run'
   | 'set-length-override'
   | 'add-room'
   | 'update-room'

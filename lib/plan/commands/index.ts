@@ -8,7 +8,7 @@ import type { CommandName, CommandResult } from './define';
 import { deleteSelection } from './delete-selection';
 import { drawSegment } from './draw-segment';
 import { moveNode } from './move-node';
-import { chooseEnd, setRunProperties, setTermination } from './run-properties';
+import { chooseEnd, renumberRunCommand, setRunProperties, setTermination } from './run-properties';
 import { setLengthOverride, setLining, setSection } from './segment-properties';
 import { splitSegment } from './split-segment';
 import { addRoom, deleteRoom, moveRoom, updateRoom } from './rooms';
@@ -25,6 +25,7 @@ export const COMMANDS = {
   'set-termination': setTermination,
   'set-run-properties': setRunProperties,
   'choose-end': chooseEnd,
+  'renumber-run': renumberRunCommand,
   'set-length-override': setLengthOverride,
   'add-room': addRoom,
   'update-room': updateRoom,
@@ -60,7 +61,7 @@ export type { AddTeeArgs } from './add-tee';
 export type { MoveNodeArgs } from './move-node';
 export type { DeleteSelectionArgs } from './delete-selection';
 export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs } from './segment-properties';
-export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs } from './run-properties';
+export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs, RenumberRunArgs } from './run-properties';
 export type { AddRoomArgs, UpdateRoomArgs, MoveRoomArgs, DeleteRoomArgs } from './rooms';
 export type { AddTreatmentArgs, RemoveTreatmentArgs } from './treatments';
 export { applyPlanChange } from './treatments';

@@ -5,6 +5,8 @@ import { PlanError } from '../errors';
 import { fanSchema, runNameSchema, temperatureCSchema, terminationSchema } from '../schema';
 import { nodeDegree, runOfNode } from '../topology';
 import { checked, defineCommand } from './define';
+import { renumberRun } from '../labels/renumber';
+import { buildRunTree, resolvedEndNodeId } from '../run-tree';
 
 function replaceRun(doc: PlanDocument, run: PlanRun): PlanDocument {
   return { ...doc, runs: doc.runs.map((candidate) => (candidate.id === run.id ? run : candidate)) };
@@ -65,4 +67,24 @@ export const chooseEnd = defineCommand('choose-end', "Choose which open end is t
     if (args.nodeId === run.startNodeId || nodeDegree(doc, args.nodeId) !== 1) throw new PlanError('Choose an end of the run other than its start.', { nodeId: args.nodeId, runId: run.id });
   }
   return { doc: replaceRun(doc, { ...run, endNodeId: args.nodeId }), state: { ...state, activeRunId: run.id } };
+});
+
+export interface RenumberRunArgs {
+  /** Default: the active run. */
+  readonly runId?: string;
+}
+
+/** The run's end for numbering: the chosen end, else the farthest leaf (found without the scale: by drawn length). */
+function numberingEnd(doc: PlanDocument, run: PlanRun): string | null {
+  if (run.endNodeId !== null) return run.endNodeId;
+  try {
+    return resolvedEndNodeId(buildRunTree(doc, run.id, 1, ['missing-termination', 'cycle', 'shared-tree', 'start-not-leaf']));
+  } catch {
+    return null;
+  }
+}
+
+export const renumberRunCommand = defineCommand('renumber-run', "Number the run's segments 1, 2, … again from its start, along the path to its end first.", (doc, state, args: RenumberRunArgs) => {
+  const run = targetRun(doc, state, args.runId);
+  return { doc: renumberRun(doc, run.id, numberingEnd(doc, run)), state };
 });

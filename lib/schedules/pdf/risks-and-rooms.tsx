@@ -23,8 +23,8 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
       )}
       {content.treatments.length > 0 ? (
         <Table
-          columns={[{ title: 'Chosen treatment', width: 0.4 }, { title: 'Before', width: 0.22 }, { title: 'After (predicted)', width: 0.22 }, { title: 'Clears the flag', width: 0.16 }]}
-          rows={content.treatments.map((treatment) => [treatment.label, treatment.before, treatment.after, treatment.clears ? 'yes' : 'no'])}
+          columns={[{ title: 'Chosen treatment', width: 0.34 }, { title: 'Without it', width: 0.18 }, { title: 'With it (predicted)', width: 0.18 }, { title: 'On this revision', width: 0.3 }]}
+          rows={content.treatments.map((treatment) => [treatment.label, treatment.before, treatment.after, treatment.standingText || (treatment.clears ? 'Clears its flag' : 'Does not clear its flag')])}
         />
       ) : (
         <View style={styles.note}><Text>No treatments are chosen in this revision. The schedule is issued with the analysis only; treatments added later appear in a new revision.</Text></View>

@@ -23,8 +23,8 @@ export function RunSection({ run, index }: { run: ScheduleRun; index: number }) 
       )}
       <Text style={styles.h3}>Sections along the main path</Text>
       <Table
-        columns={[{ title: '#', width: 0.08 }, { title: 'Length', width: 0.16, numeric: true }, { title: 'Section', width: 0.46 }, { title: 'Lining', width: 0.3 }]}
-        rows={run.sections.map((section) => [String(section.index), `${section.lengthM.toFixed(2)} m`, section.section, section.lining])}
+        columns={[{ title: 'Segment', width: 0.12 }, { title: 'Length', width: 0.14, numeric: true }, { title: 'Section', width: 0.44 }, { title: 'Lining', width: 0.3 }]}
+        rows={run.sections.map((section) => [section.label, `${section.lengthM.toFixed(2)} m`, section.section, section.lining])}
       />
       <Text style={styles.h3}>Terminations</Text>
       <Table columns={[{ title: 'Where', width: 0.4 }, { title: 'Termination', width: 0.6 }]} rows={run.terminations.map((row) => [row.where, row.kind])} />

@@ -21,8 +21,8 @@ describe('schedule CSV export', () => {
     const csv = scheduleToCsv(doc, runId, METRES_PER_PIXEL);
     const lines = csv.split('\r\n');
     expect(lines[0]).toBe(HEADER);
-    expect(lines[1]).toBe(`1,0,1,round,250,,,25,0.65,${doc.segments[0].id}`);
-    expect(lines[2]).toBe(`2,1,2.5,rect,,500,300,,,${doc.segments[1].id}`);
+    expect(lines[1]).toBe(`1,0,1,round,250,,,25,0.65,${doc.segments[0].id},A1`);
+    expect(lines[2]).toBe(`2,1,2.5,rect,,500,300,,,${doc.segments[1].id},A2`);
   });
 
   it('neutralises text cells a spreadsheet would read as a formula', () => {

@@ -4,7 +4,7 @@ import { planFigure } from '@/lib/schedules/content';
 import { ROOM_PLAN_METRES_PER_PIXEL, roomPlanDocument } from '../plan/room-plan-fixture';
 
 describe('plan figure', () => {
-  const revision = { document: roomPlanDocument(), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL, background: null };
+  const revision = { document: roomPlanDocument(), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL, background: null, extras: {} };
 
   it('outlines every room at the plan scale: 12 m × 8 m at 20 mm per pixel is 600 × 400 px', () => {
     expect(planFigure(revision, null).rooms).toEqual([{ x: 50, y: 250, widthPx: 600, heightPx: 400, name: 'Recital room' }]);
@@ -15,7 +15,7 @@ describe('plan figure', () => {
     // drawn area x 50…650, y 200…650; the sheet starts at the plan origin or before
     expect({ x: figure.originX, y: figure.originY, w: figure.widthPx, h: figure.heightPx }).toEqual({ x: -60, y: -60, w: 650 + 120, h: 650 + 120 });
     expect(figure.lines).toHaveLength(2);
-    expect(figure.labels.map((label) => label.text)).toEqual(['Supply to recital room']);
+    expect(figure.labels.map((label) => label.text)).toEqual(['Supply to recital room (A)', 'A1', 'A2']);
   });
 
   it('a drawing fixes the sheet to its own size', () => {
