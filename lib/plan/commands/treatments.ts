@@ -28,7 +28,11 @@ export function applyPlanChange(doc: PlanDocument, change: PlanChange | PlanChan
   }
   const segment = findSegment(doc, change.segmentId);
   if (!segment) throw new PlanError('That treatment changes a segment that is no longer on the plan.', { segmentId: change.segmentId });
-  const changed = change.kind === 'length-override' ? { ...segment, lengthOverrideM: change.lengthM } : { ...segment, lining: change.lining };
+  // putting back "none" leaves the field out, as a segment that never had one
+  const { lengthOverrideM, lining, ...rest } = segment;
+  const changed = change.kind === 'length-override'
+    ? { ...rest, ...(lining !== undefined ? { lining } : {}), ...(change.lengthM !== null ? { lengthOverrideM: change.lengthM } : {}) }
+    : { ...rest, ...(lengthOverrideM !== undefined ? { lengthOverrideM } : {}), ...(change.lining !== null ? { lining: change.lining } : {}) };
   return { ...doc, segments: doc.segments.map((candidate) => (candidate.id === segment.id ? changed : candidate)) };
 }
 
