@@ -1,10 +1,12 @@
 // Editor benchmarks in Chromium against a running production build (scripts/bench.sh starts
-// one): the median frame time while dragging a vertex among 1,000 segments, and the time
-// from saving a 200-segment run to having its updated results.
+// one): the median frame time while dragging a vertex among 1,000 segments, the time from saving
+// a 200-segment run to having its updated results, and how fast the demo plan's risk and treatment
+// lists open.
 import { chromium } from '@playwright/test';
 import { createUserWithTeam, startSession } from '@/lib/auth/accounts';
 import { sequelize } from '@/lib/db';
 import { Plan, Project } from '@/models';
+import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
 import { median, percentile } from './stats';
 import { mainThreadFrameTimesMs } from './trace';
 import { manySegments, teedRun } from './plans';
@@ -12,6 +14,7 @@ import { manySegments, teedRun } from './plans';
 const BASE_URL = process.env.ANTINODE_BENCH_URL ?? 'http://localhost:3200';
 const DRAG_FRAMES = 240;
 const SAVE_ROUNDS = 15;
+const RISK_ROUNDS = 5;
 const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run',
   // Frames as fast as the work allows, so a frame's length is the work it holds, not the display's 60 Hz.
   '--disable-frame-rate-limit', '--disable-gpu-vsync'];
@@ -101,6 +104,48 @@ async function main(): Promise<void> {
   line('run saved', `${teedRun().segments.length} segments (200 on the path, 10 two-segment branches)`);
   line('resonances in the results', String(resonances));
   line(`save → results, median of ${rounds.length}`, `${median(rounds).toFixed(1)} ms (95th percentile ${percentile(rounds, 0.95).toFixed(1)} ms)`);
+
+  await riskListTimes(project.id, user.id, cookie);
+}
+
+/** On the demo plan, in the browser: risk list shown after opening the plan, treatment list after a click, and a chosen treatment's standing after "Add to plan". */
+async function riskListTimes(projectId: string, userId: string, cookie: { name: string; value: string }): Promise<void> {
+  const opens: number[] = [];
+  const risksRequests: number[] = [];
+  const treatmentLists: number[] = [];
+  const standings: number[] = [];
+  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
+  for (let round = 0; round < RISK_ROUNDS; round += 1) {
+    const plan = await Plan.create({ projectId, name: `Demo ${round}`, document: demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high }), metresPerPixel: DEMO_METRES_PER_PIXEL, updatedById: userId });
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    await context.addCookies([{ name: cookie.name, value: cookie.value, url: BASE_URL }]);
+    const page = await context.newPage();
+    await page.goto(`${BASE_URL}/plans/${plan.id}`);
+    const drawer = page.getByRole('region', { name: 'Rooms and risks' });
+    // the list itself: from the editor asking for the plan's risks to its rows on screen
+    const answered = page.waitForResponse((response) => response.url().endsWith(`/api/v1/plans/${plan.id}/risks`));
+    const started = performance.now();
+    await page.reload();
+    const timing = (await answered).request().timing();
+    await drawer.getByTestId('risk-row').first().waitFor();
+    opens.push(performance.now() - started);
+    risksRequests.push(timing.responseEnd);
+    const flag = drawer.getByTestId('risk-row').first();
+    const clicked = performance.now();
+    await flag.getByRole('button', { name: /^Treatments for/ }).click();
+    await drawer.getByTestId('treatment-option').first().waitFor();
+    treatmentLists.push(performance.now() - clicked);
+    const added = performance.now();
+    await drawer.getByTestId('treatment-option').first().getByRole('button', { name: 'Add to plan' }).click();
+    await drawer.getByTestId('treatment-standing').filter({ hasNotText: 'Checking' }).first().waitFor();
+    standings.push(performance.now() - added);
+    await context.close();
+  }
+  await browser.close();
+  line(`demo plan: the risk list's request, median of ${risksRequests.length}`, `${median(risksRequests).toFixed(0)} ms (max ${Math.max(...risksRequests).toFixed(0)} ms)`);
+  line(`demo plan: reload → risk rows shown, median of ${opens.length}`, `${median(opens).toFixed(0)} ms (max ${Math.max(...opens).toFixed(0)} ms; includes the page load)`);
+  line(`demo plan: click → treatment options shown, median of ${treatmentLists.length}`, `${median(treatmentLists).toFixed(0)} ms (max ${Math.max(...treatmentLists).toFixed(0)} ms)`);
+  line(`demo plan: Add to plan → its standing shown, median of ${standings.length}`, `${median(standings).toFixed(0)} ms (max ${Math.max(...standings).toFixed(0)} ms; autosave waits 0.5 s)`);
 }
 
 main()

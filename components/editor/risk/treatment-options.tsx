@@ -45,7 +45,7 @@ export function TreatmentOptionsPanel({ planId, version, flag, editable, onChoos
                   {option.description}
                   {option.planChange === null && <span className="block text-xs text-graphite-500">Recorded in the list; draw it on the plan yourself.</span>}
                 </td>
-                <td className="num pr-2 text-xs">{formatQuantity(option.before)} → {formatQuantity(option.after)}</td>
+                <td className="num pr-2 text-xs"><span data-testid="option-before">{formatQuantity(option.before)}</span> → <span data-testid="option-after">{formatQuantity(option.after)}</span></td>
                 <td className="pr-2 text-xs">
                   {option.clears ? '✓ yes' : '✗ no'}
                   {option.raises.length > 0 && (

@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { GET as getResults } from '@/app/api/v1/plans/[planId]/results/route';
 import { GET as getRisks } from '@/app/api/v1/plans/[planId]/risks/route';
 import { PUT as saveDocument } from '@/app/api/v1/plans/[planId]/document/route';
+import type { Resonance } from '@/lib/acoustic';
 import { sequelize } from '@/lib/db';
 import { newRoom, type PlanDocument } from '@/lib/plan';
 import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
@@ -76,7 +77,7 @@ async function savedPlan(name: string, document: PlanDocument, metresPerPixel: n
   return planId;
 }
 
-const byOrder = (runs: readonly RunResult[]) => new Map(runs.flatMap((run) => (run.analysis?.resonances ?? []).map((resonance) => [`${run.runId}:${resonance.order}`, resonance] as const)));
+const byOrder = (runs: readonly RunResult[]) => new Map<string, Resonance>(runs.flatMap((run) => (run.analysis?.resonances ?? []).map((resonance) => [`${run.runId}:${resonance.order}`, resonance] as const)));
 
 async function checkOneTruth(planId: string): Promise<void> {
   const cookie = await team.cookieFor('engineer');

@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { ChangesTable } from '@/components/revisions/changes-table';
 import { FinishReview } from '@/components/revisions/finish-review';
+import { TreatmentTable } from '@/components/revisions/treatment-table';
 import { RevisionStateBadge } from '@/components/revisions/revision-state-badge';
 import { RevisionWorkspace } from '@/components/revisions/revision-workspace';
 import { requireActor } from '@/lib/auth/current';
@@ -63,6 +64,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
         <p className="text-sm text-graphite-500" data-testid="review-tally">{tally.accepted} accepted · {tally.flagged} flagged · {tally.open} not reviewed, of {tally.rows} rows.</p>
       )}
       <ChangesTable changes={changes} number={revision.number} />
+      <TreatmentTable treatments={revision.extras.treatments ?? []} />
       <RevisionWorkspace
         planId={planId} revisionId={revision.id} document={revision.document} metresPerPixel={revision.metresPerPixel} background={background}
         runs={revision.analysis} risks={revision.extras.risks ?? []} canReview={canReview} canComment={can(role, 'comment.write')}
