@@ -70,15 +70,8 @@ export const SCHROEDER_COEFFICIENT = 2000;
 /** Sabine's constant in T60 = 0.161 V / A, s/m, metric form for air near 20 °C (W. C. Sabine, 1900; Kuttruff, Room Acoustics, ch. 5). */
 export const SABINE_CONSTANT_S_PER_M = 0.161;
 
-/** Directivity factor of a source on one, two or three reflecting planes: 2, 4, 8 (Long, Architectural Acoustics, 2nd ed., ch. 2). */
-export const DIRECTIVITY_PER_REFLECTING_PLANE = 2;
-
-/**
- * A reflecting plane adds to the outlet's low-frequency directivity while the outlet lies within a
- * quarter wavelength of it (from memory; the boundary interference of Waterhouse (1955), JASA 27, 247,
- * is constructive within about a quarter wavelength of a plane).
- */
-export const BOUNDARY_GAIN_WAVELENGTH_FRACTION = 1 / 4;
+/** sin(x)/x = 1/2 at x = 1.8955 (the first crossing; computed from the function, no source needed). */
+export const BOUNDARY_HALF_CONTRIBUTION_KD = 1.895494267033981;
 
 /** A-weighting at the octave bands 63 Hz to 8 kHz, dB: IEC 61672-1 (2013), Table 3. */
 export const A_WEIGHTING_OCTAVE_DB: readonly number[] = [-26.2, -16.1, -8.6, -3.2, 0, 1.2, 1.0, -1.1];

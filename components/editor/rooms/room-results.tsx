@@ -1,5 +1,6 @@
 'use client';
 
+import { directivityAt } from '@/lib/acoustic';
 import type { RoomResult } from '@/lib/plans/risks';
 import { ModeChart } from './mode-chart';
 import { ModeList } from './mode-list';
@@ -12,14 +13,14 @@ export function RoomResults({ result }: { result: RoomResult | null }) {
   if (!result) return <p className="text-sm text-graphite-500">Results appear once the room is saved.</p>;
   if (result.problem || !result.analysis) return <p className="text-sm text-graphite-700" role="status">{result.problem ?? 'No results yet.'}</p>;
   const analysis = result.analysis;
-  const q = analysis.outletBoundaryGain.steps[0];
+  const q = (hz: number) => directivityAt(analysis.outletBoundaryGain, hz).toFixed(1);
   return (
     <div className="space-y-4" data-testid="room-results">
       <dl className="num grid grid-cols-2 gap-x-3 gap-y-1 text-xs">
         <dt className="text-graphite-500">Volume</dt><dd>{analysis.volumeM3.toFixed(0)} m³</dd>
         <dt className="text-graphite-500">Reverberation (500 Hz–1 kHz)</dt><dd>{analysis.midReverberationTimeS.toFixed(2)} s</dd>
         <dt className="text-graphite-500">Schroeder frequency</dt><dd>{analysis.schroederHz.toFixed(0)} Hz</dd>
-        <dt className="text-graphite-500">Outlet boundary gain</dt><dd>{q ? `Q ${q.q} below ${q.belowHz.toFixed(0)} Hz` : 'Q 1 (away from surfaces)'}</dd>
+        <dt className="text-graphite-500">Outlet boundary gain</dt><dd>Q {q(63)} at 63 Hz, {q(250)} at 250 Hz, {q(1000)} at 1 kHz</dd>
         <dt className="text-graphite-500">First comb notch</dt><dd>{analysis.firstCombNotchHz === null ? '—' : `${analysis.firstCombNotchHz.toFixed(0)} Hz`}</dd>
       </dl>
       <section><h3 className="mb-1 text-xs font-semibold">Modes, duct resonances and fan tones</h3>

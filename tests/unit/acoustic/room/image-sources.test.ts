@@ -35,21 +35,38 @@ describe('image sources in a rectangular room (Allen & Berkley 1979, JASA 65)', 
   });
 });
 
-describe('boundary gain: Q = 2, 4, 8 on one, two, three planes (Long, Architectural Acoustics ch. 2), below c / 4d (quarter-wave rule, from memory)', () => {
-  it('Q by position', () => {
+describe('boundary gain near rigid planes (Waterhouse (1955), JASA 27: image sum of sin(kD)/(kD); low-frequency limits 2, 4, 8 as in Long, Architectural Acoustics ch. 2)', () => {
+  const c = 343;
+  it('tends to 2, 4 and 8 on one, two and three planes at low frequency', () => {
     const corner = boundaryGain(box, { xM: 0.2, yM: 0.25, zM: 0.1 });
-    expect(corner.steps.map((step) => step.q)).toEqual([8, 4, 2]);
-    expectClose(corner.steps[0].belowHz, 343 / (4 * 0.25), 1e-9, 'Q = 8 below c / 4 d_max');
-    expect(directivityAt(corner, 63)).toBe(8);
-    // c / 4 d: 857.5 Hz (z, 0.1 m), 428.75 Hz (x, 0.2 m), 343 Hz (y, 0.25 m)
-    expect(directivityAt(corner, 400)).toBe(4);
-    expect(directivityAt(corner, 500)).toBe(2);
-    expect(directivityAt(corner, 1000)).toBe(1);
-    const edge = boundaryGain(box, { xM: 5, yM: 0.2, zM: 4 });
-    expect(directivityAt(edge, 125)).toBe(4);
-    const wall = boundaryGain(box, { xM: 5, yM: 4, zM: 0 });
-    expect(directivityAt(wall, 125)).toBe(2);
-    const middle = boundaryGain(box, { xM: 5, yM: 4, zM: 2 });
-    expect(directivityAt(middle, 63)).toBe(1);
+    expectClose(directivityAt(corner, 1), 8, 1e-3, 'corner');
+    // an edge: two planes 0.1 m away, the third 15 m away, whose images (30 m) add under 0.03 each at 50 Hz
+    const hall: RoomBox = { lengthM: 200, widthM: 200, heightM: 30, speedOfSoundMps: c };
+    expectClose(directivityAt(boundaryGain(hall, { xM: 0.1, yM: 0.1, zM: 15 }), 50), 4, 0.15, 'edge');
+    expectClose(directivityAt(boundaryGain(hall, { xM: 100, yM: 0.1, zM: 15 }), 50), 2, 0.1, 'one plane');
+  });
+
+  it('one plane follows 1 + sin(2kd)/(2kd): 1.6366 at d = lambda/8, 1 (0 dB) at d = lambda/4, never a step', () => {
+    // a flush ceiling outlet is on the plane (d = 0): its image coincides, 2 at every frequency; the
+    // other two planes are far, so evaluate the one-plane curve with a point 0.5 m below the ceiling
+    // of a large room at frequencies where the far planes' images have decayed
+    const hall: RoomBox = { lengthM: 200, widthM: 200, heightM: 30, speedOfSoundMps: c };
+    const d = 0.5;
+    const point = { xM: 100, yM: 100, zM: 30 - d };
+    const gain = boundaryGain(hall, point);
+    const onePlane = (hz: number) => 1 + Math.sin((4 * Math.PI * hz * d) / c) / ((4 * Math.PI * hz * d) / c);
+    const eighth = c / (8 * d); // d = lambda / 8
+    const quarter = c / (4 * d); // d = lambda / 4
+    // the far images (>= 59 m away) add |sin(kD)/(kD)| < 1/(kD): under 0.03 in all here
+    expectClose(directivityAt(gain, eighth), onePlane(eighth), 0.03, 'd = lambda/8');
+    expectClose(onePlane(eighth), 1 + 2 / Math.PI, 1e-12, '1 + sin(pi/2)/(pi/2)');
+    expectClose(directivityAt(gain, quarter), 1, 0.03, 'd = lambda/4: 0 dB');
+    // smooth: no jump across the old quarter-wave step
+    expect(Math.abs(directivityAt(gain, quarter * 0.99) - directivityAt(gain, quarter * 1.01))).toBeLessThan(0.1);
+  });
+
+  it('a point on a plane keeps Q 2 from that plane at every frequency', () => {
+    const flush = boundaryGain(box, { xM: 5, yM: 4, zM: 0 });
+    for (const hz of [63, 500, 4000]) expect(directivityAt(flush, hz)).toBeGreaterThan(1.9);
   });
 });
