@@ -135,6 +135,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     : null), [plan.background]);
 
   const openRoom = openRoomId ? doc.rooms.find((room) => room.id === openRoomId) ?? null : null;
+  const openRoomFlags = useMemo(() => (risks.data?.flags ?? []).filter((flag) => flag.roomId === openRoomId), [risks.data, openRoomId]);
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
@@ -208,7 +209,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         </div>
         <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (
-            <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null} unitSystem={unitSystem} editable={editable}
+            <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null}
+              flags={openRoomFlags} unitSystem={unitSystem} editable={editable}
               onChange={(changes) => roomActions.updateRoom(openRoom.id, changes)} onDelete={() => roomActions.deleteRoom(openRoom.id)} onClose={() => setOpenRoomId(null)} />
           ) : selectedSegment ? (
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}

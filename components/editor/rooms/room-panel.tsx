@@ -1,6 +1,7 @@
 'use client';
 
 import { useEffect, useState } from 'react';
+import type { RiskFlag } from '@/lib/acoustic';
 import { runLeaves, type PlanDocument, type PlanRoom } from '@/lib/plan';
 import type { RoomResult } from '@/lib/plans/risks';
 import type { UnitSystem } from '@/models/user';
@@ -16,6 +17,8 @@ interface RoomPanelProps {
   metresPerPixel: number;
   room: PlanRoom;
   result: RoomResult | null;
+  /** The room's flags on the saved plan (the mode list marks the modes they cite). */
+  flags: readonly RiskFlag[];
   unitSystem: UnitSystem;
   editable: boolean;
   onChange: (changes: Partial<Omit<PlanRoom, 'id'>>) => void;
@@ -29,7 +32,7 @@ function runEnds(doc: PlanDocument): { nodeId: string; label: string }[] {
 }
 
 // The room's form (name, size, finishes, criterion, outlet and listener) and its results.
-export function RoomPanel({ document, metresPerPixel, room, result, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
+export function RoomPanel({ document, metresPerPixel, room, result, flags, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
   const [name, setName] = useState(room.name);
   useEffect(() => setName(room.name), [room.name]);
   const side = (key: 'lengthM' | 'widthM' | 'heightM') => (valueM: number | null) => { if (valueM !== null) onChange({ [key]: valueM }); };
@@ -41,7 +44,7 @@ export function RoomPanel({ document, metresPerPixel, room, result, unitSystem, 
       </div>
       <details open>
         <summary className="cursor-pointer text-xs font-semibold">Results from the saved plan</summary>
-        <div className="mt-2"><RoomResults result={result} /></div>
+        <div className="mt-2"><RoomResults result={result} flags={flags} /></div>
       </details>
       <fieldset disabled={!editable} className="space-y-3">
         <legend className="mb-1 text-xs font-semibold">Properties</legend>
