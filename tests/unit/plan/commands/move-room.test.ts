@@ -24,7 +24,7 @@ describe('move-room', () => {
   });
 
   it('is one undo step in the editor model, and undo restores the room where it was', () => {
-    let model: EditorModel = initialModel(roomPlanDocument(), 1, ROOM_PLAN_METRES_PER_PIXEL);
+    let model: EditorModel = initialModel(roomPlanDocument(), 1, ROOM_PLAN_METRES_PER_PIXEL, true);
     const dispatch = (action: EditorAction) => { model = editorReducer(model, action); };
     runCommand(model, dispatch, 'move-room', { roomId: 'recital', to: { x: 400, y: 50 } });
     expect(model.history.present.rooms[0]).toMatchObject({ x: 400, y: 50 });
@@ -44,7 +44,7 @@ describe('move-room', () => {
   });
 
   it('a refused move in the editor changes nothing and says why', () => {
-    let model: EditorModel = initialModel(roomPlanDocument(), 1, ROOM_PLAN_METRES_PER_PIXEL);
+    let model: EditorModel = initialModel(roomPlanDocument(), 1, ROOM_PLAN_METRES_PER_PIXEL, true);
     const dispatch = (action: EditorAction) => { model = editorReducer(model, action); };
     expect(runCommand(model, dispatch, 'move-room', { roomId: 'recital', to: { x: Number.NaN, y: 0 } })).toBeNull();
     expect(model.history.past).toHaveLength(0);
