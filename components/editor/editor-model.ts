@@ -2,7 +2,7 @@
 // changed only through `editorReducer`. Commands come from lib/plan and stay pure. A plan the
 // person may not change refuses every edit here, whichever tool, key or panel asked for it.
 import {
-  canRedo, canUndo, createHistory, initialEditorState, normalizeState, push, redo, tryCommand, undo,
+  canRedo, canUndo, createHistory, initialEditorState, normalizeState, placeOutletsAtEnds, push, redo, tryCommand, undo,
   type CommandArgs, type CommandName, type EditorState, type History, type PlanDocument,
 } from '@/lib/plan';
 
@@ -60,6 +60,12 @@ export function initialModel(document: PlanDocument, version: number, metresPerP
   return { editable, history: createHistory(document), state, metresPerPixel, version, savedDocument: document, savedMetresPerPixel: metresPerPixel, saveStatus: 'saved', notice: null };
 }
 
+/** A new scale keeps drawn points where they are; each linked outlet is placed again at its duct end (scale changes are not undo steps). */
+function withScale(model: EditorModel, metresPerPixel: number): EditorModel {
+  const present = placeOutletsAtEnds(model.history.present, metresPerPixel);
+  return { ...model, metresPerPixel, history: present === model.history.present ? model.history : { ...model.history, present } };
+}
+
 export function isDirty(model: EditorModel): boolean {
   return model.history.present !== model.savedDocument || model.metresPerPixel !== model.savedMetresPerPixel;
 }
@@ -83,8 +89,10 @@ export function editorReducer(model: EditorModel, action: EditorAction): EditorM
     }
     case 'set-state':
       return { ...model, state: action.state };
-    case 'set-scale':
-      return afterEdit({ ...model, metresPerPixel: action.metresPerPixel }, model.history, model.state);
+    case 'set-scale': {
+      const scaled = withScale(model, action.metresPerPixel);
+      return afterEdit(scaled, scaled.history, model.state);
+    }
     case 'save-started':
       return { ...model, saveStatus: 'saving' };
     case 'save-succeeded': {

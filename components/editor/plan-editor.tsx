@@ -96,7 +96,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const onNodeDrag = useCallback((nodeId: string, point: Point, phase: 'move' | 'end') => {
     if (phase !== 'end') return;
     const current = modelRef.current;
-    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)) });
+    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)), metresPerPixel: current.metresPerPixel });
   }, []);
 
   // A dragged room's corner lands on the grid, as a dragged point does; a drag back to where it was changes nothing.
@@ -105,7 +105,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     const to = snapToGrid(corner, gridSpacingPx(current.metresPerPixel));
     const room = findRoom(current.history.present, roomId);
     if (room && room.x === to.x && room.y === to.y) return;
-    runCommand(current, dispatch, 'move-room', { roomId, to });
+    runCommand(current, dispatch, 'move-room', { roomId, to, metresPerPixel: current.metresPerPixel });
   }, []);
 
   const selection = model.state.selection;

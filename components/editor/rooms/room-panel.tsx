@@ -2,11 +2,12 @@
 
 import { useEffect, useState } from 'react';
 import type { RiskFlag } from '@/lib/acoustic';
-import { runLeaves, type PlanDocument, type PlanRoom } from '@/lib/plan';
+import { outletLink, runLeaves, type PlanDocument, type PlanRoom } from '@/lib/plan';
 import type { RoomResult } from '@/lib/plans/risks';
 import type { UnitSystem } from '@/models/user';
 import { LengthInput } from '../panels/length-input';
 import { NumberInput } from '../panels/number-input';
+import { OutletLinkStatus } from './outlet-link-status';
 import { PointFields } from './point-fields';
 import { RoomResults } from './room-results';
 import { SoundPowerField } from './sound-power-field';
@@ -71,6 +72,8 @@ export function RoomPanel({ document, metresPerPixel, room, result, flags, unitS
             {runEnds(document).map((end) => <option key={end.nodeId} value={end.nodeId}>{end.label}</option>)}
           </select>
         </div>
+        {/* An outlet placed here takes its duct end along; any other room change puts the outlet back at its end. */}
+        <OutletLinkStatus link={outletLink(document, room, metresPerPixel)} unitSystem={unitSystem} editable={editable} onJoin={() => onChange({})} />
         <PointFields label="Outlet" point={room.outlet} unitSystem={unitSystem} onCommit={(point) => onChange({ outlet: { ...room.outlet, ...point } })} />
         <PointFields label="Listener" point={room.listener} unitSystem={unitSystem} onCommit={(listener) => onChange({ listener })} />
         <SoundPowerField value={room.outletSoundPowerDb} onCommit={(outletSoundPowerDb) => onChange({ outletSoundPowerDb })} />
