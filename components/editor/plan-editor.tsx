@@ -148,7 +148,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         </div>
       </div>
       <div className="flex min-h-0 flex-1">
-        <ToolStrip tool={tool} editable={editable} onTool={chooseTool} />
+        <ToolStrip tool={tool} editable={model.editable} onTool={chooseTool} />
         <div className="relative min-w-0 flex-1 bg-paper-sunk" ref={canvasArea} data-testid="plan-canvas">
           {canvasSize.width > 0 && (
             <PlanCanvas
