@@ -1,13 +1,15 @@
 // The editor's state outside React: the document history, selection, scale and save state,
-// changed only through `editorReducer`. Commands come from lib/plan and stay pure.
+// changed only through `editorReducer`. Commands come from lib/plan and stay pure. A plan the
+// person may not change refuses every edit here, whichever tool, key or panel asked for it.
 import {
-  canRedo, canUndo, createHistory, initialEditorState, normalizeState, push, redo, tryCommand, undo,
+  canRedo, canUndo, createHistory, initialEditorState, normalizeState, placeOutletsAtEnds, push, redo, tryCommand, undo,
   type CommandArgs, type CommandName, type EditorState, type History, type PlanDocument,
 } from '@/lib/plan';
 
 export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error';
 
 export interface EditorModel {
+  editable: boolean;               // false for roles that may only read the plan: every edit is refused
   history: History<PlanDocument>;
   state: EditorState;
   metresPerPixel: number;
@@ -32,18 +34,36 @@ export type EditorAction =
   | { type: 'reload'; version: number; document: PlanDocument; metresPerPixel: number }
   | { type: 'notice'; message: string | null };
 
+export const READ_ONLY_NOTICE = 'Your role can read this plan but not change it.';
+
+/** The actions that change the plan (its document or its scale). */
+const EDITS: ReadonlySet<EditorAction['type']> = new Set(['apply', 'undo', 'redo', 'set-scale']);
+
+/** Why the model refuses an edit, or null when it takes edits: the one check behind every tool, key and panel. */
+export function editRefusal(model: Pick<EditorModel, 'editable'>): string | null {
+  return model.editable ? null : READ_ONLY_NOTICE;
+}
+
 // Runs a command on the model's document; the result is applied (one undo step) or the
 // refusal shown. Returns the new document and state, or null when refused.
 export function runCommand<Name extends CommandName>(model: EditorModel, dispatch: (action: EditorAction) => void, name: Name, args: CommandArgs<Name>): { doc: PlanDocument; state: EditorState } | null {
+  const refusal = editRefusal(model);
+  if (refusal) { dispatch({ type: 'notice', message: refusal }); return null; }
   const result = tryCommand(name, model.history.present, model.state, args);
   if (!result.ok) { dispatch({ type: 'notice', message: result.error.message }); return null; }
   dispatch({ type: 'apply', document: result.doc, state: result.state });
   return { doc: result.doc, state: result.state };
 }
 
-export function initialModel(document: PlanDocument, version: number, metresPerPixel: number): EditorModel {
+export function initialModel(document: PlanDocument, version: number, metresPerPixel: number, editable: boolean): EditorModel {
   const state = { ...initialEditorState(), activeRunId: document.runs[0]?.id ?? null };
-  return { history: createHistory(document), state, metresPerPixel, version, savedDocument: document, savedMetresPerPixel: metresPerPixel, saveStatus: 'saved', notice: null };
+  return { editable, history: createHistory(document), state, metresPerPixel, version, savedDocument: document, savedMetresPerPixel: metresPerPixel, saveStatus: 'saved', notice: null };
+}
+
+/** A new scale keeps drawn points where they are; each linked outlet is placed again at its duct end (scale changes are not undo steps). */
+function withScale(model: EditorModel, metresPerPixel: number): EditorModel {
+  const present = placeOutletsAtEnds(model.history.present, metresPerPixel);
+  return { ...model, metresPerPixel, history: present === model.history.present ? model.history : { ...model.history, present } };
 }
 
 export function isDirty(model: EditorModel): boolean {
@@ -56,6 +76,8 @@ function afterEdit(model: EditorModel, history: History<PlanDocument>, state: Ed
 }
 
 export function editorReducer(model: EditorModel, action: EditorAction): EditorModel {
+  const refusal = EDITS.has(action.type) ? editRefusal(model) : null;
+  if (refusal) return { ...model, notice: refusal };
   switch (action.type) {
     case 'apply':
       return afterEdit(model, push(model.history, action.document), action.state);
@@ -67,8 +89,10 @@ export function editorReducer(model: EditorModel, action: EditorAction): EditorM
     }
     case 'set-state':
       return { ...model, state: action.state };
-    case 'set-scale':
-      return afterEdit({ ...model, metresPerPixel: action.metresPerPixel }, model.history, model.state);
+    case 'set-scale': {
+      const scaled = withScale(model, action.metresPerPixel);
+      return afterEdit(scaled, scaled.history, model.state);
+    }
     case 'save-started':
       return { ...model, saveStatus: 'saving' };
     case 'save-succeeded': {
@@ -83,7 +107,7 @@ export function editorReducer(model: EditorModel, action: EditorAction): EditorM
       // Overwrite: keep my document, aim the next save at the server's newest version.
       return { ...model, version: action.version, savedDocument: { ...model.savedDocument }, saveStatus: 'unsaved', notice: null };
     case 'reload': {
-      const fresh = initialModel(action.document, action.version, action.metresPerPixel);
+      const fresh = initialModel(action.document, action.version, action.metresPerPixel, model.editable);
       return { ...fresh, state: normalizeState(action.document, model.state) };
     }
     case 'notice':

@@ -4,7 +4,7 @@ import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
 import { planLabels } from '@/lib/plan/labels';
-import { findNode, findRoom, findRun, findSegment, matchKeyBinding, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
+import { findNode, findRoom, findRun, findSegment, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
 import { formatLength } from '@/lib/plan/units';
 import type { PlanView } from '@/lib/plans/data';
 import type { UnitSystem } from '@/models/user';
@@ -16,7 +16,7 @@ import { BackgroundUpload } from './background-upload';
 import { ConflictDialog } from './dialogs/conflict-dialog';
 import { HelpOverlay } from './dialogs/help-overlay';
 import { ScaleDialog } from './dialogs/scale-dialog';
-import { editorReducer, initialModel, runCommand } from './editor-model';
+import { editorReducer, editRefusal, initialModel, runCommand } from './editor-model';
 import { EndPanel } from './panels/end-panel';
 import { ResultsPanel } from './panels/results-panel';
 import { RunPanel } from './panels/run-panel';
@@ -24,7 +24,7 @@ import { SegmentPanel } from './panels/segment-panel';
 import { SaveStatusLabel } from './save-status';
 import { ScheduleCsvControls } from './schedule-csv-controls';
 import { ToolStrip } from './tool-strip';
-import type { ToolName } from './tools';
+import { mayUseTool, type ToolName } from './tools';
 import { useAutosave } from './use-autosave';
 import { gridSpacingPx, useCanvasTools } from './use-canvas-tools';
 import { usePlanResults } from './use-plan-results';
@@ -32,11 +32,10 @@ import { usePlanRisks } from './use-plan-risks';
 import { RiskDrawer } from './risk/risk-drawer';
 import { RoomPanel } from './rooms/room-panel';
 import { useRoomActions } from './rooms/use-room-actions';
+import { useEditorKeys } from './use-editor-keys';
 import { useElementSize } from './use-element-size';
 
 const PlanCanvas = dynamic(() => import('./canvas/plan-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-500">Loading the canvas…</p> });
-
-const TOOL_KEYS: Record<string, ToolName> = { h: 'pan', k: 'scale', r: 'room' };
 
 // canEvaluate: may open a flag's candidate treatments (analysis.run); defaults to editable.
 export interface PlanEditorProps {
@@ -64,7 +63,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const onViewChange = useCallback((next: PinView) => setPinView({ scale: next.scale, offsetX: next.offsetX, offsetY: next.offsetY }), []);
   const [sideTab, setSideTab] = useState<'results' | 'comments'>(commentSettings.initialActiveId ? 'comments' : 'results');
   useEffect(() => { if (comments.placing || comments.activeId) setSideTab('comments'); }, [comments.placing, comments.activeId]);
-  const [model, dispatch] = useReducer(editorReducer, plan, (initial) => initialModel(initial.document, initial.version, initial.metresPerPixel));
+  const [model, dispatch] = useReducer(editorReducer, plan, (initial) => initialModel(initial.document, initial.version, initial.metresPerPixel, editable));
   const [tool, setTool] = useState<ToolName>(editable && plan.document.segments.length === 0 ? 'draw' : editable ? 'select' : 'pan');
   const [helpOpen, setHelpOpen] = useState(false);
   const [calibrated, setCalibrated] = useState<[Point, Point] | null>(null);
@@ -88,32 +87,18 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const resonance = activeResult?.analysis?.resonances.find((candidate) => candidate.order === selectedOrder) ?? null;
   useEffect(() => setSelectedOrder(null), [activeRunId]);
 
-  const chooseTool = useCallback((next: ToolName) => { tools.cancel(); setTool(next); }, [tools]);
-
-  useEffect(() => {
-    const onKey = (event: KeyboardEvent) => {
-      const target = event.target as HTMLElement;
-      if (target.closest('input, textarea, select, [contenteditable="true"]')) return;
-      if (event.key === '?') { setHelpOpen((open) => !open); return; }
-      const action = matchKeyBinding(event);
-      const toolKey = !event.ctrlKey && !event.metaKey ? TOOL_KEYS[event.key.toLowerCase()] : undefined;
-      if (toolKey) { chooseTool(toolKey); return; }
-      if (!action) return;
-      event.preventDefault();
-      if (action === 'cancel') { tools.cancel(); setHelpOpen(false); dispatch({ type: 'set-state', state: { ...modelRef.current.state, selection: { nodeIds: [], segmentIds: [] } } }); return; }
-      if (!editable && action !== 'tool-select') return;
-      if (action === 'undo' || action === 'redo') dispatch({ type: action });
-      else if (action === 'delete-selection') runCommand(modelRef.current, dispatch, 'delete-selection', {});
-      else chooseTool(({ 'tool-select': 'select', 'tool-draw': 'draw', 'tool-split': 'split', 'tool-tee': 'tee' } as const)[action]);
-    };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [editable, chooseTool, tools]);
+  // A tool that would change the plan is refused, with the reason, when the person may only read it.
+  const chooseTool = useCallback((next: ToolName) => {
+    if (!mayUseTool(next, modelRef.current.editable)) { dispatch({ type: 'notice', message: editRefusal(modelRef.current) }); return; }
+    tools.cancel();
+    setTool(next);
+  }, [tools]);
+  useEditorKeys({ modelRef, dispatch, chooseTool, cancelTool: tools.cancel, setHelpOpen });
 
   const onNodeDrag = useCallback((nodeId: string, point: Point, phase: 'move' | 'end') => {
     if (phase !== 'end') return;
     const current = modelRef.current;
-    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)) });
+    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)), metresPerPixel: current.metresPerPixel });
   }, []);
 
   // A dragged room's corner lands on the grid, as a dragged point does; a drag back to where it was changes nothing.
@@ -122,7 +107,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     const to = snapToGrid(corner, gridSpacingPx(current.metresPerPixel));
     const room = findRoom(current.history.present, roomId);
     if (room && room.x === to.x && room.y === to.y) return;
-    runCommand(current, dispatch, 'move-room', { roomId, to });
+    runCommand(current, dispatch, 'move-room', { roomId, to, metresPerPixel: current.metresPerPixel });
   }, []);
 
   const selection = model.state.selection;
@@ -137,6 +122,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     : null), [plan.background]);
 
   const openRoom = openRoomId ? doc.rooms.find((room) => room.id === openRoomId) ?? null : null;
+  const openRoomFlags = useMemo(() => (risks.data?.flags ?? []).filter((flag) => flag.roomId === openRoomId), [risks.data, openRoomId]);
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
@@ -164,7 +150,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         </div>
       </div>
       <div className="flex min-h-0 flex-1">
-        <ToolStrip tool={tool} editable={editable} onTool={chooseTool} />
+        <ToolStrip tool={tool} editable={model.editable} onTool={chooseTool} />
         <div className="relative min-w-0 flex-1 bg-paper-sunk" ref={canvasArea} data-testid="plan-canvas">
           {canvasSize.width > 0 && (
             <PlanCanvas
@@ -175,7 +161,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               gridSpacingPx={gridSpacingPx(model.metresPerPixel)}
               metresPerPixel={model.metresPerPixel}
               selection={selection}
-              editable={editable && tool === 'select'}
+              editable={model.editable && tool === 'select'}
               panning={tool === 'pan' && !comments.placing}
               mainPath={activeResult?.path ?? []}
               mode={resonance && activeResult?.analysis ? { resonance, speedOfSoundMps: activeResult.analysis.speedOfSoundMps } : null}
@@ -210,7 +196,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         </div>
         <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (
-            <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null} unitSystem={unitSystem} editable={editable}
+            <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null}
+              flags={openRoomFlags} unitSystem={unitSystem} editable={editable}
               onChange={(changes) => roomActions.updateRoom(openRoom.id, changes)} onDelete={() => roomActions.deleteRoom(openRoom.id)} onClose={() => setOpenRoomId(null)} />
           ) : selectedSegment ? (
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} label={labels.segments[selectedSegment.id] ?? ''} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}

@@ -1,9 +1,10 @@
 'use client';
 
-import { TOOLS, type ToolName } from './tools';
+import { mayUseTool, TOOLS, type ToolName } from './tools';
 
+// The tools this person may use; the editor refuses the others whatever asks for them.
 export function ToolStrip({ tool, editable, onTool }: { tool: ToolName; editable: boolean; onTool: (tool: ToolName) => void }) {
-  const shown = editable ? TOOLS : TOOLS.filter((candidate) => candidate.name === 'select' || candidate.name === 'pan');
+  const shown = TOOLS.filter((candidate) => mayUseTool(candidate.name, editable));
   return (
     <div role="toolbar" aria-label="Drawing tools" aria-orientation="vertical" className="flex w-20 flex-col gap-1 border-r border-graphite-100 bg-paper-raised p-2">
       {shown.map((candidate) => (

@@ -5,7 +5,7 @@ import { useCallback, useRef, useState, type Dispatch } from 'react';
 import { findNode, findSegment, snapPoint, type NodeRef, type Point } from '@/lib/plan';
 import type { CanvasPointer } from './canvas/plan-canvas';
 import { runCommand, type EditorAction, type EditorModel } from './editor-model';
-import type { ToolName } from './tools';
+import { mayUseTool, type ToolName } from './tools';
 
 const SNAP_RADIUS_SCREEN_PX = 10;
 // Two clicks this close in time and place end a drawn chain (a double-click).
@@ -64,6 +64,7 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
   const cancel = useCallback(() => { setDrawFrom(null); setTeeAt(null); setCalibration([]); setRoomFrom(null); }, []);
 
   const onPointer = useCallback((event: CanvasPointer) => {
+    if (!mayUseTool(tool, model.editable)) return;
     if (event.type === 'move') { setPointer(event.point); return; }
     if (event.type === 'dblclick') return;
     const previous = lastDown.current;

@@ -29,6 +29,17 @@ export async function canvasBox(page: Page) {
   return box;
 }
 
+// The canvas has taken the size of its area (after the drawer under it opened or closed), so the
+// view has been fitted to it again.
+export async function waitForCanvasFit(page: Page): Promise<void> {
+  const area = page.getByTestId('plan-canvas');
+  await expect.poll(async () => {
+    const outer = await area.boundingBox();
+    const inner = await canvasBox(page);
+    return outer !== null && Math.abs(outer.width - inner.width) < 1.5 && Math.abs(outer.height - inner.height) < 1.5;
+  }).toBe(true);
+}
+
 // Where a plan point is on the screen while the canvas shows a plan without a drawing, as it was
 // fitted when the plan opened: the app's own opening area (the drawn runs and rooms, or the whole
 // grid for an empty plan) and fitView. Pass the document as it was when the page was loaded.

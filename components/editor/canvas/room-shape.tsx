@@ -13,11 +13,10 @@ interface RoomShapeProps {
 }
 
 // A room: its rectangle at the plan's scale, its name and size under it (outside the outline, clear of
-// the duct that feeds the outlet), the outlet (square) and the listener (ring). Selected rooms take the
-// selection accent; a room with flags says so in its label.
+// the duct that feeds the outlet) and the listener (ring); the outlet is drawn with its link to the duct
+// end (outlet-link-shape.tsx). Selected rooms take the selection accent; a room with flags says so in its label.
 export const RoomShape = memo(function RoomShape({ room, metresPerPixel, selected, flagged, scale }: RoomShapeProps) {
   const rect = roomRectPx(room, metresPerPixel);
-  const outlet = roomPointPx(room, room.outlet, metresPerPixel);
   const listener = roomPointPx(room, room.listener, metresPerPixel);
   const marker = 5 / scale;
   const label = `${room.name}\n${room.lengthM.toFixed(1)} × ${room.widthM.toFixed(1)} m · NC ${room.criterionNc}${flagged ? ' · ⚠ flagged' : ''}`;
@@ -28,7 +27,6 @@ export const RoomShape = memo(function RoomShape({ room, metresPerPixel, selecte
         strokeWidth={(selected ? 2 : 1) / scale} dash={[8 / scale, 4 / scale]} perfectDrawEnabled={false} />
       <Text x={rect.x} y={rect.y + rect.height + 4 / scale} text={label} fontSize={11 / scale} lineHeight={1.25} fontFamily="IBM Plex Sans, sans-serif"
         fill={flagged ? '#8a3d12' : '#25282d'} listening={false} />
-      <Rect x={outlet.x - marker} y={outlet.y - marker} width={2 * marker} height={2 * marker} stroke="#25282d" strokeWidth={1.5 / scale} listening={false} />
       <Circle x={listener.x} y={listener.y} radius={marker} stroke="#25282d" strokeWidth={1.5 / scale} listening={false} />
       <Text x={listener.x + marker * 1.4} y={listener.y - marker} text="listener" fontSize={9 / scale} fill="#5d626b" listening={false} />
     </Group>

@@ -2,11 +2,13 @@
 
 import { planLabels } from '@/lib/plan/labels';
 import { useEffect, useState } from 'react';
-import { runLeaves, type PlanDocument, type PlanRoom } from '@/lib/plan';
+import type { RiskFlag } from '@/lib/acoustic';
+import { outletLink, runLeaves, type PlanDocument, type PlanRoom } from '@/lib/plan';
 import type { RoomResult } from '@/lib/plans/risks';
 import type { UnitSystem } from '@/models/user';
 import { LengthInput } from '../panels/length-input';
 import { NumberInput } from '../panels/number-input';
+import { OutletLinkStatus } from './outlet-link-status';
 import { PointFields } from './point-fields';
 import { RoomResults } from './room-results';
 import { SoundPowerField } from './sound-power-field';
@@ -17,6 +19,8 @@ interface RoomPanelProps {
   metresPerPixel: number;
   room: PlanRoom;
   result: RoomResult | null;
+  /** The room's flags on the saved plan (the mode list marks the modes they cite). */
+  flags: readonly RiskFlag[];
   unitSystem: UnitSystem;
   editable: boolean;
   onChange: (changes: Partial<Omit<PlanRoom, 'id'>>) => void;
@@ -31,7 +35,7 @@ function runEnds(doc: PlanDocument): { nodeId: string; label: string }[] {
 }
 
 // The room's form (name, size, finishes, criterion, outlet and listener) and its results.
-export function RoomPanel({ document, metresPerPixel, room, result, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
+export function RoomPanel({ document, metresPerPixel, room, result, flags, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
   const [name, setName] = useState(room.name);
   useEffect(() => setName(room.name), [room.name]);
   const side = (key: 'lengthM' | 'widthM' | 'heightM') => (valueM: number | null) => { if (valueM !== null) onChange({ [key]: valueM }); };
@@ -43,7 +47,7 @@ export function RoomPanel({ document, metresPerPixel, room, result, unitSystem, 
       </div>
       <details open>
         <summary className="cursor-pointer text-xs font-semibold">Results from the saved plan</summary>
-        <div className="mt-2"><RoomResults result={result} /></div>
+        <div className="mt-2"><RoomResults result={result} flags={flags} /></div>
       </details>
       <fieldset disabled={!editable} className="space-y-3">
         <legend className="mb-1 text-xs font-semibold">Properties</legend>
@@ -70,6 +74,8 @@ export function RoomPanel({ document, metresPerPixel, room, result, unitSystem, 
             {runEnds(document).map((end) => <option key={end.nodeId} value={end.nodeId}>{end.label}</option>)}
           </select>
         </div>
+        {/* An outlet placed here takes its duct end along; any other room change puts the outlet back at its end. */}
+        <OutletLinkStatus link={outletLink(document, room, metresPerPixel)} unitSystem={unitSystem} editable={editable} onJoin={() => onChange({})} />
         <PointFields label="Outlet" point={room.outlet} unitSystem={unitSystem} onCommit={(point) => onChange({ outlet: { ...room.outlet, ...point } })} />
         <PointFields label="Listener" point={room.listener} unitSystem={unitSystem} onCommit={(listener) => onChange({ listener })} />
         <SoundPowerField value={room.outletSoundPowerDb} onCommit={(outletSoundPowerDb) => onChange({ outletSoundPowerDb })} />

@@ -1,6 +1,6 @@
 'use client';
 
-import { directivityAt } from '@/lib/acoustic';
+import { directivityAt, type RiskFlag } from '@/lib/acoustic';
 import type { RoomResult } from '@/lib/plans/risks';
 import { ModeChart } from './mode-chart';
 import { ModeList } from './mode-list';
@@ -8,8 +8,9 @@ import { Reflectogram } from './reflectogram';
 import { SpectrumChart } from './spectrum-chart';
 
 // The room's results from the saved plan: figures, mode chart with the run's resonances and fan
-// tones, the mode list, the reflectogram at the listener and the spectrum against the criterion.
-export function RoomResults({ result }: { result: RoomResult | null }) {
+// tones, the mode list (with the modes the room's flags cite), the reflectogram at the listener and
+// the spectrum against the criterion.
+export function RoomResults({ result, flags }: { result: RoomResult | null; flags: readonly RiskFlag[] }) {
   if (!result) return <p className="text-sm text-graphite-500">Results appear once the room is saved.</p>;
   if (result.problem || !result.analysis) return <p className="text-sm text-graphite-700" role="status">{result.problem ?? 'No results yet.'}</p>;
   const analysis = result.analysis;
@@ -25,7 +26,7 @@ export function RoomResults({ result }: { result: RoomResult | null }) {
       </dl>
       <section><h3 className="mb-1 text-xs font-semibold">Modes, duct resonances and fan tones</h3>
         <ModeChart modes={analysis.modes} resonancesHz={result.resonancesHz} fanTonesHz={result.fanTonesHz} schroederHz={analysis.schroederHz} /></section>
-      <ModeList modes={analysis.modes} />
+      <ModeList modes={analysis.modes} flags={flags} />
       <section><h3 className="mb-1 text-xs font-semibold">Reflectogram at the listener</h3><Reflectogram images={analysis.images} /></section>
       <section><h3 className="mb-1 text-xs font-semibold">Spectrum against the criterion</h3>
         <SpectrumChart levels={result.levels} criterionDb={result.criterionDb} criterionNc={result.criterionNc} levelsNc={result.levelsNc} /></section>

@@ -15,7 +15,7 @@ export function useRoomActions(model: EditorModel, dispatch: Dispatch<EditorActi
   modelRef.current = model;
 
   const updateRoom = useCallback((roomId: string, changes: Partial<Omit<PlanRoom, 'id'>>) => {
-    runCommand(modelRef.current, dispatch, 'update-room', { roomId, changes });
+    runCommand(modelRef.current, dispatch, 'update-room', { roomId, changes, metresPerPixel: modelRef.current.metresPerPixel });
   }, [dispatch]);
 
   const deleteRoom = useCallback((roomId: string) => {

@@ -9,6 +9,9 @@ export type EditorAction =
   | 'tool-draw'
   | 'tool-split'
   | 'tool-tee'
+  | 'tool-room'
+  | 'tool-pan'
+  | 'tool-scale'
   | 'cancel';
 
 export interface KeyBinding {
@@ -23,6 +26,9 @@ export const KEY_BINDINGS: readonly KeyBinding[] = [
   { keys: 'D', action: 'tool-draw', description: 'Draw segments: click to add points, Escape to stop' },
   { keys: 'S', action: 'tool-split', description: 'Split a segment where you click' },
   { keys: 'T', action: 'tool-tee', description: 'Add a tee on a segment and draw its branch' },
+  { keys: 'R', action: 'tool-room', description: 'Draw a room from two opposite corners' },
+  { keys: 'H', action: 'tool-pan', description: 'Pan: drag to move around the plan' },
+  { keys: 'K', action: 'tool-scale', description: 'Set the scale from two points and their real distance' },
   { keys: 'Delete', action: 'delete-selection', description: 'Delete the selection' },
   { keys: 'Backspace', action: 'delete-selection', description: 'Delete the selection' },
   { keys: 'Ctrl+Z', action: 'undo', description: 'Undo' },

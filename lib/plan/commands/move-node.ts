@@ -1,17 +1,22 @@
-// Move a node (a segment end or a tee) to a new position on the plan.
+// Move a node (a segment end or a tee) to a new position on the plan. A room's outlet fed from
+// that end moves with it (to the nearest point inside the room when the end leaves the room).
 import { findNode } from '../document';
 import { PlanError } from '../errors';
 import type { Point } from '../geometry/point';
+import { checkedScale, placeOutletsAtEnds } from '../rooms/outlet-link';
 import { defineCommand } from './define';
 
 export interface MoveNodeArgs {
   readonly nodeId: string;
   readonly to: Point;
+  /** The plan scale, m per pixel: it places the outlet of a room fed from this end. */
+  readonly metresPerPixel: number;
 }
 
-export const moveNode = defineCommand('move-node', 'Move a point of the run.', (doc, state, args: MoveNodeArgs) => {
+export const moveNode = defineCommand('move-node', 'Move a point of the run (an outlet fed from it moves with it).', (doc, state, args: MoveNodeArgs) => {
   if (!findNode(doc, args.nodeId)) throw new PlanError(`There is no point with id "${args.nodeId}".`, { nodeId: args.nodeId });
   if (!Number.isFinite(args.to.x) || !Number.isFinite(args.to.y)) throw new PlanError('That point is off the plan.', { nodeId: args.nodeId });
+  const metresPerPixel = checkedScale(args.metresPerPixel);
   const nodes = doc.nodes.map((node) => (node.id === args.nodeId ? { ...node, x: args.to.x, y: args.to.y } : node));
-  return { doc: { ...doc, nodes }, state };
+  return { doc: placeOutletsAtEnds({ ...doc, nodes }, metresPerPixel, args.nodeId), state };
 });

@@ -1,7 +1,10 @@
-// Room edits: add a room, change any of its properties, move it, delete it.
+// Room edits: add a room, change any of its properties, move it, delete it. A room's outlet stays
+// with the duct end that feeds it: an outlet placed in the form takes its end along; any other
+// change (a new end, a move, a new size) puts the outlet at its end, or the nearest point inside.
 import { findNode, findRoom, type PlanDocument } from '../document';
 import { PlanError } from '../errors';
 import type { Point } from '../geometry/point';
+import { checkedScale, moveEndToOutlet, withOutletAtItsEnd } from '../rooms/outlet-link';
 import { newRoom, type NewRoomShape } from '../rooms/room-input';
 import { roomSchema } from '../rooms/room-schema';
 import type { PlanRoom } from '../rooms/room-types';
@@ -12,12 +15,16 @@ export type AddRoomArgs = NewRoomShape;
 export interface UpdateRoomArgs {
   readonly roomId: string;
   readonly changes: Partial<Omit<PlanRoom, 'id'>>;
+  /** The plan scale, m per pixel: it ties the outlet to its duct end. */
+  readonly metresPerPixel: number;
 }
 
 export interface MoveRoomArgs {
   readonly roomId: string;
   /** The room's new top-left corner, plan pixels. */
   readonly to: Point;
+  /** The plan scale, m per pixel: it ties the outlet to its duct end. */
+  readonly metresPerPixel: number;
 }
 
 export interface DeleteRoomArgs {
@@ -28,7 +35,10 @@ const AXES = [['xM', 'lengthM', 'length'], ['yM', 'widthM', 'width'], ['zM', 'he
 
 /** The schema's checks plus: outlet and listener inside the box, the outlet's point on the plan. */
 function checkedRoom(doc: PlanDocument, candidate: unknown): PlanRoom {
-  const room = checked(roomSchema, candidate, 'Room');
+  return checkedPlaces(doc, checked(roomSchema, candidate, 'Room'));
+}
+
+function checkedPlaces(doc: PlanDocument, room: PlanRoom): PlanRoom {
   for (const place of ['outlet', 'listener'] as const) {
     for (const [axis, side, word] of AXES) {
       if (room[place][axis] > room[side]) throw new PlanError(`Room ${place} ${axis.slice(0, 1)}: must be inside the room (at most its ${word}, ${room[side]} m).`, { roomId: room.id });
@@ -53,18 +63,32 @@ export const addRoom = defineCommand('add-room', 'Add a rectangular room to the 
   return { doc: { ...doc, rooms: [...doc.rooms, room] }, state };
 });
 
-export const updateRoom = defineCommand('update-room', "Change a room's size, place, finishes, criterion, outlet or listener.", (doc, state, args: UpdateRoomArgs) => {
+/** The same duct end, the outlet somewhere else: it was placed by hand. */
+function outletPlacedByHand(before: PlanRoom, after: PlanRoom): boolean {
+  return after.outlet.nodeId !== null && after.outlet.nodeId === before.outlet.nodeId && (after.outlet.xM !== before.outlet.xM || after.outlet.yM !== before.outlet.yM);
+}
+
+/** The document with the room changed, its outlet and duct end kept together. */
+function withChangedRoom(doc: PlanDocument, before: PlanRoom, candidate: unknown, metresPerPixel: number): PlanDocument {
+  const scale = checkedScale(metresPerPixel);
+  const after = checked(roomSchema, candidate, 'Room');
+  if (outletPlacedByHand(before, after)) {
+    const room = checkedPlaces(doc, after);
+    return moveEndToOutlet(replaceRoom(doc, room), room, scale);
+  }
+  return replaceRoom(doc, checkedPlaces(doc, withOutletAtItsEnd(doc, after, scale)));
+}
+
+export const updateRoom = defineCommand('update-room', "Change a room's size, place, finishes, criterion, outlet or listener (an outlet placed here takes its duct end along).", (doc, state, args: UpdateRoomArgs) => {
   const room = targetRoom(doc, args.roomId);
-  const changed = checkedRoom(doc, { ...room, ...args.changes, id: room.id });
-  return { doc: replaceRoom(doc, changed), state };
+  return { doc: withChangedRoom(doc, room, { ...room, ...args.changes, id: room.id }, args.metresPerPixel), state };
 });
 
-export const moveRoom = defineCommand('move-room', 'Move a room on the plan (its size, outlet and listener go with it).', (doc, state, args: MoveRoomArgs) => {
+export const moveRoom = defineCommand('move-room', 'Move a room on the plan (its size and listener go with it; its outlet stays at the duct end that feeds it).', (doc, state, args: MoveRoomArgs) => {
   const room = targetRoom(doc, args.roomId);
   // The schema names a missing or non-finite coordinate ("Room (x): …").
   const to: Partial<Point> = args.to ?? {};
-  const moved = checkedRoom(doc, { ...room, x: to.x, y: to.y });
-  return { doc: replaceRoom(doc, moved), state };
+  return { doc: withChangedRoom(doc, room, { ...room, x: to.x, y: to.y }, args.metresPerPixel), state };
 });
 
 export const deleteRoom = defineCommand('delete-room', 'Delete a room (its chosen treatments stay in the list).', (doc, state, args: DeleteRoomArgs) => {

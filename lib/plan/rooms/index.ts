@@ -3,3 +3,4 @@ export * from './room-types';
 export * from './finishes';
 export * from './room-input';
 export { roomSchema, planTreatmentSchema, treatmentSchema, planChangeSchema, roomNameSchema, roomSideMSchema, criterionNcSchema, roomPointSchema, absorptionBandsSchema, soundPowerBandsSchema, MAX_NC, MAX_ROOM_SIDE_M } from './room-schema';
+export * from './outlet-link';

@@ -9,7 +9,7 @@ describe('history', () => {
     const steps = [
       performCommand('split-segment', chain.doc, chain.state, { segmentId: chain.doc.segments[0].id, at: { x: 50, y: 0 } }),
     ];
-    steps.push(performCommand('move-node', steps[0].doc, steps[0].state, { nodeId: steps[0].state.selection.nodeIds[0], to: { x: 50, y: 40 } }));
+    steps.push(performCommand('move-node', steps[0].doc, steps[0].state, { nodeId: steps[0].state.selection.nodeIds[0], to: { x: 50, y: 40 }, metresPerPixel: 0.01 }));
     steps.push(performCommand('delete-selection', steps[1].doc, steps[1].state, {}));
     for (const step of steps) history = push(history, step.doc);
     const snapshots = [emptyDocument(), chain.doc, ...steps.map((step) => step.doc)];

@@ -5,10 +5,10 @@ import { drawChain, nodeAt } from '../fixtures';
 describe('move-node', () => {
   it('moves one node and the lengths follow', () => {
     const chain = drawChain([{ x: 0, y: 0 }, { x: 100, y: 0 }]);
-    const { doc } = performCommand('move-node', chain.doc, chain.state, { nodeId: chain.nodeIds[1], to: { x: 300, y: 400 } });
+    const { doc } = performCommand('move-node', chain.doc, chain.state, { nodeId: chain.nodeIds[1], to: { x: 300, y: 400 }, metresPerPixel: 0.01 });
     expect(doc.nodes[1]).toEqual({ id: chain.nodeIds[1], x: 300, y: 400 });
     expect(toRunInput(doc, doc.runs[0].id, 0.01).segments[0].lengthM).toBe(5);
-    expect(tryCommand('move-node', chain.doc, chain.state, { nodeId: chain.nodeIds[1], to: { x: Number.NaN, y: 0 } }).ok).toBe(false);
+    expect(tryCommand('move-node', chain.doc, chain.state, { nodeId: chain.nodeIds[1], to: { x: Number.NaN, y: 0 }, metresPerPixel: 0.01 }).ok).toBe(false);
   });
 });
 

@@ -19,6 +19,9 @@ describe('key bindings', () => {
     expect(matchKeyBinding(press('t'))).toBe('tool-tee');
     expect(matchKeyBinding(press('d'))).toBe('tool-draw');
     expect(matchKeyBinding(press('v'))).toBe('tool-select');
+    expect(matchKeyBinding(press('r'))).toBe('tool-room');
+    expect(matchKeyBinding(press('h'))).toBe('tool-pan');
+    expect(matchKeyBinding(press('k'))).toBe('tool-scale');
     expect(matchKeyBinding(press('Escape'))).toBe('cancel');
     expect(matchKeyBinding(press('q'))).toBeNull();
   });

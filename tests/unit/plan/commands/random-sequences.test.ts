@@ -37,7 +37,7 @@ function apply(current: CommandResult, action: Step, newId: () => string): Comma
       case 'draw-new': return tryCommand('draw-segment', doc, state, { from: { point: action.from }, to: { point: action.to } }, newId);
       case 'draw-from': return tryCommand('draw-segment', doc, state, { from: { nodeId: nodeId(action.node) }, to: { point: action.to } }, newId);
       case 'draw-join': return tryCommand('draw-segment', doc, state, { from: { nodeId: nodeId(action.node) }, to: { nodeId: nodeId(action.other) } }, newId);
-      case 'move': return tryCommand('move-node', doc, state, { nodeId: nodeId(action.node), to: action.to }, newId);
+      case 'move': return tryCommand('move-node', doc, state, { nodeId: nodeId(action.node), to: action.to, metresPerPixel: 0.02 }, newId);
       case 'split': return tryCommand('split-segment', doc, state, { segmentId: segment(action.segment)?.id ?? 'none', at: along(action.segment, action.t) }, newId);
       case 'tee': return tryCommand('add-tee', doc, state, { segmentId: segment(action.segment)?.id ?? 'none', at: along(action.segment, action.t), to: { point: action.to } }, newId);
       case 'delete-node': return tryCommand('delete-selection', doc, state, { nodeIds: [nodeId(action.node)] }, newId);

@@ -21,18 +21,18 @@ describe('room commands', () => {
 
   it('updates a room and refuses a listener outside the box or an outlet on a missing point, naming the field', () => {
     const added = performCommand('add-room', emptyDocument(), state, shape, sequentialIds('r'));
-    const updated = performCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 20, lengthM: 6 } });
+    const updated = performCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 20, lengthM: 6 }, metresPerPixel: 0.02 });
     expect(updated.doc.rooms[0]).toMatchObject({ criterionNc: 20, lengthM: 6, widthM: 4 });
-    const outside = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { listener: { xM: 1, yM: 1, zM: 3.5 } } });
+    const outside = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { listener: { xM: 1, yM: 1, zM: 3.5 } }, metresPerPixel: 0.02 });
     expect(outside.ok === false && outside.error.message).toMatch(/listener z: must be inside the room \(at most its height, 3 m\)/);
-    const noNode = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { outlet: { nodeId: 'nowhere', xM: 1, yM: 1, zM: 2 } } });
+    const noNode = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { outlet: { nodeId: 'nowhere', xM: 1, yM: 1, zM: 2 } }, metresPerPixel: 0.02 });
     expect(noNode.ok === false && noNode.error.message).toMatch(/no point with id "nowhere"/);
-    const badNc = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 90 } });
+    const badNc = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 90 }, metresPerPixel: 0.02 });
     expect(badNc.ok === false && badNc.error.message).toMatch(/criterionNc.*at most NC 70/);
     // The published NC curves start at NC 15 (ANSI S12.2): below it there is no curve to hold the room to.
-    const lowNc = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 5 } });
+    const lowNc = tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 5 }, metresPerPixel: 0.02 });
     expect(lowNc.ok === false && lowNc.error.message).toMatch(/criterionNc.*at least NC 15/);
-    expect(tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 22.5 } }).ok).toBe(true);
+    expect(tryCommand('update-room', added.doc, state, { roomId: 'r1', changes: { criterionNc: 22.5 }, metresPerPixel: 0.02 }).ok).toBe(true);
   });
 
   it('deletes a room; deleting the point an outlet names unlinks the room', () => {
