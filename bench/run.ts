@@ -1,10 +1,12 @@
 // `npm run bench`: runs every registered benchmark in turn. Add a new one by appending to BENCHES.
 import { runAcousticBench } from './acoustic.bench';
+import { runNoisePathBench } from './noise-path.bench';
 import { runRoomBench } from './room.bench';
 
 const BENCHES: Array<{ name: string; run: () => void | Promise<void> }> = [
   { name: 'acoustic', run: runAcousticBench },
   { name: 'room', run: runRoomBench },
+  { name: 'noise path', run: runNoisePathBench },
 ];
 
 async function main(): Promise<void> {

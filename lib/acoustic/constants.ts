@@ -87,3 +87,26 @@ export const DEFAULT_NEAR_MAXIMUM_WAVELENGTHS = 1 / 8;
 
 /** Reference sound power for levels in dB, W (ISO 80000-8 / ISO 3744). Levels are given in dB re this value. */
 export const REFERENCE_SOUND_POWER_W = 1e-12;
+
+/** The international foot, m (International Yard and Pound Agreement, 1959). */
+export const FOOT_M = 0.3048;
+
+/** The international inch, m (International Yard and Pound Agreement, 1959). */
+export const INCH_M = 0.0254;
+
+/**
+ * Largest attenuation credited to one lined or unlined duct run in any band, dB: beyond about 40 dB the
+ * sound that breaks out of the duct and back in, or travels along its walls, sets the level instead
+ * (common practice, no source).
+ */
+export const DUCT_FLANKING_CAP_DB = 40;
+
+/**
+ * Schultz's room correction Lp - Lw = 25 - 10 log r - 5 log V - 3 log f (r in ft, V in ft³, f in Hz):
+ * its constant and coefficients (Schultz (1985), ASHRAE Transactions 91(1); as in the ASHRAE Handbook,
+ * HVAC Applications, noise and vibration chapter).
+ */
+export const SCHULTZ_CONSTANT_DB = 25;
+export const SCHULTZ_DISTANCE_COEFFICIENT_DB = 10;
+export const SCHULTZ_VOLUME_COEFFICIENT_DB = 5;
+export const SCHULTZ_FREQUENCY_COEFFICIENT_DB = 3;

@@ -33,3 +33,8 @@ export function requireBetween(value: unknown, low: number, high: number, fieldP
   if (!(checked >= low && checked <= high)) throw inputError(fieldPath, `must be between ${low} and ${high}`);
   return checked;
 }
+
+/** The path of a field inside parentPath: `elements[2]` + `lengthM` -> `elements[2].lengthM`; a top-level field keeps its own name. */
+export function fieldPath(parentPath: string, name: string): string {
+  return parentPath ? `${parentPath}.${name}` : name;
+}

@@ -7,7 +7,7 @@ function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
 }
 
-function validateSection(section: unknown, path: string): void {
+export function validateSection(section: unknown, path: string): void {
   if (!isRecord(section)) throw inputError(path, 'must be an object');
   if (section.shape === 'round') {
     requireAtLeast(section.diameterM, MIN_SECTION_DIMENSION_M, `${path}.diameterM`);

@@ -1,0 +1,33 @@
+import { describe, expect, it } from 'vitest';
+import { schultzRoomCorrectionDb } from '@/lib/acoustic';
+import { expectClose } from '../tolerance';
+
+const FOOT_M = 0.3048; // International Yard and Pound Agreement (1959)
+
+describe('room correction for one outlet (Schultz 1985, ASHRAE Transactions 91): Lp - Lw = 25 - 10 log r - 5 log V - 3 log f, r ft, V ft³', () => {
+  it('worked example in feet: a 20 x 10 x 10 ft room (2000 ft³), listener 10 ft away, 500 Hz -> -9.60 dB [calc]', () => {
+    const inFeet = 25 - 10 * Math.log10(10) - 5 * Math.log10(2000) - 3 * Math.log10(500);
+    expectClose(inFeet, -9.60, 0.005, 'recomputed in feet');
+    const volumeM3 = 2000 * FOOT_M ** 3;
+    const distanceM = 10 * FOOT_M;
+    expectClose(schultzRoomCorrectionDb(volumeM3, distanceM, 500), inFeet, 1e-12, 'from SI inputs');
+  });
+
+  it('in SI about 12.1 - 10 log r - 5 log V - 3 log f (sheet [calc]: 25 + 10 log 0.3048 + 15 log 0.3048)', () => {
+    expectClose(schultzRoomCorrectionDb(1, 1, 1), 25 + 25 * Math.log10(FOOT_M), 1e-12, 'constant');
+    expectClose(schultzRoomCorrectionDb(1, 1, 1), 12.1, 0.01, 'sheet');
+    expectClose(schultzRoomCorrectionDb(80, 2.5, 250), 12.1 - 10 * Math.log10(2.5) - 5 * Math.log10(80) - 3 * Math.log10(250), 0.01, 'SI form');
+  });
+
+  it('each doubling: distance -3.01 dB, volume -1.51 dB, frequency -0.90 dB', () => {
+    const base = schultzRoomCorrectionDb(100, 2, 500);
+    expectClose(schultzRoomCorrectionDb(100, 4, 500) - base, -10 * Math.log10(2), 1e-12, 'distance');
+    expectClose(schultzRoomCorrectionDb(200, 2, 500) - base, -5 * Math.log10(2), 1e-12, 'volume');
+    expectClose(schultzRoomCorrectionDb(100, 2, 1000) - base, -3 * Math.log10(2), 1e-12, 'frequency');
+  });
+
+  it('refuses a zero volume or distance, naming the field', () => {
+    expect(() => schultzRoomCorrectionDb(0, 2, 500)).toThrow('volumeM3 must be > 0');
+    expect(() => schultzRoomCorrectionDb(50, -1, 500)).toThrow('distanceM must be > 0');
+  });
+});
