@@ -70,6 +70,9 @@ export const SCHROEDER_COEFFICIENT = 2000;
 /** Sabine's constant in T60 = 0.161 V / A, s/m, metric form for air near 20 °C (W. C. Sabine, 1900; Kuttruff, Room Acoustics, ch. 5). */
 export const SABINE_CONSTANT_S_PER_M = 0.161;
 
+/** Directivity factor of a source on one, two or three reflecting planes: 2, 4, 8 (Long, Architectural Acoustics, 2nd ed., ch. 2). */
+export const DIRECTIVITY_PER_REFLECTING_PLANE = 2;
+
 /** sin(x)/x = 1/2 at x = 1.8955 (the first crossing; computed from the function, no source needed). */
 export const BOUNDARY_HALF_CONTRIBUTION_KD = 1.895494267033981;
 
