@@ -21,7 +21,14 @@ export interface PlanSegment {
   readonly lengthOverrideM?: number | null;
   /** Stable number within its run, shown as the run letter and this number ("A3"); set by normalize. */
   readonly number?: number;
+  /** Silencers and other losses placed at the segment's far end, in order (the noise path). */
+  readonly inserts?: readonly PathInsert[];
 }
+
+/** Something put into the duct by hand for the noise path: a silencer from the maker's data, or any loss. */
+export type PathInsert =
+  | { readonly kind: 'silencer'; readonly label: string; readonly insertionLossDb: readonly number[] }
+  | { readonly kind: 'loss'; readonly label: string; readonly lossDb: readonly number[] };
 
 export interface Fan {
   readonly blades: number;
@@ -38,6 +45,8 @@ export interface PlanRun {
   readonly endNodeId: string | null;
   readonly temperatureC: number;
   readonly fan: Fan | null;
+  /** The fan's sound power into this run, octave bands 63 Hz to 8 kHz, dB re 1 pW (the noise path starts from it). */
+  readonly fanSoundPowerDb?: readonly number[] | null;
   /** Keyed by node id: every leaf node of the run, the start included. */
   readonly terminations: Readonly<Record<string, Termination>>;
 }

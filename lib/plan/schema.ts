@@ -1,7 +1,8 @@
 // The one zod schema of the plan document, shared by the editor and the server.
 import { z } from 'zod';
 import type { PlanDocument } from './document';
-import { planTreatmentSchema, roomSchema } from './rooms/room-schema';
+import { planTreatmentSchema, roomSchema, soundPowerBandsSchema } from './rooms/room-schema';
+import { pathInsertSchema } from './noise/insert-schema';
 import { fanSchema, finite, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, runLetterSchema, sectionSchema, segmentNumberSchema, temperatureCSchema, terminationSchema } from './schema-parts';
 
 export * from './schema-parts';
@@ -16,6 +17,7 @@ const segmentSchema = z.object({
   lining: liningSchema.nullable().optional(),
   lengthOverrideM: lengthOverrideMSchema.nullable().optional(),
   number: segmentNumberSchema.optional(),
+  inserts: z.array(pathInsertSchema).max(8, 'at most 8 inserts on one segment').optional(),
 });
 
 export const runNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the run a name').max(120, 'must be at most 120 characters');
@@ -28,6 +30,7 @@ const runSchema = z.object({
   endNodeId: idSchema.nullable(),
   temperatureC: temperatureCSchema,
   fan: fanSchema.nullable(),
+  fanSoundPowerDb: soundPowerBandsSchema.nullable().optional(),
   terminations: z.record(idSchema, terminationSchema),
 });
 

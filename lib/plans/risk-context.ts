@@ -41,7 +41,7 @@ export function fanInput(run: PlanRun): FanInput | undefined {
 }
 
 /** The run that feeds a room. Throws PlanError. */
-function feedingRun(doc: PlanDocument, room: PlanRoom): { run: PlanRun; outletNodeId: string } {
+export function feedingRun(doc: PlanDocument, room: PlanRoom): { run: PlanRun; outletNodeId: string } {
   const nodeId = room.outlet.nodeId;
   if (nodeId === null) throw new PlanError(`${room.name}: no run feeds it yet; choose the run end that is its outlet.`, { roomId: room.id });
   const run = runOfNode(doc, nodeId);

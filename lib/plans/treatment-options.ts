@@ -11,6 +11,7 @@ import type { PlanChange } from '@/lib/plan/rooms/room-types';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
 import { computePlanAnalysis } from './analysis/compute';
 import type { PlanAnalysis } from './analysis/types';
+import { pathTreatmentOptions } from './noise-path/path-treatments';
 import { contextFor, riskContext, type RiskContext, type RiskTarget } from './risk-context';
 
 export interface TreatmentOption extends TreatmentResult {
@@ -86,7 +87,10 @@ export function treatmentOptionsFromAnalysis(doc: PlanDocument, metresPerPixel: 
     throw error;
   }
   const flag = findFlag(analysis, target, flagId);
-  return { flag, runId: context.run.id, roomId: context.room?.id ?? null, options: optionsFor(context, analysis.labels, flag) };
+  const options = flag.id.startsWith('path-level:') && context.room
+    ? pathTreatmentOptions(doc, metresPerPixel, context.room, flag, analysis.labels)
+    : optionsFor(context, analysis.labels, flag);
+  return { flag, runId: context.run.id, roomId: context.room?.id ?? null, options };
 }
 
 /** The same, analysing the document first (scripts and tests; the app reads the stored analysis). */

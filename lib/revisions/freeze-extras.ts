@@ -3,6 +3,7 @@
 import type { FlaggedQuantity } from '@/lib/acoustic';
 import type { PlanDocument } from '@/lib/plan/document';
 import type { PlanAnalysis } from '@/lib/plans/analysis/types';
+import type { RoomNoisePath } from '@/lib/plans/noise-path/room-path';
 import type { RevisionExtras, RoomRow } from './types';
 
 const KIND_WORDS: Record<string, string> = {
@@ -23,8 +24,8 @@ export function freezeExtras(document: PlanDocument, analysis: PlanAnalysis): Re
     const risks = analysis.risks;
     if (risks.rooms.length > 0) {
       extras.rooms = risks.rooms.map((room): RoomRow => ({
-        id: room.roomId, name: room.name, problem: room.problem,
-        summary: room.analysis ? `Schroeder frequency ${room.analysis.schroederHz.toFixed(0)} Hz${room.levelsNc !== null ? `, predicted NC ${room.levelsNc.toFixed(0)} against NC ${room.criterionNc}` : `, criterion NC ${room.criterionNc}`}` : '',
+        id: room.roomId, name: room.name, problem: room.problem, path: room.noisePath ? pathRows(room.noisePath) : null,
+        summary: room.analysis ? `Schroeder frequency ${room.analysis.schroederHz.toFixed(0)} Hz${room.noisePath ? `, NC ${room.noisePath.result.nc.toFixed(0)} at the listener by the noise path against NC ${room.criterionNc}` : room.levelsNc !== null ? `, predicted NC ${room.levelsNc.toFixed(0)} against NC ${room.criterionNc}` : `, criterion NC ${room.criterionNc}`}` : '',
       }));
     }
     if (risks.flags.length > 0) {
@@ -50,3 +51,20 @@ export function freezeExtras(document: PlanDocument, analysis: PlanAnalysis): Re
   return extras;
 }
 
+
+/** The noise path's table as plain rows for the review and the schedule. */
+function pathRows(path: RoomNoisePath): NonNullable<RoomRow['path']> {
+  const { result } = path;
+  const fanDb = result.steps.length > 0 ? result.steps[0].powerDb.map((power, band) => power + result.steps[0].lossDb[band]) : result.listenerDb;
+  return {
+    rows: [
+      { label: 'Fan sound power', valuesDb: fanDb, total: true },
+      ...result.steps.map((step, index) => ({ label: `${path.sources[index]?.label ?? step.kind} (loss)`, valuesDb: step.lossDb.map((loss) => -loss) })),
+      { label: 'Room correction (Schultz)', valuesDb: result.roomCorrectionDb },
+      { label: 'Level at the listener', valuesDb: result.listenerDb, total: true },
+      { label: 'Criterion curve', valuesDb: path.criterionDb },
+      { label: 'Margin (negative: above)', valuesDb: path.marginDb, total: true },
+    ],
+    nc: result.nc, nr: result.nr, dba: result.dba, governingHz: path.governingHz,
+  };
+}

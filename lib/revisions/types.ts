@@ -19,7 +19,11 @@ export interface RevisionExtras {
 
 export interface RiskRow { id: string; runId: string | null; label: string; detail: string; severity: string }
 export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; before: string; after: string; clears: boolean; standing?: TreatmentStanding; standingText?: string }
-export interface RoomRow { id: string; name: string; problem: string | null; summary: string }
+export interface RoomRow {
+  id: string; name: string; problem: string | null; summary: string;
+  /** The noise path to the room's listener as frozen: one row per element and the totals, 8 octave bands each. */
+  path?: { rows: { label: string; valuesDb: number[]; total?: boolean }[]; nc: number; nr: number; dba: number; governingHz: number } | null;
+}
 
 export interface RevisionSummary {
   id: string;

@@ -3,11 +3,12 @@
 import { useEffect, useState } from 'react';
 import type { PlanRun } from '@/lib/plan';
 import { NumberInput } from './number-input';
+import { SoundPowerField } from '../rooms/sound-power-field';
 
 interface RunPanelProps {
   run: PlanRun;
   editable: boolean;
-  onChange: (changes: { name?: string; temperatureC?: number; fan?: { blades: number; rpm: number } | null }) => void;
+  onChange: (changes: { name?: string; temperatureC?: number; fan?: { blades: number; rpm: number } | null; fanSoundPowerDb?: number[] | null }) => void;
   /** Numbers the run's segments 1, 2, … from the start again (labels elsewhere keep theirs until then). */
   onRenumber?: () => void;
 }
@@ -37,6 +38,7 @@ export function RunPanel({ run, editable, onChange, onRenumber }: RunPanelProps)
           <span className="text-xs text-graphite-500">Labels stay as they are until you do this.</span>
         </div>
       )}
+      <SoundPowerField label="Fan sound power into this run" value={run.fanSoundPowerDb ?? null} onCommit={(bandsDb) => onChange({ fanSoundPowerDb: bandsDb })} />
       {run.fan && <p className="num text-xs text-graphite-500">Blade-pass tone {((run.fan.blades * run.fan.rpm) / 60).toFixed(1)} Hz (blades × rpm / 60) and its harmonics.</p>}
     </fieldset>
   );

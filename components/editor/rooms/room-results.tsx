@@ -5,6 +5,7 @@ import type { RoomResult } from '@/lib/plans/risks';
 import { ModeChart } from './mode-chart';
 import { ModeList } from './mode-list';
 import { Reflectogram } from './reflectogram';
+import { NoisePathTable } from './noise-path-table';
 import { SpectrumChart } from './spectrum-chart';
 
 // The room's results from the saved plan: figures, mode chart with the run's resonances and fan
@@ -29,7 +30,10 @@ export function RoomResults({ result, flags }: { result: RoomResult | null; flag
       <ModeList modes={analysis.modes} flags={flags} />
       <section><h3 className="mb-1 text-xs font-semibold">Reflectogram at the listener</h3><Reflectogram images={analysis.images} /></section>
       <section><h3 className="mb-1 text-xs font-semibold">Spectrum against the criterion</h3>
-        <SpectrumChart levels={result.levels} criterionDb={result.criterionDb} criterionNc={result.criterionNc} levelsNc={result.levelsNc} /></section>
+        <SpectrumChart levels={result.noisePath ? result.noisePath.result.listenerDb.map((levelDb, band) => ({ hz: result.noisePath!.result.bandsHz[band], levelDb, criterionDb: result.criterionDb[band] })) : result.levels}
+          criterionDb={result.criterionDb} criterionNc={result.criterionNc} levelsNc={result.noisePath ? result.noisePath.result.nc : result.levelsNc} /></section>
+      <section><h3 className="mb-1 text-xs font-semibold">Noise path, fan to listener</h3>
+        {result.noisePath ? <NoisePathTable path={result.noisePath} /> : <p className="text-xs text-graphite-500" data-testid="noise-path-missing">{result.noisePathProblem ?? 'Connect the room to the run end that feeds it.'}</p>}</section>
     </div>
   );
 }

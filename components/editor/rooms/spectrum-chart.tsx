@@ -7,7 +7,7 @@ const BAND_LABELS = OCTAVE_BANDS_HZ.map((hz) => (hz >= 1000 ? `${hz / 1000}k` : 
 
 // Predicted octave-band levels at the listener (solid line, dots; a triangle where above) against the
 // room's NC criterion curve (dashed).
-export function SpectrumChart({ levels, criterionDb, criterionNc, levelsNc }: { levels: OutletLevelBand[] | null; criterionDb: number[]; criterionNc: number; levelsNc: number | null }) {
+export function SpectrumChart({ levels, criterionDb, criterionNc, levelsNc }: { levels: Pick<OutletLevelBand, 'hz' | 'levelDb' | 'criterionDb'>[] | null; criterionDb: number[]; criterionNc: number; levelsNc: number | null }) {
   const values = [...criterionDb, ...(levels?.map((band) => band.levelDb) ?? [])];
   const minDb = Math.floor(Math.min(...values) / 10) * 10;
   const maxDb = Math.ceil(Math.max(...values) / 10) * 10;

@@ -5,6 +5,7 @@ import { PlanError } from '../errors';
 import { fanSchema, runNameSchema, temperatureCSchema, terminationSchema } from '../schema';
 import { nodeDegree, runOfNode } from '../topology';
 import { checked, defineCommand } from './define';
+import { soundPowerBandsSchema } from '../rooms/room-schema';
 import { renumberRun } from '../labels/renumber';
 import { buildRunTree, resolvedEndNodeId } from '../run-tree';
 
@@ -39,15 +40,18 @@ export interface SetRunPropertiesArgs {
   readonly name?: string;
   readonly temperatureC?: number;
   readonly fan?: Fan | null;
+  /** The fan's sound power into the run, 8 octave bands, dB re 1 pW; null clears it. */
+  readonly fanSoundPowerDb?: readonly number[] | null;
 }
 
-export const setRunProperties = defineCommand('set-run-properties', 'Rename the run, or set its air temperature or fan.', (doc, state, args: SetRunPropertiesArgs) => {
+export const setRunProperties = defineCommand('set-run-properties', 'Rename the run, or set its air temperature, fan or fan sound power.', (doc, state, args: SetRunPropertiesArgs) => {
   const run = targetRun(doc, state, args.runId);
   const changed: PlanRun = {
     ...run,
     ...(args.name !== undefined ? { name: checked(runNameSchema, args.name, 'Name') } : {}),
     ...(args.temperatureC !== undefined ? { temperatureC: checked(temperatureCSchema, args.temperatureC, 'Air temperature') } : {}),
     ...(args.fan !== undefined ? { fan: args.fan === null ? null : checked(fanSchema, args.fan, 'Fan') } : {}),
+    ...(args.fanSoundPowerDb !== undefined ? { fanSoundPowerDb: args.fanSoundPowerDb === null ? null : checked(soundPowerBandsSchema, args.fanSoundPowerDb, "Fan's sound power") } : {}),
   };
   return { doc: replaceRun(doc, changed), state };
 });

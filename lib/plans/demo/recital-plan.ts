@@ -8,6 +8,8 @@ export const DEMO_METRES_PER_PIXEL = 0.02;
 /** The air handler's two speeds; the run carries the high one (the tone that lands on a resonance). */
 export const DEMO_FAN_SPEEDS_RPM = { low: 450, high: 605 } as const;
 export const DEMO_FAN_BLADES = 10;
+/** Supply fan sound power into the duct at high speed, 63 Hz to 8 kHz, dB re 1 pW (invented). */
+export const DEMO_FAN_SOUND_POWER_DB = [84, 82, 79, 75, 71, 67, 62, 56];
 
 export function demoRecitalPlan(fan: Fan): PlanDocument {
   return {
@@ -25,6 +27,8 @@ export function demoRecitalPlan(fan: Fan): PlanDocument {
     ],
     runs: [{
       id: 'recital-supply', name: 'Rooftop air handler to recital room', startNodeId: 'ahu', endNodeId: 'recital-outlet', temperatureC: 16, fan,
+      // the air handler's supply fan at high speed, as its (invented) maker's sheet gives it
+      fanSoundPowerDb: DEMO_FAN_SOUND_POWER_DB,
       terminations: { ahu: { kind: 'closed' }, 'recital-outlet': { kind: 'open', flange: 'flanged' } },
     }],
     rooms: [{

@@ -5,6 +5,8 @@ import type { ScheduleContent } from '../content';
 import { Table } from './table';
 import { styles } from './styles';
 
+const PATH_BANDS = ['63', '125', '250', '500', '1k', '2k', '4k', '8k'];
+
 
 export function RisksAndRooms({ content }: { content: ScheduleContent }) {
   const nearTones = content.runs.flatMap((run) => run.resonances.filter((row) => row.fanTone !== 'clear').map((row) => [run.name, `Order ${row.order} at ${row.frequencyHz.toFixed(1)} Hz`, row.fanTone]));
@@ -33,6 +35,18 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
       {content.rooms.length === 0
         ? <Text style={styles.paragraph}>No rooms are drawn on this plan, so no room results are given.</Text>
         : <Table columns={[{ title: 'Room', width: 0.3 }, { title: 'Result', width: 0.7 }]} rows={content.rooms.map((room) => [room.name, room.problem ?? room.summary])} />}
+      {content.rooms.filter((room) => room.path).map((room) => (
+        <View key={room.id} wrap={false}>
+          <Text style={styles.h3}>Noise path to the listener: {room.name}</Text>
+          <Table
+            columns={[{ title: 'Element', width: 0.36 }, ...PATH_BANDS.map((title) => ({ title, width: 0.08, numeric: true }))]}
+            rows={room.path!.rows.map((row) => [row.label, ...row.valuesDb.map((value) => value.toFixed(1))])}
+          />
+          <Text style={styles.paragraph}>
+            At the listener: NC {room.path!.nc.toFixed(0)}, NR {room.path!.nr.toFixed(1)}, {room.path!.dba.toFixed(1)} dB(A); the {room.path!.governingHz} Hz band governs. Losses are negative, levels in dB (sound power re 1 pW, sound pressure re 20 µPa).
+          </Text>
+        </View>
+      ))}
     </View>
   );
 }

@@ -4,6 +4,7 @@ import { notFound } from 'next/navigation';
 import { ChangesTable } from '@/components/revisions/changes-table';
 import { FinishReview } from '@/components/revisions/finish-review';
 import { TreatmentTable } from '@/components/revisions/treatment-table';
+import { RoomPaths } from '@/components/revisions/room-paths';
 import { RevisionStateBadge } from '@/components/revisions/revision-state-badge';
 import { RevisionWorkspace } from '@/components/revisions/revision-workspace';
 import { requireActor } from '@/lib/auth/current';
@@ -65,6 +66,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
       )}
       <ChangesTable changes={changes} number={revision.number} />
       <TreatmentTable treatments={revision.extras.treatments ?? []} />
+      <RoomPaths rooms={revision.extras.rooms ?? []} />
       <RevisionWorkspace
         planId={planId} revisionId={revision.id} document={revision.document} metresPerPixel={revision.metresPerPixel} background={background}
         runs={revision.analysis} risks={revision.extras.risks ?? []} canReview={canReview} canComment={can(role, 'comment.write')}

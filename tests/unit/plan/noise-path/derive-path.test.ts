@@ -1,0 +1,77 @@
+// The noise path read off the drawing. The listener level is recomputed here element by element
+// from the engine's own published-formula functions: sound power minus each element's loss (the
+// decibel sum of a chain of losses), plus Schultz's room correction (Schultz 1985, ASHRAE Trans. 91);
+// the branch split is 10 log(A_total / A_branch) (ASHRAE Handbook, HVAC Applications, noise chapter).
+import { describe, expect, it } from 'vitest';
+import { branchPowerSplitDb, elbowAttenuationDb, endReflectionLoss, equivalentRadiusM, linedDuctAttenuationDb, OCTAVE_BANDS_HZ, schultzRoomCorrectionDb, sectionArea, unlinedDuctAttenuationDbPerM } from '@/lib/acoustic';
+import { newRoom, type PlanDocument } from '@/lib/plan';
+import { DEMO_FAN_BLADES, DEMO_FAN_SOUND_POWER_DB, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
+import { derivePath } from '@/lib/plans/noise-path/derive-path';
+import { roomNoisePath } from '@/lib/plans/noise-path/room-path';
+import { expectClose } from '../../acoustic/tolerance';
+
+const bands = [...OCTAVE_BANDS_HZ];
+
+describe('noise path read off the plan', () => {
+  it('the demo run: ducts, an elbow at each bend, the flush outlet; the listener level is the fan power less each loss plus the room correction', () => {
+    const doc = demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
+    const room = doc.rooms[0];
+    const derived = derivePath(doc, DEMO_METRES_PER_PIXEL, room);
+    expect(derived.input.elements.map((element) => element.kind)).toEqual(['duct', 'elbow', 'duct', 'elbow', 'duct', 'outlet']);
+    expect(derived.sources.map((source) => source.label.split(',')[0])).toEqual(['A1', 'A1/A2 elbow', 'A2', 'A2/A3 elbow', 'A3', 'Outlet A3 end']);
+    // riser 300 px, corridor 400 px, drop 90 px at 20 mm per pixel
+    const ducts = doc.segments.map((segment, index) => ({ section: segment.section, lengthM: [6, 8, 1.8][index] }));
+    const losses = [
+      unlinedDuctAttenuationDbPerM(ducts[0].section, bands).map((perM) => perM * ducts[0].lengthM),
+      elbowAttenuationDb({ section: ducts[0].section }, bands),
+      unlinedDuctAttenuationDbPerM(ducts[1].section, bands).map((perM) => perM * ducts[1].lengthM),
+      elbowAttenuationDb({ section: ducts[1].section }, bands),
+      unlinedDuctAttenuationDbPerM(ducts[2].section, bands).map((perM) => perM * ducts[2].lengthM),
+      // flanged at the ceiling: flush mounting (ASHRAE RP-1314 form)
+      endReflectionLoss(2 * equivalentRadiusM(ducts[2].section), 'flush', bands, 16),
+    ];
+    const distanceM = Math.hypot(room.outlet.xM - room.listener.xM, room.outlet.yM - room.listener.yM, room.outlet.zM - room.listener.zM);
+    const volumeM3 = room.lengthM * room.widthM * room.heightM;
+    const path = roomNoisePath(doc, DEMO_METRES_PER_PIXEL, room);
+    bands.forEach((hz, band) => {
+      const expected = DEMO_FAN_SOUND_POWER_DB[band] - losses.reduce((sum, loss) => sum + loss[band], 0) + schultzRoomCorrectionDb(volumeM3, distanceM, hz);
+      expectClose(path.result.listenerDb[band], expected, 0.05, `${hz} Hz`);
+    });
+    // the margin and the governing band follow from the listener level and the NC-20 curve
+    const worst = path.marginDb.indexOf(Math.min(...path.marginDb));
+    expect(path.governingHz).toBe(bands[worst]);
+  });
+
+  it('a tee on the way is a power split by the areas leaving it, and a liner on the path counts with its thickness', () => {
+    const room = newRoom('room', { name: 'Office', x: 380, y: 300, lengthM: 5, widthM: 4, heightM: 3 });
+    const doc: PlanDocument = {
+      schemaVersion: 1,
+      nodes: [{ id: 'fan', x: 0, y: 0 }, { id: 'tee', x: 300, y: 0 }, { id: 'on', x: 600, y: 0 }, { id: 'out', x: 300, y: 300 }],
+      segments: [
+        { id: 'main', from: 'fan', to: 'tee', section: { shape: 'rect', widthM: 0.5, heightM: 0.4 } },
+        { id: 'onward', from: 'tee', to: 'on', section: { shape: 'rect', widthM: 0.4, heightM: 0.3 } },
+        { id: 'branch', from: 'tee', to: 'out', section: { shape: 'round', diameterM: 0.25 }, lining: { thicknessM: 0.025, absorption: 0.6 } },
+      ],
+      runs: [{ id: 'r', name: 'Supply', startNodeId: 'fan', endNodeId: null, temperatureC: 20, fan: null, fanSoundPowerDb: [80, 80, 80, 80, 80, 80, 80, 80],
+        terminations: { fan: { kind: 'closed' }, on: { kind: 'open', flange: 'unflanged' }, out: { kind: 'open', flange: 'unflanged' } } }],
+      rooms: [{ ...room, outlet: { nodeId: 'out', xM: 1, yM: 1, zM: 2.7 } }],
+      outlets: [], listeners: [], treatments: [],
+    };
+    const derived = derivePath(doc, 0.01, doc.rooms[0]);
+    expect(derived.input.elements.map((element) => element.kind)).toEqual(['duct', 'split', 'duct', 'outlet']);
+    const split = derived.input.elements[1];
+    if (split.kind !== 'split') throw new Error('no split');
+    const branchM2 = sectionArea({ shape: 'round', diameterM: 0.25 });
+    expectClose(split.totalAreaM2, branchM2 + 0.4 * 0.3, 1e-12, 'areas leaving the tee');
+    const path = roomNoisePath(doc, 0.01, doc.rooms[0]);
+    expectClose(path.result.steps[1].lossDb[0], branchPowerSplitDb(branchM2, branchM2 + 0.12), 1e-9, 'split loss');
+    const lined = linedDuctAttenuationDb({ shape: 'round', diameterM: 0.25 }, { thicknessM: 0.025 }, 3, bands);
+    path.result.steps[2].lossDb.forEach((loss, band) => expect(loss).toBeGreaterThanOrEqual(lined[band] - 1e-9));
+  });
+
+  it('says what is missing when the run has no fan sound power', () => {
+    const doc = demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
+    const without = { ...doc, runs: doc.runs.map((run) => ({ ...run, fanSoundPowerDb: null })) };
+    expect(() => derivePath(without, DEMO_METRES_PER_PIXEL, without.rooms[0])).toThrow(/give its fan's sound power/);
+  });
+});
