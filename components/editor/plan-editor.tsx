@@ -203,7 +203,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} label={labels.segments[selectedSegment.id] ?? ''} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}
               onSection={(section) => runCommand(model, dispatch, 'set-section', { section })}
               onLining={(lining) => runCommand(model, dispatch, 'set-lining', { lining })}
-              onLengthOverride={(lengthM) => runCommand(model, dispatch, 'set-length-override', { lengthM })} />
+              onLengthOverride={(lengthM) => runCommand(model, dispatch, 'set-length-override', { lengthM })}
+              onInserts={(inserts) => runCommand(model, dispatch, 'set-inserts', { inserts })} />
           ) : selectedNode && nodeRun && nodeTermination ? (
             <EndPanel key={selectedNode.id} run={nodeRun} nodeId={selectedNode.id} label={labels.nodes[selectedNode.id] ?? ''} termination={nodeTermination} editable={editable}
               isChosenEnd={activeResult?.path.at(-1)?.toNodeId === selectedNode.id}

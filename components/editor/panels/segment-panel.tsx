@@ -1,6 +1,7 @@
 'use client';
 
-import { segmentLengthM, type PlanDocument, type PlanSegment, type Section } from '@/lib/plan';
+import { segmentLengthM, type PathInsert, type PlanDocument, type PlanSegment, type Section } from '@/lib/plan';
+import { InsertsField } from './inserts-field';
 import { formatLength } from '@/lib/plan/units';
 import type { UnitSystem } from '@/models/user';
 import { LengthInput } from './length-input';
@@ -17,10 +18,11 @@ interface SegmentPanelProps {
   onSection: (section: Section) => void;
   onLining: (lining: { thicknessM: number; absorption: number } | null) => void;
   onLengthOverride: (lengthM: number | null) => void;
+  onInserts?: (inserts: PathInsert[]) => void;
 }
 
 // The selected segment: section, lining and length (drawn, or typed when drawn schematically).
-export function SegmentPanel({ document: doc, segment, label, metresPerPixel, unitSystem, editable, onSection, onLining, onLengthOverride }: SegmentPanelProps) {
+export function SegmentPanel({ document: doc, segment, label, metresPerPixel, unitSystem, editable, onSection, onLining, onLengthOverride, onInserts }: SegmentPanelProps) {
   const from = doc.nodes.find((node) => node.id === segment.from)!;
   const to = doc.nodes.find((node) => node.id === segment.to)!;
   const drawnM = segmentLengthM(from, to, metresPerPixel);
@@ -74,6 +76,7 @@ export function SegmentPanel({ document: doc, segment, label, metresPerPixel, un
           </div>
         )}
       </div>
+      {onInserts && <InsertsField inserts={segment.inserts ?? []} editable={editable} onChange={onInserts} />}
     </fieldset>
   );
 }

@@ -19,6 +19,7 @@ export type CommandName =
   | 'choose-end'
   | 'renumber-run'
   | 'set-length-override'
+  | 'set-inserts'
   | 'add-room'
   | 'update-room'
   | 'move-room'

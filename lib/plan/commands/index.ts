@@ -9,7 +9,7 @@ import { deleteSelection } from './delete-selection';
 import { drawSegment } from './draw-segment';
 import { moveNode } from './move-node';
 import { chooseEnd, renumberRunCommand, setRunProperties, setTermination } from './run-properties';
-import { setLengthOverride, setLining, setSection } from './segment-properties';
+import { setInserts, setLengthOverride, setLining, setSection } from './segment-properties';
 import { splitSegment } from './split-segment';
 import { addRoom, deleteRoom, moveRoom, updateRoom } from './rooms';
 import { addTreatment, removeTreatment } from './treatments';
@@ -27,6 +27,7 @@ export const COMMANDS = {
   'choose-end': chooseEnd,
   'renumber-run': renumberRunCommand,
   'set-length-override': setLengthOverride,
+  'set-inserts': setInserts,
   'add-room': addRoom,
   'update-room': updateRoom,
   'move-room': moveRoom,
@@ -60,7 +61,7 @@ export type { SplitSegmentArgs } from './split-segment';
 export type { AddTeeArgs } from './add-tee';
 export type { MoveNodeArgs } from './move-node';
 export type { DeleteSelectionArgs } from './delete-selection';
-export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs } from './segment-properties';
+export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs, SetInsertsArgs } from './segment-properties';
 export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs, RenumberRunArgs } from './run-properties';
 export type { AddRoomArgs, UpdateRoomArgs, MoveRoomArgs, DeleteRoomArgs } from './rooms';
 export type { AddTreatmentArgs, RemoveTreatmentArgs } from './treatments';

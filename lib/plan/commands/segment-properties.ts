@@ -1,5 +1,7 @@
 // Section, lining and length override of the given (or selected) segments.
-import type { Lining, PlanDocument, PlanSegment, Section } from '../document';
+import { z } from 'zod';
+import type { Lining, PathInsert, PlanDocument, PlanSegment, Section } from '../document';
+import { pathInsertSchema } from '../noise/insert-schema';
 import type { EditorState } from '../editor-state';
 import { lengthOverrideMSchema, liningSchema, sectionSchema } from '../schema';
 import { checked, defineCommand, targetSegmentIds } from './define';
@@ -39,4 +41,19 @@ export interface SetLengthOverrideArgs {
 export const setLengthOverride = defineCommand('set-length-override', 'Give the selected segments a length of their own, or go back to the drawn length.', (doc, state, args: SetLengthOverrideArgs) => {
   const lengthM = args.lengthM === null ? null : checked(lengthOverrideMSchema, args.lengthM, 'Length');
   return updateSegments(doc, state, args.segmentIds, (segment) => ({ ...segment, lengthOverrideM: lengthM }));
+});
+
+export interface SetInsertsArgs {
+  readonly segmentIds?: readonly string[];
+  /** Silencers and other losses after the segment, in order; [] removes them. */
+  readonly inserts: readonly PathInsert[];
+}
+
+export const setInserts = defineCommand('set-inserts', 'Put silencers or other losses into the noise path after the selected segment, or take them out.', (doc, state, args: SetInsertsArgs) => {
+  const inserts = checked(z.array(pathInsertSchema).max(8, 'at most 8 on one segment'), args.inserts, 'Silencer or loss');
+  return updateSegments(doc, state, args.segmentIds, (segment) => {
+    const { inserts: _old, ...rest } = segment;
+    void _old;
+    return inserts.length > 0 ? { ...rest, inserts } : rest;
+  });
 });
