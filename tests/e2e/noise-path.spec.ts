@@ -86,7 +86,7 @@ test('fan spectrum in, path table and spectrum out; a silencer raises the margin
 
   // A viewer of the same team reads the same table, without the controls that change it.
   const { email: viewerEmail } = await createPerson('noise-path-viewer', [{ team, role: 'viewer' }]);
-  const viewerContext = await browser.newContext();
+  const viewerContext = await browser.newContext({ viewport: { width: 1440, height: 900 } });
   const viewerPage = await viewerContext.newPage();
   await signIn(viewerPage, viewerEmail);
   await viewerPage.goto(`/plans/${plan.id}`);
@@ -94,7 +94,8 @@ test('fan spectrum in, path table and spectrum out; a silencer raises the margin
   await expect(viewerPage.getByTestId('noise-path')).toBeVisible();
   expect(await margins(viewerPage)).toEqual(await margins(page));
   await closeRoom(viewerPage);
-  await viewerPage.mouse.click(corridor.x, corridor.y);
+  const viewersCorridor = await fittedPlanToScreen(viewerPage, { x: 320, y: 380 }, { document, metresPerPixel: DEMO_METRES_PER_PIXEL });
+  await viewerPage.mouse.click(viewersCorridor.x, viewersCorridor.y);
   await expect(viewerPage.getByTestId('segment-label')).toHaveText('A2');
   await expect(viewerPage.getByRole('button', { name: 'Put it in' })).toHaveCount(0);
   await viewerContext.close();
