@@ -6,7 +6,7 @@ import type { RoomNoisePath } from '@/lib/plans/noise-path/room-path';
 const BAND_LABELS = OCTAVE_BANDS_HZ.map((hz) => (hz >= 1000 ? `${hz / 1000}k` : String(hz)));
 const ELEMENT_WORDS: Record<string, string> = { duct: 'Duct', elbow: 'Elbow', split: 'Branch split', plenum: 'Plenum', silencer: 'Silencer', outlet: 'Outlet (end reflection)', loss: 'Loss' };
 
-const cell = (value: number) => value.toFixed(1);
+const cell = (value: number) => (Math.abs(value) < 0.05 ? 0 : value).toFixed(1);
 
 // The noise path from the fan to the room's listener, one row per element read off the plan: its
 // loss in each octave band and the sound power left after it; then the room correction, the level at
