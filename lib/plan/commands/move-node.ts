@@ -3,6 +3,7 @@ import { findNode } from '../document';
 import { PlanError } from '../errors';
 import type { Point } from '../geometry/point';
 import { defineCommand } from './define';
+import { requireOnPlan } from './plan-limits';
 
 export interface MoveNodeArgs {
   readonly nodeId: string;
@@ -11,7 +12,7 @@ export interface MoveNodeArgs {
 
 export const moveNode = defineCommand('move-node', 'Move a point of the run.', (doc, state, args: MoveNodeArgs) => {
   if (!findNode(doc, args.nodeId)) throw new PlanError(`There is no point with id "${args.nodeId}".`, { nodeId: args.nodeId });
-  if (!Number.isFinite(args.to.x) || !Number.isFinite(args.to.y)) throw new PlanError('That point is off the plan.', { nodeId: args.nodeId });
+  requireOnPlan(args.to, { nodeId: args.nodeId });
   const nodes = doc.nodes.map((node) => (node.id === args.nodeId ? { ...node, x: args.to.x, y: args.to.y } : node));
   return { doc: { ...doc, nodes }, state };
 });
