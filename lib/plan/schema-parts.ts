@@ -17,9 +17,9 @@ export const MIN_TEMPERATURE_C = MIN_AIR_TEMPERATURE_C;
 export const MAX_TEMPERATURE_C = MAX_AIR_TEMPERATURE_C;
 
 /**
- * Per plan (one drawing, usually one floor). The editor stays responsive with a thousand segments,
- * and every run and room is analysed on each view: 200 runs and 200 rooms are far more than one
- * floor's air handlers, fan-coil units and quiet rooms; 3000 segments hold them with their branches.
+ * Per plan (one drawing, usually one floor), where every run and room is analysed on each view:
+ * 200 runs and 200 rooms are far more than one floor's air handlers, fan-coil units and quiet rooms;
+ * 3000 segments hold them with their branches (the editor's drag benchmark uses a thousand).
  */
 export const MAX_PLAN_RUNS = 200;
 export const MAX_PLAN_ROOMS = 200;
