@@ -8,8 +8,8 @@ import { discontinuityReflections } from './reflections';
 import { modeShape } from './resonances/mode-shape';
 import { attachLazyEnvelope } from './resonances/lazy-envelope';
 import { findNaturalFrequencies } from './resonances/natural-frequencies';
-import { cutoffHz } from './section';
-import type { Resonance, RunAnalysis, RunInput, Segment } from './types';
+import { lowestCutoffHz } from './run-cutoff';
+import type { Resonance, RunAnalysis, RunInput } from './types';
 import { validateRun } from './validate-run';
 
 const DEFAULT_MAX_ECHOES = 40;
@@ -27,15 +27,6 @@ const MIN_SCAN_POINTS = 16;
 const ORDER_SEARCH_FLOOR_SPACINGS = 0.1;
 /** Modes whose damping is below this fraction of their frequency count as undamped (Q null). */
 const UNDAMPED_FRACTION = 1e-9;
-
-function lowestCutoffHz(segments: Segment[], speedOfSoundMps: number): number {
-  let lowest = Infinity;
-  for (const segment of segments) {
-    lowest = Math.min(lowest, cutoffHz(segment.section, speedOfSoundMps));
-    for (const branch of segment.branches ?? []) lowest = Math.min(lowest, lowestCutoffHz(branch.segments, speedOfSoundMps));
-  }
-  return lowest;
-}
 
 const formatHz = (hz: number): string => `${hz.toFixed(1)} Hz`;
 

@@ -25,6 +25,11 @@ export { validateRun } from './validate-run';
 export { inputError } from './input-error';
 export { bladePassHz } from './blade-pass';
 export { OCTAVE_BANDS_HZ } from './constants';
+export {
+  MIN_AIR_TEMPERATURE_C, MAX_AIR_TEMPERATURE_C, MAX_SEGMENT_LENGTH_M, MAX_RUN_LENGTH_M, MAX_RUN_SEGMENTS, MAX_BRANCH_DEPTH,
+  MAX_SECTION_DIMENSION_M, MAX_LINING_THICKNESS_M, MAX_ANALYSIS_HZ, MAX_HZ_PER_CUTOFF, MAX_RESONANCES, MAX_ECHOES,
+  MAX_ROOM_SIDE_M, MAX_ROOM_HEIGHT_M, MAX_ROOM_MODE_CANDIDATES, MAX_IMAGE_ORDER, MAX_FAN_BLADES, MAX_FAN_RPM, MAX_FAN_HARMONICS,
+} from './input-limits';
 export type { Complex } from './complex';
 export type {
   Section,

@@ -27,6 +27,18 @@ export function requireAtLeast(value: unknown, bound: number, fieldPath: string)
   return checked;
 }
 
+/** Throws unless value is a finite number at or below the bound. */
+export function requireAtMost(value: unknown, bound: number, fieldPath: string): number {
+  const checked = requireFinite(value, fieldPath);
+  if (!(checked <= bound)) throw inputError(fieldPath, `must be <= ${bound}`);
+  return checked;
+}
+
+/** Throws unless value is a finite number in (low, high]. */
+export function requireAboveAtMost(value: unknown, low: number, high: number, fieldPath: string): number {
+  return requireAtMost(requireAbove(value, low, fieldPath), high, fieldPath);
+}
+
 /** Throws unless value is a finite number in [low, high]. */
 export function requireBetween(value: unknown, low: number, high: number, fieldPath: string): number {
   const checked = requireFinite(value, fieldPath);

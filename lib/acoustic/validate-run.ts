@@ -1,19 +1,35 @@
 // Validation of a RunInput: throws a RangeError naming the offending field by its path.
-import { MIN_SECTION_DIMENSION_M, ZERO_CELSIUS_K } from './constants';
-import { inputError, requireAbove, requireAtLeast, requireBetween } from './input-error';
+import { MIN_SECTION_DIMENSION_M } from './constants';
+import { inputError, requireAboveAtMost, requireAtLeast, requireAtMost, requireBetween } from './input-error';
+import {
+  MAX_AIR_TEMPERATURE_C, MAX_ANALYSIS_HZ, MAX_BRANCH_DEPTH, MAX_ECHOES, MAX_LINING_THICKNESS_M, MAX_RUN_LENGTH_M,
+  MAX_RUN_SEGMENTS, MAX_SECTION_DIMENSION_M, MAX_SEGMENT_LENGTH_M, MIN_AIR_TEMPERATURE_C,
+} from './input-limits';
 import type { RunInput } from './types';
+import { validateAnalysisRange } from './validate-range';
 
 function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
 }
 
+/** What the walk over the segments has counted so far. */
+interface RunTally {
+  segments: number;
+  ductLengthM: number;
+}
+
+function requireDimension(value: unknown, fieldPath: string): void {
+  requireAtLeast(value, MIN_SECTION_DIMENSION_M, fieldPath);
+  requireAtMost(value, MAX_SECTION_DIMENSION_M, fieldPath);
+}
+
 export function validateSection(section: unknown, path: string): void {
   if (!isRecord(section)) throw inputError(path, 'must be an object');
   if (section.shape === 'round') {
-    requireAtLeast(section.diameterM, MIN_SECTION_DIMENSION_M, `${path}.diameterM`);
+    requireDimension(section.diameterM, `${path}.diameterM`);
   } else if (section.shape === 'rect') {
-    requireAtLeast(section.widthM, MIN_SECTION_DIMENSION_M, `${path}.widthM`);
-    requireAtLeast(section.heightM, MIN_SECTION_DIMENSION_M, `${path}.heightM`);
+    requireDimension(section.widthM, `${path}.widthM`);
+    requireDimension(section.heightM, `${path}.heightM`);
   } else {
     throw inputError(`${path}.shape`, "must be 'round' or 'rect'");
   }
@@ -38,47 +54,64 @@ export function validateTermination(termination: unknown, path: string): void {
   }
 }
 
-function validateSegments(segments: unknown, path: string): void {
+/** Counts the segment and its length into the tally, refusing the first that takes the run past a limit. */
+function countSegment(lengthM: number, tally: RunTally): void {
+  tally.segments += 1;
+  tally.ductLengthM += lengthM;
+  if (tally.segments > MAX_RUN_SEGMENTS) throw inputError('segments', `must hold at most ${MAX_RUN_SEGMENTS} segments, branches included`);
+  if (tally.ductLengthM > MAX_RUN_LENGTH_M) throw inputError('segments', `must hold at most ${MAX_RUN_LENGTH_M} m of duct, branches included`);
+}
+
+function validateSegments(segments: unknown, path: string, depth: number, tally: RunTally): void {
   if (!Array.isArray(segments)) throw inputError(path, 'must be an array');
   if (segments.length === 0) throw inputError(path, 'must not be empty');
   segments.forEach((segment: unknown, index) => {
     const segmentPath = `${path}[${index}]`;
     if (!isRecord(segment)) throw inputError(segmentPath, 'must be an object');
-    requireAbove(segment.lengthM, 0, `${segmentPath}.lengthM`);
+    countSegment(requireAboveAtMost(segment.lengthM, 0, MAX_SEGMENT_LENGTH_M, `${segmentPath}.lengthM`), tally);
     validateSection(segment.section, `${segmentPath}.section`);
     if (segment.lining !== undefined) {
       const lining = segment.lining;
       if (!isRecord(lining)) throw inputError(`${segmentPath}.lining`, 'must be an object');
-      requireAbove(lining.thicknessM, 0, `${segmentPath}.lining.thicknessM`);
+      requireAboveAtMost(lining.thicknessM, 0, MAX_LINING_THICKNESS_M, `${segmentPath}.lining.thicknessM`);
       requireBetween(lining.absorption, 0, 1, `${segmentPath}.lining.absorption`);
     }
     if (segment.branches !== undefined) {
       if (!Array.isArray(segment.branches)) throw inputError(`${segmentPath}.branches`, 'must be an array');
+      if (segment.branches.length > 0 && depth >= MAX_BRANCH_DEPTH) {
+        throw inputError(`${segmentPath}.branches`, `must be nested at most ${MAX_BRANCH_DEPTH} deep`);
+      }
       segment.branches.forEach((branch: unknown, branchIndex) => {
         const branchPath = `${segmentPath}.branches[${branchIndex}]`;
         if (!isRecord(branch)) throw inputError(branchPath, 'must be an object');
-        validateSegments(branch.segments, `${branchPath}.segments`);
+        validateSegments(branch.segments, `${branchPath}.segments`, depth + 1, tally);
         validateTermination(branch.end, `${branchPath}.end`);
       });
     }
   });
 }
 
+function validateFrequency(value: unknown, fieldPath: string): void {
+  if (value !== undefined) requireAboveAtMost(value, 0, MAX_ANALYSIS_HZ, fieldPath);
+}
+
 /** Checks a RunInput; returns it typed, or throws a RangeError whose message names the field. */
 export function validateRun(input: unknown): RunInput {
   if (!isRecord(input)) throw inputError('input', 'must be an object');
-  if (input.temperatureC !== undefined) requireAbove(input.temperatureC, -ZERO_CELSIUS_K, 'temperatureC');
-  validateSegments(input.segments, 'segments');
+  if (input.temperatureC !== undefined) requireBetween(input.temperatureC, MIN_AIR_TEMPERATURE_C, MAX_AIR_TEMPERATURE_C, 'temperatureC');
+  const tally: RunTally = { segments: 0, ductLengthM: 0 };
+  validateSegments(input.segments, 'segments', 0, tally);
   validateTermination(input.start, 'start');
   validateTermination(input.end, 'end');
-  if (input.minHz !== undefined) requireAbove(input.minHz, 0, 'minHz');
-  if (input.maxHz !== undefined) requireAbove(input.maxHz, 0, 'maxHz');
+  validateFrequency(input.minHz, 'minHz');
+  validateFrequency(input.maxHz, 'maxHz');
   if (input.minHz !== undefined && input.maxHz !== undefined && !((input.maxHz as number) > (input.minHz as number))) {
     throw inputError('maxHz', 'must be > minHz');
   }
   if (input.wallLosses !== undefined && typeof input.wallLosses !== 'boolean') throw inputError('wallLosses', 'must be a boolean');
-  if (input.maxEchoes !== undefined) requireBetween(input.maxEchoes, 0, 10000, 'maxEchoes');
+  if (input.maxEchoes !== undefined) requireBetween(input.maxEchoes, 0, MAX_ECHOES, 'maxEchoes');
   if (input.echoThreshold !== undefined) requireBetween(input.echoThreshold, 1e-12, 1, 'echoThreshold');
-  return input as unknown as RunInput;
+  const run = input as unknown as RunInput;
+  validateAnalysisRange(run, tally.ductLengthM);
+  return run;
 }
-

@@ -6,7 +6,8 @@ import { nodePositions, type Lining, type PlanDocument, type Section } from './d
 import { PlanError } from './errors';
 import { segmentLengthM } from './geometry/length';
 import { buildRunTree, mainPathOf, type ChildLink } from './run-tree';
-import { MIN_SECTION_M } from './schema';
+import { MAX_SEGMENT_LENGTH_M, MIN_SECTION_M } from './schema';
+import { MAX_LINING_THICKNESS_M, MAX_RUN_SEGMENTS, MAX_SECTION_DIMENSION_M } from '@/lib/acoustic';
 import { planLabels } from './labels/names';
 
 export const SCHEDULE_COLUMNS = ['order', 'from_m', 'length_m', 'shape', 'diameter_mm', 'width_mm', 'height_mm', 'lining_thickness_mm', 'lining_absorption', 'segment_id', 'segment'] as const;
@@ -59,7 +60,7 @@ type Cells = Partial<Record<ScheduleColumn, string>>;
 /** A cell as text, without a leading quote added against formulas. */
 const cellText = (value: string | undefined) => (value ?? '').trim().replace(/^'/, '');
 
-function readNumber(cells: Cells, column: ScheduleColumn, row: number, errors: ScheduleError[], options: { required: boolean; min?: number; max?: number; minText?: string; allowZero?: boolean }): number | null {
+function readNumber(cells: Cells, column: ScheduleColumn, row: number, errors: ScheduleError[], options: { required: boolean; min?: number; max?: number; minText?: string; maxText?: string; allowZero?: boolean }): number | null {
   const text = cellText(cells[column]);
   if (text === '') {
     if (options.required) errors.push({ row, column, message: `Row ${row}, ${column}: is empty; a number is needed.` });
@@ -68,6 +69,10 @@ function readNumber(cells: Cells, column: ScheduleColumn, row: number, errors: S
   const value = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(text) ? Number(text) : Number.NaN;
   if (!Number.isFinite(value)) {
     errors.push({ row, column, message: `Row ${row}, ${column}: "${text}" is not a number.` });
+    return null;
+  }
+  if (options.max !== undefined && value > options.max && options.maxText) {
+    errors.push({ row, column, message: `Row ${row}, ${column}: ${text} ${options.maxText}.` });
     return null;
   }
   if ((options.min !== undefined && value < options.min) || (options.max !== undefined && value > options.max) || (value === 0 && !options.allowZero)) {
@@ -81,9 +86,9 @@ function readRow(cells: Cells, row: number, errors: ScheduleError[]): ScheduleRo
   const before = errors.length;
   const order = readNumber(cells, 'order', row, errors, { required: true, min: 1, minText: 'must be a whole number from 1' });
   if (order !== null && !Number.isInteger(order)) errors.push({ row, column: 'order', message: `Row ${row}, order: ${order} must be a whole number.` });
-  const lengthM = readNumber(cells, 'length_m', row, errors, { required: false, min: 0, minText: 'must be more than 0 m' });
+  const lengthM = readNumber(cells, 'length_m', row, errors, { required: false, min: 0, max: MAX_SEGMENT_LENGTH_M, minText: 'must be more than 0 m', maxText: `must be at most ${MAX_SEGMENT_LENGTH_M} m` });
   const shape = cellText(cells.shape).toLowerCase();
-  const sizeOptions = { min: MIN_SECTION_M * 1000, max: 10000, minText: `must be between ${MIN_SECTION_M * 1000} mm and 10000 mm` };
+  const sizeOptions = { min: MIN_SECTION_M * 1000, max: MAX_SECTION_DIMENSION_M * 1000, minText: `must be between ${MIN_SECTION_M * 1000} mm and ${MAX_SECTION_DIMENSION_M * 1000} mm` };
   let section: Section | null = null;
   if (shape === 'round') {
     const diameterMm = readNumber(cells, 'diameter_mm', row, errors, { required: true, ...sizeOptions });
@@ -95,7 +100,7 @@ function readRow(cells: Cells, row: number, errors: ScheduleError[]): ScheduleRo
   } else {
     errors.push({ row, column: 'shape', message: `Row ${row}, shape: "${cellText(cells.shape)}" must be round or rect.` });
   }
-  const thicknessMm = readNumber(cells, 'lining_thickness_mm', row, errors, { required: false, min: 0, max: 1000, minText: 'must be between 0 and 1000 mm' });
+  const thicknessMm = readNumber(cells, 'lining_thickness_mm', row, errors, { required: false, min: 0, max: MAX_LINING_THICKNESS_M * 1000, minText: `must be between 0 and ${MAX_LINING_THICKNESS_M * 1000} mm` });
   const absorptionText = cellText(cells.lining_absorption);
   const absorption = readNumber(cells, 'lining_absorption', row, errors, { required: false, min: 0, max: 1, minText: 'must be between 0 and 1', allowZero: true });
   const thicknessGiven = cellText(cells.lining_thickness_mm) !== '';
@@ -109,16 +114,28 @@ function readRow(cells: Cells, row: number, errors: ScheduleError[]): ScheduleRo
   return { order, lengthM, section, lining, segmentId: segmentId === '' ? null : segmentId };
 }
 
+const isBlank = (line: readonly string[]) => line.every((cell) => cell.trim() === '');
+
+/** A schedule of MAX_RUN_SEGMENTS rows is about 200 kB; a file over this many characters is refused unread. */
+export const MAX_SCHEDULE_CSV_CHARS = 1_000_000;
+
 export function parseScheduleCsv(text: string): { ok: true; rows: ScheduleRow[] } | { ok: false; errors: ScheduleError[] } {
+  if (text.length > MAX_SCHEDULE_CSV_CHARS) {
+    return { ok: false, errors: [{ row: 0, column: '', message: `The file is over ${MAX_SCHEDULE_CSV_CHARS} characters; a run's schedule (at most ${MAX_RUN_SEGMENTS} segments) is far smaller.` }] };
+  }
   const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { header: false });
   const errors: ScheduleError[] = parsed.errors.map((error) => ({ row: (error.row ?? 0) + 1, column: '', message: `Row ${(error.row ?? 0) + 1}: ${error.message}.` }));
   const [header = [], ...lines] = parsed.data;
   const columns = header.map((name) => name.trim().toLowerCase());
   const missing = REQUIRED_COLUMNS.filter((column) => !columns.includes(column));
   if (missing.length > 0) return { ok: false, errors: missing.map((column) => ({ row: 1, column, message: `Row 1: the column ${column} is missing.` })) };
+  const filled = lines.filter((line) => !isBlank(line)).length;
+  if (filled > MAX_RUN_SEGMENTS) {
+    return { ok: false, errors: [{ row: 0, column: '', message: `The file has ${filled} segment rows; a run holds at most ${MAX_RUN_SEGMENTS} segments.` }] };
+  }
   const rows: ScheduleRow[] = [];
   lines.forEach((line, index) => {
-    if (line.every((cell) => cell.trim() === '')) return;
+    if (isBlank(line)) return;
     const cells: Cells = {};
     columns.forEach((column, position) => {
       if ((SCHEDULE_COLUMNS as readonly string[]).includes(column)) cells[column as ScheduleColumn] = line[position];

@@ -1,11 +1,44 @@
-// The document schema's building blocks (sections, linings, terminations, fan), shared by rooms and runs.
+// The document schema's building blocks (sections, linings, terminations, fan, limits), shared by rooms and runs.
+// Physical limits come from the engine's (lib/acoustic/input-limits.ts), so a document that saves is one it analyses.
 import { z } from 'zod';
+import {
+  MAX_AIR_TEMPERATURE_C, MAX_FAN_BLADES, MAX_FAN_RPM, MAX_LINING_THICKNESS_M, MAX_ROOM_HEIGHT_M, MAX_SECTION_DIMENSION_M,
+  MAX_SEGMENT_LENGTH_M, MIN_AIR_TEMPERATURE_C,
+} from '@/lib/acoustic';
+import { limited } from './saved-limits';
+
+export { readSavedDocument } from './saved-limits';
+export { MAX_ROOM_SIDE_M, MAX_SEGMENT_LENGTH_M } from '@/lib/acoustic';
 
 export const MAX_ID_LENGTH = 40;
 export const MAX_ITEMS = 5000;
 export const MIN_SECTION_M = 0.01;
-export const MIN_TEMPERATURE_C = -40;
-export const MAX_TEMPERATURE_C = 60;
+export const MIN_TEMPERATURE_C = MIN_AIR_TEMPERATURE_C;
+export const MAX_TEMPERATURE_C = MAX_AIR_TEMPERATURE_C;
+
+/**
+ * Per plan (one drawing, usually one floor), where every run and room is analysed on each view:
+ * 200 runs and 200 rooms are far more than one floor's air handlers, fan-coil units and quiet rooms;
+ * 3000 segments hold them with their branches (the editor's drag benchmark uses a thousand).
+ */
+export const MAX_PLAN_RUNS = 200;
+export const MAX_PLAN_ROOMS = 200;
+export const MAX_PLAN_SEGMENTS = 3000;
+/** Every run is a tree: one node more than its segments. */
+export const MAX_PLAN_NODES = MAX_PLAN_SEGMENTS + MAX_PLAN_RUNS;
+
+/**
+ * Plan coordinates, px from the plan's origin: 100 000 px is more than ten times the widest stored
+ * drawing (MAX_STORED_SIDE_PX in lib/uploads) and 25 times the blank grid.
+ */
+export const MAX_PLAN_COORDINATE_PX = 100000;
+
+/**
+ * Scale, metres per plan pixel. Above 1 m a pixel is wider than any duct, so no duct plan is drawn
+ * that coarse (a 4000 px drawing would cover 4 km); below 0.1 mm a 4000 px drawing would be 0.4 m wide.
+ */
+export const MIN_METRES_PER_PIXEL = 0.0001;
+export const MAX_METRES_PER_PIXEL = 1;
 
 export const idSchema = z
   .string({ error: 'must be an id (text)' })
@@ -14,7 +47,9 @@ export const idSchema = z
 
 export const finite = (what: string) => z.number({ error: `${what} must be a finite number` });
 
-const sectionSizeM = finite('a section size').min(MIN_SECTION_M, `must be at least ${MIN_SECTION_M} m (10 mm)`).max(10, 'must be at most 10 m');
+const sectionSizeM = finite('a section size')
+  .min(MIN_SECTION_M, `must be at least ${MIN_SECTION_M} m (10 mm)`)
+  .max(MAX_SECTION_DIMENSION_M, `must be at most ${MAX_SECTION_DIMENSION_M} m`);
 
 export const sectionSchema = z.discriminatedUnion(
   'shape',
@@ -27,10 +62,13 @@ export const sectionSchema = z.discriminatedUnion(
 
 const absorptionSchema = finite('absorption').min(0, 'must be between 0 and 1').max(1, 'must be between 0 and 1');
 
-export const liningSchema = z.object({
-  thicknessM: finite('lining thickness').gt(0, 'must be more than 0 m').max(1, 'must be at most 1 m'),
-  absorption: absorptionSchema,
-});
+/** A positive quantity with an upper limit, e.g. `positiveAtMost('tuning', 20000, 'Hz')`. */
+export const positiveAtMost = (what: string, most: number, unit: string) =>
+  limited(finite(what).gt(0, `must be more than 0 ${unit}`), (value) => value <= most, `must be at most ${most} ${unit}`);
+
+export const liningThicknessMSchema = positiveAtMost('lining thickness', MAX_LINING_THICKNESS_M, 'm');
+
+export const liningSchema = z.object({ thicknessM: liningThicknessMSchema, absorption: absorptionSchema });
 
 export const terminationSchema = z.discriminatedUnion(
   'kind',
@@ -48,11 +86,32 @@ export const temperatureCSchema = finite('temperature')
   .max(MAX_TEMPERATURE_C, `must be at most ${MAX_TEMPERATURE_C} °C`);
 
 export const fanSchema = z.object({
-  blades: z.number().int('must be a whole number').min(1, 'must be at least 1').max(100, 'must be at most 100'),
-  rpm: finite('speed').gt(0, 'must be more than 0 rpm').max(100000, 'must be at most 100000 rpm'),
+  blades: z.number().int('must be a whole number').min(1, 'must be at least 1').max(MAX_FAN_BLADES, `must be at most ${MAX_FAN_BLADES}`),
+  rpm: positiveAtMost('speed', MAX_FAN_RPM, 'rpm'),
 });
 
-export const lengthOverrideMSchema = finite('length').gt(0, 'must be more than 0 m').max(100000, 'must be at most 100 km');
+/** A length typed for one segment (an override, a treatment's length). */
+export const lengthOverrideMSchema = positiveAtMost('length', MAX_SEGMENT_LENGTH_M, 'm');
+
+/** A change of one segment's length, m, either way. */
+export const lengthChangeMSchema = limited(finite('length change'), (deltaM) => Math.abs(deltaM) <= MAX_SEGMENT_LENGTH_M, `must be within ±${MAX_SEGMENT_LENGTH_M} m`);
+
+/** A plan coordinate, px; `axis` names it in the message for a value that is not a number ('x', 'y'). */
+export const planCoordinateSchema = (axis: string) =>
+  limited(finite(axis), (px) => Math.abs(px) <= MAX_PLAN_COORDINATE_PX, `must be within ${MAX_PLAN_COORDINATE_PX} px of the plan's origin`);
+
+export const metresPerPixelSchema = z
+  .number({ error: 'must be a number' })
+  .min(MIN_METRES_PER_PIXEL, `must be at least ${MIN_METRES_PER_PIXEL} (0.1 mm per pixel); set the scale again`)
+  .max(MAX_METRES_PER_PIXEL, `must be at most ${MAX_METRES_PER_PIXEL} (1 m per pixel); set the scale again`);
+
+/** A room's height (its length and width are checked by roomSideMSchema). */
+export const withinRoomHeight = <T extends z.ZodType<number>>(schema: T): T =>
+  limited(schema, (heightM) => heightM <= MAX_ROOM_HEIGHT_M, `must be at most ${MAX_ROOM_HEIGHT_M} m`);
+
+/** A list of at most `most` things of a plan, e.g. `at most 200 runs`. */
+export const planList = <T extends z.ZodType>(item: T, most: number, what: string) =>
+  limited(z.array(item), (items) => items.length <= most, `at most ${most} ${what}`);
 
 /** A segment's stable number within its run (the "3" of "A3"). */
 export const segmentNumberSchema = z.number({ error: 'must be a whole number' }).int('must be a whole number').min(1, 'must be at least 1').max(MAX_ITEMS, `must be at most ${MAX_ITEMS}`);

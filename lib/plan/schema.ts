@@ -3,11 +3,14 @@ import { z } from 'zod';
 import type { PlanDocument } from './document';
 import { planTreatmentSchema, roomSchema, soundPowerBandsSchema } from './rooms/room-schema';
 import { pathInsertSchema } from './noise/insert-schema';
-import { fanSchema, finite, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, runLetterSchema, sectionSchema, segmentNumberSchema, temperatureCSchema, terminationSchema } from './schema-parts';
+import {
+  fanSchema, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, MAX_PLAN_NODES, MAX_PLAN_ROOMS, MAX_PLAN_RUNS, MAX_PLAN_SEGMENTS,
+  planCoordinateSchema, planList, runLetterSchema, sectionSchema, segmentNumberSchema, temperatureCSchema, terminationSchema,
+} from './schema-parts';
 
 export * from './schema-parts';
 
-const nodeSchema = z.object({ id: idSchema, x: finite('x'), y: finite('y') });
+const nodeSchema = z.object({ id: idSchema, x: planCoordinateSchema('x'), y: planCoordinateSchema('y') });
 
 const segmentSchema = z.object({
   id: idSchema,
@@ -35,14 +38,13 @@ const runSchema = z.object({
 });
 
 const placeholders = z.array(z.record(z.string(), z.unknown())).max(MAX_ITEMS);
-const MAX_ROOMS = 500;
 
 const documentShape = z.object({
   schemaVersion: z.literal(1, { error: 'must be 1' }),
-  nodes: z.array(nodeSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} nodes`),
-  segments: z.array(segmentSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} segments`),
-  runs: z.array(runSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} runs`),
-  rooms: z.array(roomSchema).max(MAX_ROOMS, `at most ${MAX_ROOMS} rooms`),
+  nodes: planList(nodeSchema, MAX_PLAN_NODES, 'points'),
+  segments: planList(segmentSchema, MAX_PLAN_SEGMENTS, 'segments'),
+  runs: planList(runSchema, MAX_PLAN_RUNS, 'runs'),
+  rooms: planList(roomSchema, MAX_PLAN_ROOMS, 'rooms'),
   outlets: placeholders,
   listeners: placeholders,
   // Documents saved before treatments existed have none.

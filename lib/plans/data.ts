@@ -1,7 +1,7 @@
 // Plans of a team's projects. Every query is scoped by team (through the project).
 import { AppError, notFound } from '@/lib/errors';
 import { emptyDocument, type PlanDocument } from '@/lib/plan/document';
-import { planDocumentSchema } from '@/lib/plan/schema';
+import { planDocumentSchema, readSavedDocument } from '@/lib/plan/schema';
 import { sequelize } from '@/lib/db';
 import { Plan, Project, Upload } from '@/models';
 import { toUploadSummary, type UploadSummary } from '@/lib/uploads/data';
@@ -68,7 +68,7 @@ export async function getPlan(teamId: string, planId: string): Promise<PlanView>
     archived: row.archived,
     version: row.version,
     metresPerPixel: row.metresPerPixel,
-    document: planDocumentSchema.parse(row.document),
+    document: readSavedDocument(() => planDocumentSchema.parse(row.document)),
     background: background && toUploadSummary(background),
     project: { id: row.project!.id, name: row.project!.name },
     updatedAt: row.updatedAt.toISOString(),

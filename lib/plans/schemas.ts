@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { planDocumentSchema } from '@/lib/plan/schema';
+import { metresPerPixelSchema, planDocumentSchema } from '@/lib/plan/schema';
 
 // Shared by the plan forms and their routes.
 export const planNameSchema = z.string({ error: 'Give the plan a name.' }).trim().min(1, 'Give the plan a name.').max(160, 'Keep the name under 160 characters.');
@@ -13,7 +13,7 @@ export const planMetaSchema = z
 
 export const savePlanSchema = z.object({
   version: z.number({ error: 'version must be the plan version you loaded' }).int().positive(),
-  metresPerPixel: z.number({ error: 'metresPerPixel must be a number' }).positive('metresPerPixel must be > 0').max(100, 'metresPerPixel must be <= 100'),
+  metresPerPixel: metresPerPixelSchema,
   document: planDocumentSchema,
 });
 export type SavePlanInput = z.infer<typeof savePlanSchema>;

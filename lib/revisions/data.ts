@@ -1,7 +1,7 @@
 // Revisions of a team's plans: submit (freeze), list, read. Scoped by team everywhere.
 import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
-import { planDocumentSchema } from '@/lib/plan/schema';
+import { planDocumentSchema, readSavedDocument } from '@/lib/plan/schema';
 import { getPlan } from '@/lib/plans/data';
 import { contentHash } from '@/lib/plans/analysis/content-hash';
 import { planAnalysisOf } from '@/lib/plans/analysis/store';
@@ -69,7 +69,7 @@ async function toView(row: Revision): Promise<RevisionView> {
     planName: row.planName,
     project: { id: project?.id ?? '', name: project?.name ?? '' },
     metresPerPixel: row.metresPerPixel,
-    document: planDocumentSchema.parse(row.document),
+    document: readSavedDocument(() => planDocumentSchema.parse(row.document)),
     analysis: row.analysis as RunResult[],
     extras: (row.extras ?? {}) as RevisionExtras,
     background: background && { id: background.id, contentType: background.contentType, widthPx: background.widthPx, heightPx: background.heightPx },

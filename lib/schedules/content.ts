@@ -15,7 +15,13 @@ import { describeSection, describeTermination } from './describe';
 
 export interface ScheduleLine { x1: number; y1: number; x2: number; y2: number }
 export interface ScheduleRoomOutline { x: number; y: number; widthPx: number; heightPx: number; name: string }
-export interface ScheduleFigure { metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number; image: { data: Buffer; format: 'png' | 'jpg' } | null; lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[]; rooms: ScheduleRoomOutline[] }
+export interface ScheduleFigure {
+  metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number;
+  image: { data: Buffer; format: 'png' | 'jpg' } | null;
+  /** The plan has a drawing, but it could not be decoded for printing (one stored before drawings were bounded). */
+  drawingLeftOut: boolean;
+  lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[]; rooms: ScheduleRoomOutline[];
+}
 
 export interface ScheduleRun {
   name: string;
@@ -83,7 +89,7 @@ export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerP
     return { x: rect.x, y: rect.y, widthPx: rect.width, heightPx: rect.height, name: room.name };
   });
   if (image && revision.background?.widthPx && revision.background.heightPx) {
-    return { metresPerPixel: revision.metresPerPixel, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, lines, labels, rooms };
+    return { metresPerPixel: revision.metresPerPixel, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, drawingLeftOut: false, lines, labels, rooms };
   }
   // A blank sheet: the drawn runs and rooms with a margin (from the plan's origin, at least 400 × 300 px).
   const drawn = drawnArea(doc, revision.metresPerPixel) ?? { x: 0, y: 0, widthPx: 0, heightPx: 0 };
@@ -91,7 +97,7 @@ export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerP
   const minY = Math.min(drawn.y, 0) - FIGURE_MARGIN_PX;
   const maxX = Math.max(drawn.x + drawn.widthPx, 400) + FIGURE_MARGIN_PX;
   const maxY = Math.max(drawn.y + drawn.heightPx, 300) + FIGURE_MARGIN_PX;
-  return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, lines, labels, rooms };
+  return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, drawingLeftOut: revision.background !== null, lines, labels, rooms };
 }
 
 /** The frozen plan's labels (revisions frozen before labels existed get the ones the editor gives). */

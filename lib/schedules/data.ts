@@ -8,7 +8,7 @@ import { schedulePath } from '@/lib/revisions/links';
 import type { RevisionView } from '@/lib/revisions/types';
 import { listDecisions } from '@/lib/reviews/data';
 import { getObject, putObject } from '@/lib/storage/object-store';
-import { imageAsPng } from '@/lib/uploads/as-png';
+import { printImage } from '@/lib/uploads/print-image';
 import { assertId } from '@/lib/team/ids';
 import { Schedule, Upload } from '@/models';
 import { scheduleContent, type ScheduleFigure } from './content';
@@ -29,11 +29,13 @@ async function planImage(revision: RevisionView): Promise<ScheduleFigure['image'
   if (!revision.background) return null;
   const upload = await Upload.findOne({ where: { id: revision.background.id, teamId: revision.teamId } });
   if (!upload) return null;
-  const bytes = await getObject(upload.storageKey);
-  if (upload.contentType === 'image/png') return { data: Buffer.from(bytes), format: 'png' };
-  if (upload.contentType === 'image/jpeg') return { data: Buffer.from(bytes), format: 'jpg' };
-  // The PDF renderer carries PNG and JPEG only: other stored images (WebP) are re-encoded as PNG.
-  return { data: await imageAsPng(bytes), format: 'png' };
+  try {
+    return await printImage(await getObject(upload.storageKey), upload.contentType);
+  } catch (error) {
+    // A drawing stored before uploads were bounded may be over the pixel cap: the plan prints on a blank sheet and says so.
+    console.warn(`[schedule] drawing ${upload.id} left out of the print`, error);
+    return null;
+  }
 }
 
 export async function renderRevisionSchedule(revision: RevisionView, issuedBy: string | null, at: Date): Promise<Buffer> {

@@ -3,8 +3,10 @@ import { createHash, randomUUID } from 'node:crypto';
 import { AppError } from '@/lib/errors';
 import { getObject, putObject } from '@/lib/storage/object-store';
 import { Upload } from '@/models';
+import { boundedPlanImage, type BoundedImage } from './bounded-image';
 import { renderPdfFirstPage } from './pdf-first-page';
-import { sniffPlanFile } from './sniff';
+import { assertDeclaredPixels } from './pixel-limits';
+import { sniffPlanFile, type SniffedFile } from './sniff';
 
 export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
 
@@ -18,27 +20,31 @@ function cleanFileName(name: string): string {
   return name.replace(/[\\/\u0000-\u001f]/g, '_').slice(0, 200) || 'plan';
 }
 
-// Stores a plan background. A PDF's first page becomes the PNG that is stored.
+/** What a sniffed upload becomes before it is stored: a PDF's first page as PNG, every image bounded. */
+async function storableImage(bytes: Uint8Array, sniffed: SniffedFile, fileName: string): Promise<BoundedImage & { fileName: string }> {
+  if (sniffed.contentType === 'application/pdf') {
+    const page = await renderPdfFirstPage(bytes);
+    const pageName = `${fileName.replace(/\.pdf$/i, '')} (page 1).png`;
+    return { ...(await boundedPlanImage(page, 'image/png', pageName)), fileName: pageName };
+  }
+  assertDeclaredPixels(sniffed.widthPx ?? 0, sniffed.heightPx ?? 0, fileName);
+  return { ...(await boundedPlanImage(bytes, sniffed.contentType, fileName)), fileName };
+}
+
+// Stores a plan background: an image re-encoded within the pixel limits (pixel-limits.ts), or a PDF's first page drawn as PNG.
 export async function storePlanBackground(teamId: string, userId: string, fileName: string, bytes: Uint8Array): Promise<UploadSummary> {
   if (bytes.byteLength === 0) throw new AppError('bad_input', 'The file is empty.', { field: 'file' });
   if (bytes.byteLength > MAX_UPLOAD_BYTES) throw new AppError('too_large', 'The file is over 20 MB. Export the plan at a lower resolution.', { field: 'file' });
-  let sniffed = await sniffPlanFile(bytes);
+  const sniffed = await sniffPlanFile(bytes);
   if (!sniffed) {
     throw new AppError('bad_input', `“${cleanFileName(fileName)}” is not a PNG, JPEG, WebP or PDF file (judged by its content, not its name).`, { field: 'file' });
   }
-  let stored = bytes;
-  let storedName = cleanFileName(fileName);
-  if (sniffed.contentType === 'application/pdf') {
-    stored = await renderPdfFirstPage(bytes);
-    storedName = `${storedName.replace(/\.pdf$/i, '')} (page 1).png`;
-    sniffed = await sniffPlanFile(stored);
-    if (!sniffed) throw new AppError('bad_input', 'The first page of the PDF could not be turned into an image.', { field: 'file' });
-  }
+  const image = await storableImage(bytes, sniffed, cleanFileName(fileName));
   const storageKey = `teams/${teamId}/plans/${randomUUID()}`;
-  await putObject(storageKey, stored, sniffed.contentType);
+  await putObject(storageKey, image.bytes, image.contentType);
   const row = await Upload.create({
-    teamId, uploadedById: userId, storageKey, fileName: storedName, contentType: sniffed.contentType,
-    bytes: stored.byteLength, sha256: createHash('sha256').update(stored).digest('hex'), widthPx: sniffed.widthPx, heightPx: sniffed.heightPx,
+    teamId, uploadedById: userId, storageKey, fileName: image.fileName, contentType: image.contentType,
+    bytes: image.bytes.byteLength, sha256: createHash('sha256').update(image.bytes).digest('hex'), widthPx: image.widthPx, heightPx: image.heightPx,
   });
   return toUploadSummary(row);
 }

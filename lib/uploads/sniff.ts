@@ -3,7 +3,8 @@ import { fileTypeFromBuffer } from 'file-type';
 import { imageSize } from 'image-size';
 
 export const PLAN_IMAGE_TYPES = ['image/png', 'image/jpeg', 'image/webp'] as const;
-export type PlanFileType = (typeof PLAN_IMAGE_TYPES)[number] | 'application/pdf';
+export type PlanImageType = (typeof PLAN_IMAGE_TYPES)[number];
+export type PlanFileType = PlanImageType | 'application/pdf';
 
 export interface SniffedFile { contentType: PlanFileType; widthPx: number | null; heightPx: number | null }
 
@@ -15,7 +16,7 @@ export async function sniffPlanFile(bytes: Uint8Array): Promise<SniffedFile | nu
   try {
     const size = imageSize(bytes);
     if (!size.width || !size.height) return null;
-    return { contentType: detected.mime as SniffedFile['contentType'], widthPx: size.width, heightPx: size.height };
+    return { contentType: detected.mime as PlanImageType, widthPx: size.width, heightPx: size.height };
   } catch {
     return null;
   }

@@ -9,6 +9,8 @@ test('upload a plan, calibrate, draw a three-segment run in mixed units and read
   const planImage = await page.screenshot();
   await page.locator('#background-file').setInputFiles({ name: 'level-2.png', mimeType: 'image/png', buffer: planImage });
   await expect(page.getByTestId('upload-message')).toContainText('is the plan drawing now');
+  // The page refreshes with the drawing (the canvas then fits it): calibrate only once it is shown.
+  await expect(page.locator('label[for="background-file"]')).toHaveText('Replace drawing');
 
   const box = await canvasBox(page);
   const x0 = box.x + 80;

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { distancePx, type Point } from '@/lib/plan';
+import { distancePx, MAX_METRES_PER_PIXEL, metresPerPixelSchema, MIN_METRES_PER_PIXEL, type Point } from '@/lib/plan';
 import { parseLength } from '@/lib/plan/units';
 import type { UnitSystem } from '@/models/user';
 
@@ -22,7 +22,12 @@ export function ScaleDialog({ points, unitSystem, onApply, onCancel }: ScaleDial
     if (pixels < 2) { setError('The two points are too close together; click two points further apart.'); return; }
     const parsed = parseLength(text, { defaultUnit: unitSystem === 'si' ? 'm' : 'ft' });
     if (!parsed.ok) { setError(parsed.message); return; }
-    onApply(parsed.valueM / pixels);
+    const metresPerPixel = parsed.valueM / pixels;
+    if (!metresPerPixelSchema.safeParse(metresPerPixel).success) {
+      setError(`That makes ${metresPerPixel.toPrecision(3)} m per pixel; a plan's scale must be between ${MIN_METRES_PER_PIXEL * 1000} mm and ${MAX_METRES_PER_PIXEL} m per pixel. Check the distance and its unit.`);
+      return;
+    }
+    onApply(metresPerPixel);
   }
 
   return (

@@ -3,11 +3,12 @@
 import { analyzeRun } from '../analyze-run';
 import { bladePassHarmonicsHz } from '../blade-pass';
 import { DEFAULT_COINCIDENCE_PERCENT, DEFAULT_NEAR_MAXIMUM_WAVELENGTHS } from '../constants';
-import { requireAbove } from '../input-error';
+import { requireAbove, requireAboveAtMost } from '../input-error';
+import { MAX_FAN_BLADES, MAX_FAN_HARMONICS, MAX_FAN_RPM } from '../input-limits';
 import { outletLevels } from '../room/outlet-level';
 import { roomSpeedOfSound } from '../room/room-acoustics';
 import { validateRoomInput, type Point3 } from '../room/room-input';
-import { roomModes } from '../room-modes';
+import { axialRoomModes } from '../room-modes';
 import type { Resonance, RoomMode, RunAnalysis } from '../types';
 import { coincidenceWindowHz, describeResonance, formatHz, PERCENT } from './coincidence';
 import type { RiskFlag, RiskInput, Severity } from './risk-types';
@@ -26,9 +27,9 @@ function toneSeverity(resonance: Resonance, distanceHz: number, harmonic: number
 function toneFlags(input: RiskInput, analysis: RunAnalysis, percent: number): RiskFlag[] {
   if (!input.fan) return [];
   const harmonics = bladePassHarmonicsHz(
-    requireAbove(input.fan.blades, 0, 'fan.blades'),
-    requireAbove(input.fan.rpm, 0, 'fan.rpm'),
-    requireAbove(input.fan.harmonics ?? DEFAULT_HARMONICS, 0, 'fan.harmonics'),
+    requireAboveAtMost(input.fan.blades, 0, MAX_FAN_BLADES, 'fan.blades'),
+    requireAboveAtMost(input.fan.rpm, 0, MAX_FAN_RPM, 'fan.rpm'),
+    requireAboveAtMost(input.fan.harmonics ?? DEFAULT_HARMONICS, 0, MAX_FAN_HARMONICS, 'fan.harmonics'),
   );
   const flags: RiskFlag[] = [];
   harmonics.forEach((toneHz, index) => {
@@ -63,7 +64,7 @@ function distanceToMaximumM(coordinateM: number, lengthM: number, order: number)
 function roomModeFlags(input: RiskInput, analysis: RunAnalysis, percent: number, nearWavelengths: number): RiskFlag[] {
   if (!input.room) return [];
   const room = input.room;
-  const axial = roomModes(room.box, analysis.maxHz * (1 + percent / PERCENT)).filter((mode) => mode.type === 'axial');
+  const axial = axialRoomModes(room.box, analysis.maxHz * (1 + percent / PERCENT));
   const axes: Array<[keyof Point3, number]> = [['xM', room.box.lengthM], ['yM', room.box.widthM], ['zM', room.box.heightM]];
   const speedMps = roomSpeedOfSound(room.box);
   const flags: RiskFlag[] = [];

@@ -7,6 +7,7 @@ import type { RoomMode } from '../types';
 import { boundaryGain, type BoundaryGain } from './boundary-gain';
 import { imageSources, type ImageSource } from './image-sources';
 import { modalDensityPerHz, roomBands, roomGeometry, roomSpeedOfSound, schroederFrequencyHz, type RoomBand } from './room-acoustics';
+import { highestListableModeHz, requireListableModes } from './room-box';
 import { validateRoomInput, type RoomInput } from './room-input';
 import { firstCombNotchHz } from './room-level';
 
@@ -20,9 +21,12 @@ const MID_FREQUENCY_BANDS_HZ = [500, 1000];
 const COINCIDENT_IMAGE_M = 1e-3;
 
 export interface RoomAnalysisOptions {
-  /** Modes up to this frequency, Hz (default: twice the Schroeder frequency, at least 100 Hz). */
+  /**
+   * Modes up to this frequency, Hz (default: twice the Schroeder frequency, at least 100 Hz, and no
+   * higher than a list of the room's modes may go: see MAX_ROOM_MODE_CANDIDATES).
+   */
   maxModeHz?: number;
-  /** Image sources up to this many reflections (default 2). */
+  /** Image sources up to this many reflections (default 2, at most MAX_IMAGE_ORDER). */
   imageOrder?: number;
 }
 
@@ -56,8 +60,10 @@ export function analyzeRoom(input: RoomInput, options: RoomAnalysisOptions = {})
   const midBands = bands.filter((band) => MID_FREQUENCY_BANDS_HZ.includes(band.hz));
   const midReverberationTimeS = midBands.reduce((sum, band) => sum + band.reverberationTimeS, 0) / midBands.length;
   const schroederHz = Number.isFinite(midReverberationTimeS) ? schroederFrequencyHz(midReverberationTimeS, volumeM3) : Infinity;
-  const maxModeHz = options.maxModeHz ?? Math.max(100, Number.isFinite(schroederHz) ? 2 * schroederHz : 100);
+  const defaultModeHz = Math.max(100, Number.isFinite(schroederHz) ? 2 * schroederHz : 100);
+  const maxModeHz = options.maxModeHz ?? Math.min(defaultModeHz, highestListableModeHz(room.box, speedOfSoundMps));
   requireAbove(maxModeHz, 0, 'maxModeHz');
+  requireListableModes(room.box, maxModeHz, speedOfSoundMps, 'maxModeHz');
   const images = imageSources(room.box, room.surfaces, room.outlet, room.listener, options.imageOrder ?? 2);
   const direct = images.find((image) => image.order === 0);
   const directM = direct?.distanceM ?? 0;

@@ -5,7 +5,8 @@
 // reflection factors sqrt(1 - alpha) of the surfaces hit (per octave band; Allen & Berkley's beta) and
 // the spherical-spreading ratio r_direct / r_image.
 import { OCTAVE_BANDS_HZ } from '../constants';
-import { requireAtLeast } from '../input-error';
+import { requireAtLeast, requireAtMost } from '../input-error';
+import { MAX_IMAGE_ORDER } from '../input-limits';
 import type { RoomBox } from '../types';
 import type { Point3, RoomSurfaces, SurfaceName } from './room-input';
 import { roomSpeedOfSound } from './room-acoustics';
@@ -40,7 +41,7 @@ function axisImage(axis: Axis, index: number): { coordinateM: number; hits: Surf
 
 /** The direct sound and every image source up to maxOrder reflections, by delay. */
 export function imageSources(room: RoomBox, surfaces: RoomSurfaces, source: Point3, listener: Point3, maxOrder = 2): ImageSource[] {
-  requireAtLeast(maxOrder, 0, 'maxOrder');
+  requireAtMost(requireAtLeast(maxOrder, 0, 'maxOrder'), MAX_IMAGE_ORDER, 'maxOrder');
   const speedMps = roomSpeedOfSound(room);
   const axes: Axis[] = [
     { lengthM: room.lengthM, source: source.xM, near: 'wallXMin', far: 'wallXMax' },

@@ -1,8 +1,9 @@
 // Input shape of a room served by a duct run, and its validation (RangeError naming the field path).
 import { OCTAVE_BANDS_HZ } from '../constants';
 import { NC_CURVES } from '../nc-curves';
-import { inputError, requireAbove, requireBetween, requireFinite } from '../input-error';
+import { inputError, requireBetween } from '../input-error';
 import type { Mounting, RoomBox } from '../types';
+import { validateRoomBox } from './room-box';
 
 /** A point in the room, m, from the corner at the origin: x along lengthM, y along widthM, z up (heightM). */
 export interface Point3 {
@@ -42,10 +43,7 @@ export function validateRoomInput(room: unknown, path = 'room'): RoomInput {
   if (typeof room !== 'object' || room === null) throw inputError(path, 'must be an object');
   const candidate = room as RoomInput;
   if (typeof candidate.box !== 'object' || candidate.box === null) throw inputError(`${path}.box`, 'must be an object');
-  requireAbove(candidate.box.lengthM, 0, `${path}.box.lengthM`);
-  requireAbove(candidate.box.widthM, 0, `${path}.box.widthM`);
-  requireAbove(candidate.box.heightM, 0, `${path}.box.heightM`);
-  if (candidate.box.temperatureC !== undefined) requireFinite(candidate.box.temperatureC, `${path}.box.temperatureC`);
+  validateRoomBox(candidate.box, `${path}.box.`);
   if (typeof candidate.surfaces !== 'object' || candidate.surfaces === null) throw inputError(`${path}.surfaces`, 'must be an object');
   for (const name of SURFACE_NAMES) {
     const bands = candidate.surfaces[name];

@@ -4,6 +4,7 @@ import type { EditorState } from '../editor-state';
 import { PlanError } from '../errors';
 import { randomId, type IdGenerator } from '../ids';
 import { normalizeDocument, normalizeState } from '../normalize';
+import { requireWithinPlanLimits } from './plan-limits';
 import type { z } from 'zod';
 
 export type CommandName =
@@ -49,6 +50,7 @@ export function defineCommand<Name extends CommandName, Args>(name: Name, descri
     perform(doc, state, args, newId = randomId) {
       const result = apply(doc, state, args, newId);
       const normalized = normalizeDocument(result.doc, newId);
+      requireWithinPlanLimits(doc, normalized);
       return { doc: normalized, state: normalizeState(normalized, result.state) };
     },
   };

@@ -11,6 +11,7 @@ import { sectionSchema } from '../schema';
 import { runOfNode } from '../topology';
 import { checked, defineCommand, type CommandResult } from './define';
 import type { EditorState } from '../editor-state';
+import { requireOnPlan } from './plan-limits';
 
 export type NodeRef = { readonly nodeId: string } | { readonly point: Point };
 
@@ -27,7 +28,7 @@ function resolveNode(doc: PlanDocument, ref: NodeRef, newId: IdGenerator): { nod
     if (!node) throw new PlanError(`There is no point with id "${ref.nodeId}".`, { nodeId: ref.nodeId });
     return { node, isNew: false };
   }
-  if (!Number.isFinite(ref.point.x) || !Number.isFinite(ref.point.y)) throw new PlanError('That point is off the plan.');
+  requireOnPlan(ref.point);
   return { node: { id: newId(), x: ref.point.x, y: ref.point.y }, isNew: true };
 }
 

@@ -5,6 +5,7 @@ import { PlanError } from '../errors';
 import type { Point } from '../geometry/point';
 import { checkedScale, placeOutletsAtEnds } from '../rooms/outlet-link';
 import { defineCommand } from './define';
+import { requireOnPlan } from './plan-limits';
 
 export interface MoveNodeArgs {
   readonly nodeId: string;
@@ -15,7 +16,7 @@ export interface MoveNodeArgs {
 
 export const moveNode = defineCommand('move-node', 'Move a point of the run (an outlet fed from it moves with it).', (doc, state, args: MoveNodeArgs) => {
   if (!findNode(doc, args.nodeId)) throw new PlanError(`There is no point with id "${args.nodeId}".`, { nodeId: args.nodeId });
-  if (!Number.isFinite(args.to.x) || !Number.isFinite(args.to.y)) throw new PlanError('That point is off the plan.', { nodeId: args.nodeId });
+  requireOnPlan(args.to, { nodeId: args.nodeId });
   const metresPerPixel = checkedScale(args.metresPerPixel);
   const nodes = doc.nodes.map((node) => (node.id === args.nodeId ? { ...node, x: args.to.x, y: args.to.y } : node));
   return { doc: placeOutletsAtEnds({ ...doc, nodes }, metresPerPixel, args.nodeId), state };

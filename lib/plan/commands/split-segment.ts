@@ -7,6 +7,7 @@ import { projectOntoSegment } from '../geometry/hit-test';
 import type { Point } from '../geometry/point';
 import type { IdGenerator } from '../ids';
 import { defineCommand, type CommandResult } from './define';
+import { requireOnPlan } from './plan-limits';
 
 export interface SplitSegmentArgs {
   readonly segmentId: string;
@@ -23,7 +24,7 @@ export function splitSegmentEdit(doc: PlanDocument, state: EditorState, args: Sp
   const from = findNode(doc, segment.from);
   const to = findNode(doc, segment.to);
   if (!from || !to) throw new PlanError('That segment has lost one of its ends.', { segmentId: segment.id });
-  if (!Number.isFinite(args.at.x) || !Number.isFinite(args.at.y)) throw new PlanError('That point is off the plan.');
+  requireOnPlan(args.at);
   const { t, closest } = projectOntoSegment(args.at, from, to);
   if (t <= MIN_SPLIT_FRACTION || t >= 1 - MIN_SPLIT_FRACTION) throw new PlanError('Split inside the segment, away from its ends.', { segmentId: segment.id });
   const node = { id: newId(), x: closest.x, y: closest.y };

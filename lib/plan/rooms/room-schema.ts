@@ -1,10 +1,13 @@
 // zod schemas of rooms and chosen treatments, part of the one plan document schema.
 import { z } from 'zod';
-import { NC_CURVES, SURFACE_NAMES, type SurfaceName } from '@/lib/acoustic';
-import { finite, idSchema as id, liningSchema, terminationSchema } from '../schema-parts';
+import { MAX_ANALYSIS_HZ, MAX_SECTION_DIMENSION_M, NC_CURVES, SURFACE_NAMES, type SurfaceName } from '@/lib/acoustic';
+import {
+  finite, idSchema as id, lengthChangeMSchema, lengthOverrideMSchema, liningSchema, liningThicknessMSchema, MAX_ROOM_SIDE_M, planCoordinateSchema, positiveAtMost,
+  terminationSchema, withinRoomHeight,
+} from '../schema-parts';
 
 const OCTAVE_BAND_COUNT = 8;
-export const MAX_ROOM_SIDE_M = 200;
+export { MAX_ROOM_SIDE_M };
 /** The published NC curves run from NC 15 to NC 70 (ANSI S12.2); ratings between them are interpolated. */
 export const MIN_NC = NC_CURVES[0].rating;
 export const MAX_NC = NC_CURVES[NC_CURVES.length - 1].rating;
@@ -36,11 +39,11 @@ export const soundPowerBandsSchema = z
 export const roomSchema = z.object({
   id,
   name: roomNameSchema,
-  x: finite('x'),
-  y: finite('y'),
+  x: planCoordinateSchema('x'),
+  y: planCoordinateSchema('y'),
   lengthM: roomSideMSchema,
   widthM: roomSideMSchema,
-  heightM: roomSideMSchema,
+  heightM: withinRoomHeight(roomSideMSchema),
   surfaces: surfacesSchema,
   criterionNc: criterionNcSchema,
   outlet: roomPointSchema.extend({ nodeId: id.nullable() }),
@@ -48,14 +51,13 @@ export const roomSchema = z.object({
   outletSoundPowerDb: soundPowerBandsSchema.nullable(),
 });
 
-const positive = (what: string) => finite(what).gt(0, 'must be more than 0');
 const segmentIndex = z.number().int('must be a whole number').min(0, 'must be at least 0');
 
 export const treatmentSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('line-segment'), segmentIndex, lengthM: positive('length').optional(), thicknessM: positive('thickness'), absorption: finite('absorption').min(0).max(1) }),
+  z.object({ kind: z.literal('line-segment'), segmentIndex, lengthM: lengthOverrideMSchema.optional(), thicknessM: liningThicknessMSchema, absorption: finite('absorption').min(0).max(1) }),
   z.object({ kind: z.literal('change-termination'), end: z.enum(['start', 'end']), termination: terminationSchema }),
-  z.object({ kind: z.literal('retune-length'), segmentIndex: segmentIndex.optional(), deltaLengthM: finite('length change').optional() }),
-  z.object({ kind: z.literal('side-branch-resonator'), segmentIndex: segmentIndex.optional(), tuneHz: positive('tuning').optional(), diameterM: positive('bore').optional(), lengthM: positive('length').optional() }),
+  z.object({ kind: z.literal('retune-length'), segmentIndex: segmentIndex.optional(), deltaLengthM: lengthChangeMSchema.optional() }),
+  z.object({ kind: z.literal('side-branch-resonator'), segmentIndex: segmentIndex.optional(), tuneHz: positiveAtMost('tuning', MAX_ANALYSIS_HZ, 'Hz').optional(), diameterM: positiveAtMost('bore', MAX_SECTION_DIMENSION_M, 'm').optional(), lengthM: lengthOverrideMSchema.optional() }),
 ], { error: 'kind must be line-segment, change-termination, retune-length or side-branch-resonator' });
 
 const quantitySchema = z.object({
@@ -67,14 +69,14 @@ const quantitySchema = z.object({
 });
 
 export const planChangeSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('length-override'), segmentId: id, lengthM: positive('length') }),
+  z.object({ kind: z.literal('length-override'), segmentId: id, lengthM: lengthOverrideMSchema }),
   z.object({ kind: z.literal('lining'), segmentId: id, lining: liningSchema }),
   z.object({ kind: z.literal('termination'), nodeId: id, termination: terminationSchema }),
 ]);
 
 /** What the element held before a treatment changed it, so removing the treatment can put it back. */
 export const planChangePreviousSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('length-override'), segmentId: id, lengthM: positive('length').nullable() }),
+  z.object({ kind: z.literal('length-override'), segmentId: id, lengthM: lengthOverrideMSchema.nullable() }),
   z.object({ kind: z.literal('lining'), segmentId: id, lining: liningSchema.nullable() }),
   z.object({ kind: z.literal('termination'), nodeId: id, termination: terminationSchema }),
 ]);

@@ -22,7 +22,7 @@ export function PlanFigure({ content }: { content: ScheduleContent }) {
         Duct runs as frozen in revision {content.revisionNumber}; the filled dot marks each run’s start (fan side).
         {' '}Scale as set on the plan: {(figure.metresPerPixel * 1000).toFixed(1)} mm per drawing pixel; the area shown is
         {' '}{(figure.widthPx * figure.metresPerPixel).toFixed(1)} m × {(figure.heightPx * figure.metresPerPixel).toFixed(1)} m.
-        {figure.image ? '' : ' No drawing image is attached to this plan, so the runs are shown on a blank sheet.'}
+        {figure.image ? '' : figure.drawingLeftOut ? ' The plan’s drawing could not be read for printing (one stored before drawings were bounded may be too large: upload it again), so the runs are shown on a blank sheet.' : ' No drawing image is attached to this plan, so the runs are shown on a blank sheet.'}
       </Text>
       <View style={{ width, height, borderWidth: 0.5, borderColor: '#cfd1d4', position: 'relative' }}>
         {figure.image && <Image src={figure.image} style={{ position: 'absolute', top: 0, left: 0, width, height, opacity: 0.8 }} />}

@@ -19,29 +19,42 @@ function chunk(type: string, data: Uint8Array): Buffer {
   return Buffer.concat([length, typeAndData, crc]);
 }
 
-// A grey PNG of the given size (PNG specification, ISO/IEC 15948: signature, IHDR, IDAT, IEND).
-export function tinyPng(widthPx = 4, heightPx = 3): Uint8Array {
+const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+
+function greyHeader(widthPx: number, heightPx: number): Buffer {
   const header = Buffer.alloc(13);
   header.writeUInt32BE(widthPx, 0);
   header.writeUInt32BE(heightPx, 4);
   header[8] = 8; // bit depth
   header[9] = 0; // greyscale
-  const rows = Buffer.alloc((widthPx + 1) * heightPx, 0x80);
-  for (let row = 0; row < heightPx; row += 1) rows[row * (widthPx + 1)] = 0; // filter type none
-  return new Uint8Array(Buffer.concat([
-    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
-    chunk('IHDR', header),
-    chunk('IDAT', deflateSync(rows)),
-    chunk('IEND', new Uint8Array(0)),
-  ]));
+  return chunk('IHDR', header);
 }
 
-// A one-page PDF with a line of text (PDF 1.4 structure written by hand).
-export function tinyPdf(): Uint8Array {
+// A grey PNG of the given size (PNG specification, ISO/IEC 15948: signature, IHDR, IDAT, IEND).
+export function tinyPng(widthPx = 4, heightPx = 3): Uint8Array {
+  const rows = Buffer.alloc((widthPx + 1) * heightPx, 0x80);
+  for (let row = 0; row < heightPx; row += 1) rows[row * (widthPx + 1)] = 0; // filter type none
+  return new Uint8Array(Buffer.concat([PNG_SIGNATURE, greyHeader(widthPx, heightPx), chunk('IDAT', deflateSync(rows)), chunk('IEND', new Uint8Array(0))]));
+}
+
+/**
+ * A PNG that declares a grey image of the given size but carries the data of its first row only (PNG
+ * specification, ISO/IEC 15948: a valid signature, IHDR and IEND): a few hundred bytes whatever size it
+ * declares. `rows: 0` leaves out the image data altogether (a header-only file).
+ */
+export function declaredPng(widthPx: number, heightPx: number, rows: 0 | 1 = 1): Uint8Array {
+  const firstRow = Buffer.alloc(widthPx + 1, 0x80);
+  firstRow[0] = 0; // filter type none
+  const data = rows === 0 ? [] : [chunk('IDAT', deflateSync(firstRow))];
+  return new Uint8Array(Buffer.concat([PNG_SIGNATURE, greyHeader(widthPx, heightPx), ...data, chunk('IEND', new Uint8Array(0))]));
+}
+
+// A one-page PDF with a line of text, its page widthPt × heightPt points (PDF 1.4 structure written by hand).
+export function tinyPdf(widthPt = 300, heightPt = 200): Uint8Array {
   const objects = [
     '<< /Type /Catalog /Pages 2 0 R >>',
     '<< /Type /Pages /Kids [3 0 R] /Count 1 >>',
-    '<< /Type /Page /Parent 2 0 R /MediaBox [0 0 300 200] /Contents 4 0 R /Resources << /Font << /F1 5 0 R >> >> >>',
+    `<< /Type /Page /Parent 2 0 R /MediaBox [0 0 ${widthPt} ${heightPt}] /Contents 4 0 R /Resources << /Font << /F1 5 0 R >> >> >>`,
     '',
     '<< /Type /Font /Subtype /Type1 /BaseFont /Helvetica >>',
   ];

@@ -1,11 +1,15 @@
+import { createHash } from 'node:crypto';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST as uploadBackground } from '@/app/api/v1/plans/[planId]/background/route';
 import { GET as getUpload } from '@/app/api/v1/uploads/[uploadId]/route';
 import { sequelize } from '@/lib/db';
 import { createPlan } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
+import { getObject } from '@/lib/storage/object-store';
+import { MAX_STORED_SIDE_PX } from '@/lib/uploads/pixel-limits';
 import { Plan, Upload } from '@/models';
-import { tinyPdf, tinyPng } from '../helpers/files';
+import { declaredPng, tinyPdf, tinyPng } from '../helpers/files';
 import { createTestTeam, type TestTeam } from '../helpers/people';
 
 let team: TestTeam;
@@ -22,18 +26,22 @@ async function upload(fileName: string, bytes: Uint8Array, type: string) {
   body.append('file', new File([Buffer.from(bytes)], fileName, { type }));
   const request = new Request(`http://localhost/api/v1/plans/${planId}/background`, { method: 'POST', headers: { cookie: await team.cookieFor('acoustician'), host: 'localhost' }, body });
   const response = await uploadBackground(request, { params: Promise.resolve({ planId }) });
-  return { status: response.status, body: (await response.json()) as { upload?: { id: string; contentType: string; widthPx: number }; error?: { message: string; field?: string } } };
+  return { status: response.status, body: (await response.json()) as { upload?: { id: string; contentType: string; widthPx: number; heightPx: number }; error?: { code: string; message: string; field?: string } } };
 }
 
 describe('plan backgrounds', () => {
-  it('stores a PNG judged by its bytes and serves the same bytes back', async () => {
+  it('stores a PNG judged by its bytes, re-encoded with the same pixels, and serves the stored bytes back', async () => {
     const png = tinyPng(40, 30);
     const answer = await upload('drawing.dat', png, 'application/octet-stream');
     expect(answer.status).toBe(201);
-    expect(answer.body.upload).toMatchObject({ contentType: 'image/png', widthPx: 40 });
+    expect(answer.body.upload).toMatchObject({ contentType: 'image/png', widthPx: 40, heightPx: 30 });
     const served = await getUpload(new Request(`http://localhost/api/v1/uploads/${answer.body.upload!.id}`, { headers: { cookie: await team.cookieFor('viewer'), host: 'localhost' } }), { params: Promise.resolve({ uploadId: answer.body.upload!.id }) });
     expect(served.status).toBe(200);
-    expect(Buffer.from(await served.arrayBuffer()).equals(Buffer.from(png))).toBe(true);
+    const servedBytes = Buffer.from(await served.arrayBuffer());
+    const row = await Upload.findByPk(answer.body.upload!.id);
+    expect(createHash('sha256').update(servedBytes).digest('hex')).toBe(row?.sha256);
+    const pixels = async (bytes: Uint8Array) => sharp(bytes).raw().toBuffer();
+    expect((await pixels(servedBytes)).equals(await pixels(png))).toBe(true);
     expect((await Plan.findByPk(planId))?.backgroundUploadId).toBe(answer.body.upload!.id);
   });
 
@@ -52,6 +60,45 @@ describe('plan backgrounds', () => {
     expect(answer.body.error).toMatchObject({ field: 'file', message: expect.stringContaining('is not a PNG, JPEG, WebP or PDF') });
     expect((await Plan.findByPk(planId))?.backgroundUploadId).toBe(before?.backgroundUploadId);
     expect(await Upload.count({ where: { teamId: team.team.id } })).toBe(uploadsBefore);
+  });
+
+  it('refuses a 30000 × 30000 PNG by its declared size before decoding it, and changes nothing (ISO/IEC 15948 IHDR)', async () => {
+    const before = await Plan.findByPk(planId);
+    const uploadsBefore = await Upload.count({ where: { teamId: team.team.id } });
+    const bomb = declaredPng(30000, 30000);
+    expect(bomb.byteLength).toBeLessThan(1000);
+    const answer = await upload('bomb.png', bomb, 'image/png');
+    expect(answer.status).toBe(400);
+    expect(answer.body.error).toEqual({ code: 'bad_input', field: 'file', message: '“bomb.png” is 30000 × 30000 pixels (900 megapixels); drawings of up to 100 megapixels are accepted. Export the plan at a lower resolution.' });
+    expect((await Plan.findByPk(planId))?.backgroundUploadId).toBe(before?.backgroundUploadId);
+    expect(await Upload.count({ where: { teamId: team.team.id } })).toBe(uploadsBefore);
+  });
+
+  it('refuses a header-only PNG: over the cap by its declared size, or with no image data to decode', async () => {
+    const huge = await upload('header.png', declaredPng(30000, 30000, 0), 'image/png');
+    expect(huge.status).toBe(400);
+    expect(huge.body.error?.message).toContain('is 30000 × 30000 pixels (900 megapixels)');
+    const empty = await upload('empty.png', declaredPng(400, 300, 0), 'image/png');
+    expect(empty.status).toBe(400);
+    expect(empty.body.error).toEqual({ code: 'bad_input', field: 'file', message: 'The image in “empty.png” could not be read: its data is damaged or cut short. Export the plan again and upload that.' });
+    const cut = await upload('cut.png', declaredPng(400, 300), 'image/png');
+    expect(cut.status).toBe(400);
+    expect(cut.body.error?.message).toContain('could not be read');
+  });
+
+  it(`stores a drawing wider than ${MAX_STORED_SIDE_PX} px resampled to that, recording the stored pixel size`, async () => {
+    const answer = await upload('wide.png', tinyPng(9000, 1500), 'image/png');
+    expect(answer.status).toBe(201);
+    expect(answer.body.upload).toMatchObject({ contentType: 'image/png', widthPx: MAX_STORED_SIDE_PX, heightPx: 1000 });
+    const row = await Upload.findByPk(answer.body.upload!.id);
+    const stored = await sharp(await getObject(row!.storageKey)).metadata();
+    expect([stored.width, stored.height]).toEqual([MAX_STORED_SIDE_PX, 1000]);
+  });
+
+  it(`draws a PDF page of 14400 pt (200 in) at ${MAX_STORED_SIDE_PX} px, not at 110 dpi (22000 px)`, async () => {
+    const answer = await upload('site.pdf', tinyPdf(14400, 7200), 'application/pdf');
+    expect(answer.status).toBe(201);
+    expect(answer.body.upload).toMatchObject({ contentType: 'image/png', widthPx: MAX_STORED_SIDE_PX, heightPx: MAX_STORED_SIDE_PX / 2 });
   });
 
   it('refuses a file over 20 MB', async () => {

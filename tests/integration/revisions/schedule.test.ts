@@ -11,7 +11,10 @@ import { sequelize } from '@/lib/db';
 import { setPlanBackground } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
 import { storePlanBackground } from '@/lib/uploads/data';
-import { tinyPng } from '../helpers/files';
+import { declaredPng, tinyPng } from '../helpers/files';
+import { putObject } from '@/lib/storage/object-store';
+import { MAX_PRINTED_SIDE_PX } from '@/lib/uploads/pixel-limits';
+import { Upload } from '@/models';
 import { getRevisionByNumber } from '@/lib/revisions/data';
 import { PRINTED_LOWEST_ORDERS } from '@/lib/schedules/content';
 import { call } from '../helpers/routes';
@@ -77,6 +80,30 @@ describe('treatment schedule', () => {
     const png = readFileSync(path.join(dir, 'page-2.png'));
     expect(png.subarray(1, 4).toString('latin1')).toBe('PNG');
     expect(png.byteLength).toBeGreaterThan(2000);
+  });
+
+  it(`prints the 4000 × 3000 px drawing as a copy at most ${MAX_PRINTED_SIDE_PX} px on its longest side`, async () => {
+    const { bytes } = await previewSchedule(t.team.id, revisionId);
+    // PDF 1.7, ISO 32000-1, 8.9.5: an image XObject's /Width and /Height
+    expect(Buffer.from(bytes).toString('latin1')).toMatch(/\/Width 2400\s*\/Height 1800|\/Height 1800[\s\S]{0,200}\/Width 2400|\/Width 2400[\s\S]{0,200}\/Height 1800/);
+  });
+
+  it('leaves out, and says so, a drawing stored before drawings were bounded (a 30000 × 30000 PNG)', async () => {
+    const project = await createProject(t.team.id, t.members.acoustician.id, { name: 'Old Mill Gallery', site: '' });
+    const legacyPlanId = await planWithRuns(t, project.id, 1, 'Gallery supply');
+    const bomb = declaredPng(30000, 30000);
+    const storageKey = `teams/${t.team.id}/plans/legacy-${legacyPlanId}`;
+    await putObject(storageKey, bomb, 'image/png');
+    const legacy = await Upload.create({
+      teamId: t.team.id, uploadedById: t.members.acoustician.id, storageKey, fileName: 'gallery.png', contentType: 'image/png',
+      bytes: bomb.byteLength, sha256: createHash('sha256').update(bomb).digest('hex'), widthPx: 30000, heightPx: 30000,
+    });
+    await setPlanBackground(t.team.id, legacyPlanId, legacy.id);
+    const revision = await submitted(t, legacyPlanId);
+    const { bytes } = await previewSchedule(t.team.id, revision.id);
+    const { text } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
+    expect(text).toContain('Gallery supply');
+    expect(text).toContain('could not be read for printing');
   });
 
   it('draws a WebP drawing too (re-encoded as PNG for the PDF)', async () => {

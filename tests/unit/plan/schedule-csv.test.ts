@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { applySchedule, parseScheduleCsv, performCommand, scheduleToCsv, SCHEDULE_COLUMNS, type PlanDocument } from '@/lib/plan';
+import { MAX_RUN_SEGMENTS } from '@/lib/acoustic';
+import { applySchedule, MAX_SCHEDULE_CSV_CHARS, parseScheduleCsv, performCommand, scheduleToCsv, SCHEDULE_COLUMNS, type PlanDocument } from '@/lib/plan';
 import { drawChain } from './fixtures';
 
 const METRES_PER_PIXEL = 0.01;
@@ -80,6 +81,19 @@ describe('schedule CSV import', () => {
       'Row 2, diameter_mm: 5 must be between 10 mm and 10000 mm.',
       'Row 2, lining_absorption: 1.5 must be between 0 and 1.',
     ]);
+  });
+
+  it('refuses a length over one segment’s limit, more rows than a run holds, and an oversized file (limits: product rules, no source)', () => {
+    const long = parseScheduleCsv([HEADER, '1,,500,round,250,,,,,', '2,,600,round,250,,,,,', '3,,1,round,250,,,1001,0.5,'].join('\n'));
+    expect(long.ok ? [] : long.errors.map((error) => error.message)).toEqual([
+      'Row 3, length_m: 600 must be at most 500 m.',
+      'Row 4, lining_thickness_mm: 1001 must be between 0 and 1000 mm.',
+    ]);
+    const rows = Array.from({ length: MAX_RUN_SEGMENTS + 1 }, (_, index) => `${index + 1},,1,round,250,,,,,`);
+    const many = parseScheduleCsv([HEADER, ...rows].join('\n'));
+    expect(many.ok ? [] : many.errors.map((error) => error.message)).toEqual([`The file has ${MAX_RUN_SEGMENTS + 1} segment rows; a run holds at most ${MAX_RUN_SEGMENTS} segments.`]);
+    const huge = parseScheduleCsv(HEADER + '\n' + ' '.repeat(MAX_SCHEDULE_CSV_CHARS));
+    expect(huge.ok ? [] : huge.errors.map((error) => error.message)).toEqual([`The file is over ${MAX_SCHEDULE_CSV_CHARS} characters; a run's schedule (at most ${MAX_RUN_SEGMENTS} segments) is far smaller.`]);
   });
 
   it('a row count that differs from the path changes nothing and says why', () => {

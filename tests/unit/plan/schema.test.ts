@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { emptyDocument, parsePlanDocument, planDocumentSchema, MAX_ITEMS } from '@/lib/plan';
+import { emptyDocument, parsePlanDocument, planDocumentSchema, MAX_PLAN_NODES } from '@/lib/plan';
 import { drawChain } from './fixtures';
 
 describe('planDocumentSchema', () => {
@@ -48,10 +48,10 @@ describe('planDocumentSchema', () => {
     expect(result.errors).toContain('runs[0].id: must be at most 40 characters');
   });
 
-  it(`refuses more than ${MAX_ITEMS} nodes`, () => {
-    const nodes = Array.from({ length: MAX_ITEMS + 1 }, (_, index) => ({ id: `n${index}`, x: index, y: 0 }));
+  it(`refuses more than ${MAX_PLAN_NODES} nodes`, () => {
+    const nodes = Array.from({ length: MAX_PLAN_NODES + 1 }, (_, index) => ({ id: `n${index}`, x: index, y: 0 }));
     const result = parsePlanDocument({ ...emptyDocument(), nodes });
     expect(result.ok).toBe(false);
-    if (!result.ok) expect(result.errors).toContain(`nodes: at most ${MAX_ITEMS} nodes`);
+    if (!result.ok) expect(result.errors).toContain(`nodes: at most ${MAX_PLAN_NODES} points`);
   });
 });
