@@ -4,6 +4,7 @@
 // version is analysed afresh and only that plan's older rows are pruned.
 import { Op } from 'sequelize';
 import { compute } from '@/lib/compute/pool';
+import { consumeRateLimit } from '@/lib/http/rate-limit';
 import type { PlanView } from '@/lib/plans/data';
 import { PlanAnalysisRow } from '@/models';
 import type { RiskTarget } from '../risk-context';
@@ -36,11 +37,15 @@ async function prune(planId: string): Promise<void> {
   await PlanAnalysisRow.destroy({ where: { planId, id: { [Op.notIn]: keep.map((row) => row.id) } } });
 }
 
-/** The analysis of the plan as saved: stored, or computed now in the pool and stored. */
-export async function planAnalysisOf(plan: Pick<PlanView, 'id' | 'document' | 'metresPerPixel'>): Promise<PlanAnalysis> {
+/**
+ * The analysis of the plan as saved: stored, or computed now in the pool and stored. A computation
+ * counts against the asking person's analysis rate limit (reading a stored analysis does not).
+ */
+export async function planAnalysisOf(plan: Pick<PlanView, 'id' | 'document' | 'metresPerPixel'>, askedBy: string | null = null): Promise<PlanAnalysis> {
   const hash = contentHash(plan.document, plan.metresPerPixel);
   const row = await storedRow(plan.id, hash);
   if (row) return row.analysis as PlanAnalysis;
+  if (askedBy !== null) await consumeRateLimit('analysis', askedBy);
   const analysis = await once(`analysis:${plan.id}:${hash}`, async () => {
     const computed = await compute<PlanAnalysis>({ kind: 'plan-analysis', document: plan.document, metresPerPixel: plan.metresPerPixel }, { reduce: REDUCE_PLAN });
     await PlanAnalysisRow.findOrCreate({ where: { planId: plan.id, contentHash: hash, format: ANALYSIS_FORMAT }, defaults: { planId: plan.id, contentHash: hash, format: ANALYSIS_FORMAT, analysis: computed } });
