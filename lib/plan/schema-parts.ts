@@ -1,5 +1,6 @@
 // The document schema's building blocks (sections, linings, terminations, fan), shared by rooms and runs.
 import { z } from 'zod';
+import { text } from '@/lib/text';
 
 export const MAX_ID_LENGTH = 40;
 export const MAX_ITEMS = 5000;
@@ -7,8 +8,7 @@ export const MIN_SECTION_M = 0.01;
 export const MIN_TEMPERATURE_C = -40;
 export const MAX_TEMPERATURE_C = 60;
 
-export const idSchema = z
-  .string({ error: 'must be an id (text)' })
+export const idSchema = text({ error: 'must be an id (text)' })
   .min(1, 'must not be empty')
   .max(MAX_ID_LENGTH, `must be at most ${MAX_ID_LENGTH} characters`);
 

@@ -1,5 +1,6 @@
 // The one zod schema of the plan document, shared by the editor and the server.
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import type { PlanDocument } from './document';
 import { planTreatmentSchema, roomSchema } from './rooms/room-schema';
 import { fanSchema, finite, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, sectionSchema, temperatureCSchema, terminationSchema } from './schema-parts';
@@ -17,7 +18,7 @@ const segmentSchema = z.object({
   lengthOverrideM: lengthOverrideMSchema.nullable().optional(),
 });
 
-export const runNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the run a name').max(120, 'must be at most 120 characters');
+export const runNameSchema = text({ error: 'must be text' }).trim().min(1, 'give the run a name').max(120, 'must be at most 120 characters');
 
 const runSchema = z.object({
   id: idSchema,
@@ -29,7 +30,7 @@ const runSchema = z.object({
   terminations: z.record(idSchema, terminationSchema),
 });
 
-const placeholders = z.array(z.record(z.string(), z.unknown())).max(MAX_ITEMS);
+const placeholders = z.array(z.record(text(), z.unknown())).max(MAX_ITEMS);
 const MAX_ROOMS = 500;
 
 const documentShape = z.object({

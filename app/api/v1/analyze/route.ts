@@ -5,7 +5,7 @@ import { json, route } from '@/lib/http/route';
 
 // One duct run in (the engine's RunInput), its RunAnalysis out. The engine names any bad
 // field in a RangeError, which the route wrapper turns into a 400 with the same words.
-export const POST = route({ access: 'signed-in', maxBodyBytes: MAX_ANALYZE_BODY_BYTES }, async ({ readJson }) => {
+export const POST = route({ access: 'analysis.run', maxBodyBytes: MAX_ANALYZE_BODY_BYTES }, async ({ readJson }) => {
   const input = await readJson(z.unknown());
   assertRunSize(input);
   return json(analyzeRun(input as RunInput));
