@@ -6,6 +6,14 @@ const nextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,
+  experimental: {
+    // Server action calls: proxy.ts refuses a body over 256 KB (413) before Next reads it; this
+    // is Next's own limit behind it (lib/server-actions/check-request.ts, MAX_ACTION_BODY_BYTES).
+    serverActions: { bodySizeLimit: '256kb' },
+    // Next copies a body for the proxy up to this size and cuts the rest: well above 256 KB, so a
+    // body cut here is always one the proxy has already counted past its limit.
+    proxyClientMaxBodySize: '1mb',
+  },
 };
 
 export default nextConfig;

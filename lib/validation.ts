@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { assertCleanInput } from './clean-input';
 import { AppError } from './errors';
 
 // Turns a zod failure into a bad-input AppError naming the first offending field.
@@ -9,7 +10,10 @@ export function zodToAppError(error: z.ZodError): AppError {
   return new AppError('bad_input', message, { field });
 }
 
+// For input from outside (server action arguments, query strings): clean text and bounded
+// nesting first (lib/clean-input.ts), then the schema.
 export function parseWith<T extends z.ZodType>(schema: T, value: unknown): z.infer<T> {
+  assertCleanInput(value);
   const result = schema.safeParse(value);
   if (!result.success) throw zodToAppError(result.error);
   return result.data;

@@ -18,12 +18,15 @@ export async function switchTeamAction(teamId: unknown): Promise<ActionResult<nu
   });
 }
 
+const signOutOptionsSchema = z.object({ everywhere: z.boolean({ error: 'everywhere must be true or false' }).optional() }).optional();
+
 export async function signOutAction(options: { everywhere?: boolean } = {}): Promise<ActionResult<null>> {
   return runAction('signOut', async () => {
+    const everywhere = parseWith(signOutOptionsSchema, options)?.everywhere ?? false;
     const actor = await currentActor();
     const store = await cookies();
     if (actor) {
-      if (options.everywhere) await lucia.invalidateUserSessions(actor.user.id);
+      if (everywhere) await lucia.invalidateUserSessions(actor.user.id);
       const blank = await signOut(actor.sessionId);
       store.set(blank.name, blank.value, blank.attributes);
     }

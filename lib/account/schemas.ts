@@ -1,9 +1,10 @@
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import { emailSchema, signUpSchema } from '@/lib/auth/schemas';
 
-const currentPassword = z.string({ error: 'Enter your current password.' }).min(1, 'Enter your current password.').max(200, 'That password is too long.');
+const currentPassword = text({ error: 'Enter your current password.' }).min(1, 'Enter your current password.').max(200, 'That password is too long.');
 const newPassword = signUpSchema.shape.password;
-const token = z.string({ error: 'The reset link is incomplete.' }).trim().min(1, 'The reset link is incomplete.').max(200, 'The reset link is not valid.');
+const token = text({ error: 'The reset link is incomplete.' }).trim().min(1, 'The reset link is incomplete.').max(200, 'The reset link is not valid.');
 
 // Forgotten password: the request, and the new password from the mailed link.
 export const passwordResetRequestSchema = z.object({ email: emailSchema });

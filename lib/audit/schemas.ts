@@ -1,10 +1,17 @@
 import { z } from 'zod';
 import { AUDIT_AREAS, type AuditArea } from './actions';
 
+// A day of the calendar: 2026-13-45 has the right shape but is no day at all.
+function isCalendarDay(value: string): boolean {
+  const date = new Date(`${value}T00:00:00.000Z`);
+  return !Number.isNaN(date.getTime()) && date.toISOString().slice(0, 10) === value;
+}
+
 const day = z
   .string()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2026-12-01.')
+  .refine(isCalendarDay, 'That day does not exist: use a date like 2026-12-01.')
   .optional()
   .or(z.literal('').transform(() => undefined));
 

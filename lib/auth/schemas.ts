@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from '@/lib/text';
 
 // Shared by the sign-in and sign-up forms and their routes.
 export const emailSchema = z
@@ -11,14 +12,14 @@ export const emailSchema = z
 
 export const signInSchema = z.object({
   email: emailSchema,
-  password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200, 'That password is too long.'),
+  password: text({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200, 'That password is too long.'),
 });
 export type SignInInput = z.input<typeof signInSchema>;
 
 export const signUpSchema = z.object({
-  name: z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(120, 'Keep the name under 120 characters.'),
+  name: text({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(120, 'Keep the name under 120 characters.'),
   email: emailSchema,
-  password: z.string({ error: 'Choose a password.' }).min(10, 'Use at least 10 characters.').max(200, 'Keep the password under 200 characters.'),
-  teamName: z.string({ error: 'Name your team.' }).trim().min(1, 'Name your team, e.g. your practice.').max(120, 'Keep the team name under 120 characters.'),
+  password: text({ error: 'Choose a password.' }).min(10, 'Use at least 10 characters.').max(200, 'Keep the password under 200 characters.'),
+  teamName: text({ error: 'Name your team.' }).trim().min(1, 'Name your team, e.g. your practice.').max(120, 'Keep the team name under 120 characters.'),
 });
 export type SignUpInput = z.input<typeof signUpSchema>;

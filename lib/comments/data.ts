@@ -2,7 +2,7 @@
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
 import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
-import { assertId } from '@/lib/team/ids';
+import { assertId } from '@/lib/ids';
 import { Comment, Plan, Project, Revision } from '@/models';
 import type { z } from 'zod';
 import type { newCommentSchema } from './schemas';

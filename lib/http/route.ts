@@ -1,13 +1,15 @@
 // The one wrapper every route handler goes through: origin check, who is asking, the
-// permission map, body parsing with a size limit, and errors in one shape.
-import { verifyRequestOrigin } from 'lucia';
+// permission map, the URL's ids, body reading under a size limit, and errors in one shape.
 import { z } from 'zod';
 import { actorFromSessionId, sessionIdFromCookieHeader, type Actor, type TeamMembership } from '@/lib/auth/actor';
 import { assertMayAct } from '@/lib/auth/may-act';
 import { AppError, notSignedIn } from '@/lib/errors';
 import type { Action } from '@/lib/permissions';
 import { zodToAppError } from '@/lib/validation';
+import { readBodyText, readFormBody, readJsonBody, type BodyLimit } from './body';
 import { consumeRateLimit, type RateLimitName } from './rate-limit';
+import { assertRouteParams } from './route-params';
+import { assertSameOrigin } from './same-origin';
 
 export type Access = 'public' | 'signed-in' | Action;
 
@@ -17,17 +19,26 @@ export interface RouteContext<Params> {
   actor: Actor | null;
   // Present whenever access names an action: the active team and the role checked.
   team: TeamMembership | null;
+  // The body, read under the route's limit (maxBodyBytes): never read it from `request` directly.
   readJson: <T extends z.ZodType>(schema: T) => Promise<z.infer<T>>;
+  readText: () => Promise<string>;
+  readForm: (field: string) => Promise<FormData>;
 }
 
-export interface RouteOptions { access: Access; maxBodyBytes?: number; rateLimit?: RateLimitName }
+export interface RouteOptions {
+  access: Access;
+  maxBodyBytes?: number;
+  // The refusal of a body over maxBytes, when the default ("over N KB") would not say enough.
+  tooLarge?: BodyLimit['tooLarge'];
+  // Counts each call against the person's rate limit of that name (lib/http/rate-limit.ts).
+  rateLimit?: RateLimitName;
+}
 
 export type RouteHandler = ((request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>) & {
   access: Access;
 };
 
 const DEFAULT_MAX_BODY_BYTES = 256 * 1024;
-const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 export function json(data: unknown, status = 200, headers: HeadersInit = {}): Response {
   return Response.json(data, { status, headers });
@@ -47,33 +58,6 @@ export function errorResponse(error: unknown): Response {
 
 export function clientAddress(request: Request): string | null {
   return request.headers.get('x-forwarded-for')?.split(',')[0]?.trim() || request.headers.get('x-real-ip') || null;
-}
-
-function assertSameOrigin(request: Request): void {
-  if (SAFE_METHODS.has(request.method)) return;
-  const origin = request.headers.get('origin');
-  if (!origin) return; // scripts and API clients send no Origin; browsers always do on writes
-  const host = request.headers.get('x-forwarded-host') ?? request.headers.get('host');
-  if (!host || !verifyRequestOrigin(origin, [host])) {
-    throw new AppError('forbidden', 'This request came from another site and was refused.');
-  }
-}
-
-async function readBody<T extends z.ZodType>(request: Request, schema: T, maxBytes: number): Promise<z.infer<T>> {
-  const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > maxBytes) throw new AppError('too_large', `The request body is over ${Math.round(maxBytes / 1024)} KB.`);
-  const text = await request.text();
-  if (Buffer.byteLength(text) > maxBytes) throw new AppError('too_large', `The request body is over ${Math.round(maxBytes / 1024)} KB.`);
-  if (!text.trim()) throw new AppError('bad_input', 'The request needs a JSON body.');
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    throw new AppError('bad_input', 'The request body is not valid JSON.');
-  }
-  const result = schema.safeParse(value);
-  if (!result.success) throw zodToAppError(result.error);
-  return result.data;
 }
 
 export function route<Params extends Record<string, string> = Record<string, never>>(
@@ -96,8 +80,14 @@ export function route<Params extends Record<string, string> = Record<string, nev
       }
       if (options.rateLimit && actor) await consumeRateLimit(options.rateLimit, actor.user.id);
       const params = ((await context?.params) ?? {}) as Params;
-      const maxBytes = options.maxBodyBytes ?? DEFAULT_MAX_BODY_BYTES;
-      const response = await handler({ request, params, actor, team, readJson: (schema) => readBody(request, schema, maxBytes) });
+      assertRouteParams(params);
+      const limit: BodyLimit = { maxBytes: options.maxBodyBytes ?? DEFAULT_MAX_BODY_BYTES, tooLarge: options.tooLarge };
+      const response = await handler({
+        request, params, actor, team,
+        readJson: (schema) => readJsonBody(request, schema, limit),
+        readText: () => readBodyText(request, limit),
+        readForm: (field) => readFormBody(request, limit, field),
+      });
       if (actor?.refreshedCookie && !response.headers.has('set-cookie')) {
         response.headers.append('set-cookie', actor.refreshedCookie.serialize());
       }

@@ -4,7 +4,7 @@
 import { runAction, type ActionResult } from '@/lib/actions';
 import { currentActor } from '@/lib/auth/current';
 import { notSignedIn } from '@/lib/errors';
-import { zodToAppError } from '@/lib/validation';
+import { parseWith } from '@/lib/validation';
 import { notificationSettingSchema } from './schemas';
 import { setNotificationSetting, type NotificationSettings } from './settings';
 
@@ -12,8 +12,6 @@ export async function changeNotificationSetting(input: unknown): Promise<ActionR
   return runAction('changeNotificationSetting', async () => {
     const actor = await currentActor();
     if (!actor) throw notSignedIn();
-    const parsed = notificationSettingSchema.safeParse(input);
-    if (!parsed.success) throw zodToAppError(parsed.error);
-    return setNotificationSetting(actor.user.id, parsed.data);
+    return setNotificationSetting(actor.user.id, parseWith(notificationSettingSchema, input));
   });
 }

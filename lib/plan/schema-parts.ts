@@ -1,6 +1,7 @@
 // The document schema's building blocks (sections, linings, terminations, fan, limits), shared by rooms and runs.
 // Physical limits come from the engine's (lib/acoustic/input-limits.ts), so a document that saves is one it analyses.
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import {
   MAX_AIR_TEMPERATURE_C, MAX_FAN_BLADES, MAX_FAN_RPM, MAX_LINING_THICKNESS_M, MAX_ROOM_HEIGHT_M, MAX_SECTION_DIMENSION_M,
   MAX_SEGMENT_LENGTH_M, MIN_AIR_TEMPERATURE_C,
@@ -40,8 +41,7 @@ export const MAX_PLAN_COORDINATE_PX = 100000;
 export const MIN_METRES_PER_PIXEL = 0.0001;
 export const MAX_METRES_PER_PIXEL = 1;
 
-export const idSchema = z
-  .string({ error: 'must be an id (text)' })
+export const idSchema = text({ error: 'must be an id (text)' })
   .min(1, 'must not be empty')
   .max(MAX_ID_LENGTH, `must be at most ${MAX_ID_LENGTH} characters`);
 

@@ -1,5 +1,6 @@
 // The one zod schema of the plan document, shared by the editor and the server.
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import type { PlanDocument } from './document';
 import { planTreatmentSchema, roomSchema, soundPowerBandsSchema } from './rooms/room-schema';
 import { pathInsertSchema } from './noise/insert-schema';
@@ -23,7 +24,7 @@ const segmentSchema = z.object({
   inserts: z.array(pathInsertSchema).max(8, 'at most 8 inserts on one segment').optional(),
 });
 
-export const runNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the run a name').max(120, 'must be at most 120 characters');
+export const runNameSchema = text({ error: 'must be text' }).trim().min(1, 'give the run a name').max(120, 'must be at most 120 characters');
 
 const runSchema = z.object({
   id: idSchema,
@@ -37,7 +38,7 @@ const runSchema = z.object({
   terminations: z.record(idSchema, terminationSchema),
 });
 
-const placeholders = z.array(z.record(z.string(), z.unknown())).max(MAX_ITEMS);
+const placeholders = z.array(z.record(text(), z.unknown())).max(MAX_ITEMS);
 
 const documentShape = z.object({
   schemaVersion: z.literal(1, { error: 'must be 1' }),

@@ -3,6 +3,7 @@ import { AppError, notFound } from '@/lib/errors';
 import { emptyDocument, type PlanDocument } from '@/lib/plan/document';
 import { planDocumentSchema, readSavedDocument } from '@/lib/plan/schema';
 import { sequelize } from '@/lib/db';
+import { assertId } from '@/lib/ids';
 import { Plan, Project, Upload } from '@/models';
 import { toUploadSummary, type UploadSummary } from '@/lib/uploads/data';
 import type { SavePlanInput } from './schemas';
@@ -22,12 +23,14 @@ export interface PlanView {
 }
 
 async function projectInTeam(teamId: string, projectId: string): Promise<Project> {
+  assertId(projectId, 'That project');
   const project = await Project.findOne({ where: { id: projectId, teamId } });
   if (!project) throw notFound('That project');
   return project;
 }
 
 async function planRowInTeam(teamId: string, planId: string): Promise<Plan & { project?: Project; background?: Upload | null }> {
+  assertId(planId, 'That plan');
   const row = await Plan.findOne({
     where: { id: planId },
     include: [

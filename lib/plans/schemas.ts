@@ -1,8 +1,9 @@
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import { metresPerPixelSchema, planDocumentSchema } from '@/lib/plan/schema';
 
 // Shared by the plan forms and their routes.
-export const planNameSchema = z.string({ error: 'Give the plan a name.' }).trim().min(1, 'Give the plan a name.').max(160, 'Keep the name under 160 characters.');
+export const planNameSchema = text({ error: 'Give the plan a name.' }).trim().min(1, 'Give the plan a name.').max(160, 'Keep the name under 160 characters.');
 
 export const newPlanSchema = z.object({ name: planNameSchema });
 export type NewPlanInput = z.input<typeof newPlanSchema>;
@@ -21,9 +22,9 @@ export type SavePlanInput = z.infer<typeof savePlanSchema>;
 // The flag whose treatments to evaluate: a room's (roomId) or a run's that feeds no room (runId).
 export const evaluateTreatmentsSchema = z
   .object({
-    roomId: z.string({ error: 'roomId must be text' }).min(1).max(40).nullable().optional(),
-    runId: z.string({ error: 'runId must be text' }).min(1).max(40).nullable().optional(),
-    flagId: z.string({ error: 'flagId must be the id of a flag in the risk list' }).min(1, 'flagId must not be empty').max(400),
+    roomId: text({ error: 'roomId must be text' }).min(1).max(40).nullable().optional(),
+    runId: text({ error: 'runId must be text' }).min(1).max(40).nullable().optional(),
+    flagId: text({ error: 'flagId must be the id of a flag in the risk list' }).min(1, 'flagId must not be empty').max(400),
   })
   .refine((value) => Boolean(value.roomId) || Boolean(value.runId), { message: 'Send the roomId or the runId of the flag.', path: ['roomId'] });
 export type EvaluateTreatmentsInput = z.infer<typeof evaluateTreatmentsSchema>;

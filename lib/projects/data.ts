@@ -1,6 +1,7 @@
 // Projects of a team. Every query is scoped by team id: one team never sees another's.
 import { Project } from '@/models';
 import { notFound } from '@/lib/errors';
+import { isId } from '@/lib/ids';
 import type { ProjectInput, ProjectUpdate } from './schemas';
 
 export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; updatedAt: string }
@@ -18,6 +19,7 @@ export async function listProjects(teamId: string, options: { includeArchived?: 
 }
 
 export async function getProject(teamId: string, projectId: string): Promise<ProjectSummary | null> {
+  if (!isId(projectId)) return null;
   const row = await Project.findOne({ where: { teamId, id: projectId } });
   return row ? toSummary(row) : null;
 }
@@ -28,6 +30,7 @@ export async function createProject(teamId: string, userId: string, input: Requi
 }
 
 export async function updateProject(teamId: string, projectId: string, changes: ProjectUpdate): Promise<ProjectSummary> {
+  if (!isId(projectId)) throw notFound('That project');
   const row = await Project.findOne({ where: { teamId, id: projectId } });
   if (!row) throw notFound('That project');
   await row.update(changes);

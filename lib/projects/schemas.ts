@@ -1,16 +1,17 @@
 import { z } from 'zod';
+import { text } from '@/lib/text';
 
 // Shared by the project form and its route.
 export const projectInputSchema = z.object({
-  name: z.string({ error: 'Give the project a name.' }).trim().min(1, 'Give the project a name.').max(160, 'Keep the name under 160 characters.'),
-  site: z.string({ error: 'The site must be text.' }).trim().max(240, 'Keep the site under 240 characters.').default(''),
+  name: text({ error: 'Give the project a name.' }).trim().min(1, 'Give the project a name.').max(160, 'Keep the name under 160 characters.'),
+  site: text({ error: 'The site must be text.' }).trim().max(240, 'Keep the site under 240 characters.').default(''),
 });
 export type ProjectInput = z.input<typeof projectInputSchema>;
 
 export const projectUpdateSchema = z
   .object({
     name: projectInputSchema.shape.name.optional(),
-    site: z.string({ error: 'The site must be text.' }).trim().max(240, 'Keep the site under 240 characters.').optional(),
+    site: text({ error: 'The site must be text.' }).trim().max(240, 'Keep the site under 240 characters.').optional(),
     archived: z.boolean({ error: 'archived must be true or false' }).optional(),
   })
   .refine((value) => Object.values(value).some((field) => field !== undefined), 'Send at least one of name, site, archived.');

@@ -8,7 +8,7 @@ import { reviewRows } from '@/lib/revisions/rows';
 import { REVISION_STATE_LABELS } from '@/lib/revisions/states';
 import type { RevisionExtras, RevisionSummary } from '@/lib/revisions/types';
 import type { RunResult } from '@/lib/plans/results';
-import { assertId } from '@/lib/team/ids';
+import { assertId } from '@/lib/ids';
 import { ReviewDecision, Revision } from '@/models';
 import { DECISION_LABELS, type Decision } from './decisions';
 import { tallyReview, type ReviewTally } from './outcome';

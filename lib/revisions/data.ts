@@ -6,7 +6,7 @@ import { getPlan } from '@/lib/plans/data';
 import { contentHash } from '@/lib/plans/analysis/content-hash';
 import { planAnalysisOf } from '@/lib/plans/analysis/store';
 import type { RunResult } from '@/lib/plans/results';
-import { assertId } from '@/lib/team/ids';
+import { assertId } from '@/lib/ids';
 import { Plan, Project, Revision, Upload } from '@/models';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
 import { freezeExtras } from './freeze-extras';
@@ -85,7 +85,7 @@ export async function getRevisionById(teamId: string, revisionId: string): Promi
 
 export async function getRevisionByNumber(teamId: string, planId: string, number: number): Promise<RevisionView> {
   assertId(planId, 'That plan');
-  if (!Number.isInteger(number) || number < 1) throw notFound('That revision');
+  if (!Number.isSafeInteger(number) || number < 1 || number > 2_147_483_647) throw notFound('That revision');
   const row = await Revision.findOne({ where: { teamId, planId, number } });
   if (!row) throw notFound('That revision');
   return toView(row);

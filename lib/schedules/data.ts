@@ -9,7 +9,7 @@ import type { RevisionView } from '@/lib/revisions/types';
 import { listDecisions } from '@/lib/reviews/data';
 import { getObject, putObject } from '@/lib/storage/object-store';
 import { printImage } from '@/lib/uploads/print-image';
-import { assertId } from '@/lib/team/ids';
+import { assertId } from '@/lib/ids';
 import { Schedule, Upload } from '@/models';
 import { scheduleContent, type ScheduleFigure } from './content';
 import { renderSchedulePdf } from './render';

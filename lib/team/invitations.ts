@@ -10,7 +10,7 @@ import { sendMail } from '@/lib/mail/send';
 import { ROLE_LABELS, type Role } from '@/lib/permissions';
 import { appUrl, newLinkToken } from '@/lib/tokens';
 import { Invitation, Membership, Team, User } from '@/models';
-import { assertId } from './ids';
+import { assertId } from '@/lib/ids';
 import { seatsFullError, seatUsage } from './seats';
 
 export const INVITATION_DAYS = 7;

@@ -6,7 +6,7 @@ import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
 import { ROLE_LABELS, type Role } from '@/lib/permissions';
 import { Membership, User } from '@/models';
-import { assertId } from './ids';
+import { assertId } from '@/lib/ids';
 
 export interface MemberSummary { id: string; userId: string; name: string; email: string; role: Role; joinedAt: string }
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import { emailSchema, signUpSchema } from '@/lib/auth/schemas';
 import { ROLES, type Role } from '@/lib/permissions';
 
@@ -14,16 +15,16 @@ export type InvitationInput = z.input<typeof invitationInputSchema>;
 // Shared by the role menu and PATCH /api/v1/team/members/[memberId].
 export const roleChangeSchema = z.object({ role: roleSchema });
 
-const tokenSchema = z.string({ error: 'The invitation link is incomplete.' }).trim().min(1, 'The invitation link is incomplete.').max(200, 'The invitation link is not valid.');
+const tokenSchema = text({ error: 'The invitation link is incomplete.' }).trim().min(1, 'The invitation link is incomplete.').max(200, 'The invitation link is not valid.');
 
 // Accepting: a new person names themselves and chooses a password; someone with an account
 // proves it is theirs with their password (or is already signed in as the invited address).
 export const acceptAsNewSchema = z.object({ token: tokenSchema, name: signUpSchema.shape.name, password: signUpSchema.shape.password });
-export const acceptAsExistingSchema = z.object({ token: tokenSchema, password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200, 'That password is too long.') });
+export const acceptAsExistingSchema = z.object({ token: tokenSchema, password: text({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200, 'That password is too long.') });
 export const acceptInvitationSchema = z.object({
   token: tokenSchema,
-  name: z.string().trim().max(120, 'Keep the name under 120 characters.').optional(),
-  password: z.string().max(200, 'That password is too long.').optional(),
+  name: text().trim().max(120, 'Keep the name under 120 characters.').optional(),
+  password: text().max(200, 'That password is too long.').optional(),
 });
 export type AcceptAsNewInput = z.input<typeof acceptAsNewSchema>;
 export type AcceptAsExistingInput = z.input<typeof acceptAsExistingSchema>;

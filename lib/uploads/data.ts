@@ -1,6 +1,7 @@
 // Plan background uploads: checked by content, stored through the S3 client, recorded per team.
 import { createHash, randomUUID } from 'node:crypto';
 import { AppError } from '@/lib/errors';
+import { isId } from '@/lib/ids';
 import { getObject, putObject } from '@/lib/storage/object-store';
 import { Upload } from '@/models';
 import { boundedPlanImage, type BoundedImage } from './bounded-image';
@@ -50,6 +51,7 @@ export async function storePlanBackground(teamId: string, userId: string, fileNa
 }
 
 export async function readUpload(teamId: string, uploadId: string): Promise<{ summary: UploadSummary; bytes: Uint8Array } | null> {
+  if (!isId(uploadId)) return null;
   const row = await Upload.findOne({ where: { id: uploadId, teamId } });
   if (!row) return null;
   return { summary: toUploadSummary(row), bytes: await getObject(row.storageKey) };

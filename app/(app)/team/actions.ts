@@ -1,7 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
-import { z } from 'zod';
+import { text } from '@/lib/text';
 import { runAction, type ActionResult } from '@/lib/actions';
 import { auditActorOf } from '@/lib/audit/record';
 import { authorize } from '@/lib/auth/current';
@@ -12,7 +12,7 @@ import { changeMemberRole, removeMember } from '@/lib/team/members';
 import { invitationInputSchema, roleChangeSchema } from '@/lib/team/schemas';
 import { parseWith } from '@/lib/validation';
 
-const idSchema = z.string().min(1).max(64);
+const idSchema = text().min(1).max(64);
 
 export async function inviteAction(input: unknown): Promise<ActionResult<{ email: string }>> {
   return runAction('invite', async () => {

@@ -1,5 +1,6 @@
 // zod schema of a silencer or other loss put into a segment by hand (part of the plan document schema).
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import { finite } from '../schema-parts';
 
 const OCTAVE_BANDS = 8;
@@ -9,7 +10,7 @@ export const MAX_INSERT_LOSS_DB = 80;
 const lossBands = z
   .array(finite('a loss').min(0, 'must be at least 0 dB (a loss, not a gain)').max(MAX_INSERT_LOSS_DB, `must be at most ${MAX_INSERT_LOSS_DB} dB`))
   .length(OCTAVE_BANDS, `needs ${OCTAVE_BANDS} octave bands, 63 Hz to 8 kHz`);
-const label = z.string({ error: 'must be text' }).trim().min(1, 'give it a name').max(80, 'must be at most 80 characters');
+const label = text({ error: 'must be text' }).trim().min(1, 'give it a name').max(80, 'must be at most 80 characters');
 
 export const pathInsertSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('silencer'), label, insertionLossDb: lossBands }),

@@ -1,5 +1,6 @@
 // zod schemas of rooms and chosen treatments, part of the one plan document schema.
 import { z } from 'zod';
+import { text } from '@/lib/text';
 import { MAX_ANALYSIS_HZ, MAX_SECTION_DIMENSION_M, NC_CURVES, SURFACE_NAMES, type SurfaceName } from '@/lib/acoustic';
 import {
   finite, idSchema as id, lengthChangeMSchema, lengthOverrideMSchema, liningSchema, liningThicknessMSchema, MAX_ROOM_SIDE_M, planCoordinateSchema, positiveAtMost,
@@ -15,7 +16,7 @@ const MAX_TEXT = 400;
 
 
 export const roomSideMSchema = finite('a room dimension').gt(0, 'must be more than 0 m').max(MAX_ROOM_SIDE_M, `must be at most ${MAX_ROOM_SIDE_M} m`);
-export const roomNameSchema = z.string({ error: 'must be text' }).trim().min(1, 'give the room a name').max(120, 'must be at most 120 characters');
+export const roomNameSchema = text({ error: 'must be text' }).trim().min(1, 'give the room a name').max(120, 'must be at most 120 characters');
 export const criterionNcSchema = finite('NC').min(MIN_NC, `must be at least NC ${MIN_NC}, the lowest published curve`).max(MAX_NC, `must be at most NC ${MAX_NC}`);
 
 const coordinateM = finite('a position').min(0, 'must be inside the room (at least 0 m)').max(MAX_ROOM_SIDE_M, `must be at most ${MAX_ROOM_SIDE_M} m`);
@@ -85,12 +86,12 @@ export const planTreatmentSchema = z.object({
   id,
   runId: id,
   roomId: id.nullable(),
-  flagId: z.string().min(1).max(MAX_TEXT),
+  flagId: text().min(1).max(MAX_TEXT),
   flagKind: z.enum(['resonance-near-tone', 'resonance-near-room-mode', 'level-above-criterion']),
-  flagSubject: z.string().min(1).max(MAX_TEXT),
-  flagReason: z.string().max(2000),
+  flagSubject: text().min(1).max(MAX_TEXT),
+  flagReason: text().max(2000),
   treatment: treatmentSchema,
-  description: z.string().max(2000),
+  description: text().max(2000),
   before: quantitySchema,
   after: quantitySchema,
   clears: z.boolean(),

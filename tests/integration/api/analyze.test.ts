@@ -18,7 +18,7 @@ const closedClosed = {
 
 describe('POST /api/v1/analyze', () => {
   it('returns the run analysis; closed–closed resonances sit at n c / 2L', async () => {
-    const answer = await call(POST, 'POST', '/api/v1/analyze', { cookie: await team.cookieFor('viewer'), body: closedClosed });
+    const answer = await call(POST, 'POST', '/api/v1/analyze', { cookie: await team.cookieFor('engineer'), body: closedClosed });
     expect(answer.status).toBe(200);
     const analysis = answer.body as { speedOfSoundMps: number; resonances: { frequencyHz: number }[] };
     // Kinsler, Frey et al., Fundamentals of Acoustics, ch. 10: f_n = n c / 2L for a pipe closed at both ends.
@@ -50,5 +50,13 @@ describe('POST /api/v1/analyze', () => {
 
   it('needs a session', async () => {
     expect((await call(POST, 'POST', '/api/v1/analyze', { body: closedClosed })).status).toBe(401);
+  });
+
+  it('needs analysis.run: viewers and architects are refused, as the permission map says', async () => {
+    for (const role of ['viewer', 'architect'] as const) {
+      const answer = await call(POST, 'POST', '/api/v1/analyze', { cookie: await team.cookieFor(role), body: closedClosed });
+      expect(answer.status, role).toBe(403);
+      expect(answer.body).toMatchObject({ error: { code: 'forbidden' } });
+    }
   });
 });

@@ -16,7 +16,7 @@ import { call, listRouteFiles, loadHandlers, type Method } from '../helpers/rout
 
 // What each route handler must require. A new handler fails the walk until it is listed here.
 const EXPECTED_ACCESS: Record<string, string> = {
-  'POST /api/v1/analyze': 'signed-in',
+  'POST /api/v1/analyze': 'analysis.run',
   'GET /api/v1/health': 'public',
   'GET /api/v1/me': 'signed-in',
   'PUT /api/v1/me/preferences': 'signed-in',

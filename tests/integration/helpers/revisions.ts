@@ -3,6 +3,7 @@
 import { benchDocument } from '../../../bench/schedule/plan';
 import { createComment } from '@/lib/comments/data';
 import { createPlan, savePlanDocument } from '@/lib/plans/data';
+import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
 import { submitRevision } from '@/lib/revisions/data';
 import type { RevisionSummary } from '@/lib/revisions/types';
 import { issueSchedule } from '@/lib/schedules/data';
@@ -14,6 +15,15 @@ export async function planWithRuns(testTeam: TestTeam, projectId: string, runs =
   const acoustician = testTeam.members.acoustician;
   const plan = await createPlan(testTeam.team.id, acoustician.id, projectId, name);
   await savePlanDocument(testTeam.team.id, acoustician.id, plan.id, { version: plan.version, metresPerPixel: TEST_METRES_PER_PIXEL, document: benchDocument(runs, 3) });
+  return plan.id;
+}
+
+// The demo's recital-room plan (one run, one room), saved: the plan's id.
+export async function recitalPlan(testTeam: TestTeam, projectId: string, name: string): Promise<string> {
+  const acoustician = testTeam.members.acoustician;
+  const plan = await createPlan(testTeam.team.id, acoustician.id, projectId, name);
+  const document = demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
+  await savePlanDocument(testTeam.team.id, acoustician.id, plan.id, { version: plan.version, metresPerPixel: DEMO_METRES_PER_PIXEL, document });
   return plan.id;
 }
 

@@ -39,12 +39,14 @@ export async function call(
   handler: RouteHandler,
   method: Method,
   urlPath: string,
-  options: { cookie?: string; body?: unknown; params?: Record<string, string>; headers?: Record<string, string> } = {},
+  // body is sent as JSON; rawBody (for bodies that may not be JSON at all) exactly as given.
+  options: { cookie?: string; body?: unknown; rawBody?: string; params?: Record<string, string>; headers?: Record<string, string> } = {},
 ): Promise<{ status: number; body: unknown; headers: Headers }> {
   const headers: Record<string, string> = { host: 'localhost', ...options.headers };
   if (options.cookie) headers.cookie = options.cookie;
-  let body: string | undefined;
-  if (options.body !== undefined) { body = JSON.stringify(options.body); headers['content-type'] = 'application/json'; }
+  let body: string | undefined = options.rawBody;
+  if (options.body !== undefined) body = JSON.stringify(options.body);
+  if (body !== undefined) headers['content-type'] = 'application/json';
   const request = new Request(`http://localhost${urlPath}`, { method, headers, body });
   const response = await handler(request, { params: Promise.resolve(options.params ?? {}) });
   const text = await response.text();

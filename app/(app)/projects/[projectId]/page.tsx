@@ -1,25 +1,20 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { EmptyState } from '@/components/feedback/empty-state';
 import { NewPlanForm } from '@/components/plans/new-plan-form';
 import { PlanList } from '@/components/plans/plan-list';
 import { ProjectActions } from '@/components/projects/project-actions';
-import { requireActor } from '@/lib/auth/current';
+import { projectOfPage } from '@/app/(app)/records-of-page';
 import { can } from '@/lib/permissions';
 import { listPlans } from '@/lib/plans/data';
-import { getProject } from '@/lib/projects/data';
 
 export const metadata: Metadata = { title: 'Project' };
 
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { projectId } = await params;
-  const actor = await requireActor();
-  if (!actor.team || !/^[0-9a-f-]{36}$/i.test(projectId)) notFound();
-  const project = await getProject(actor.team.teamId, projectId);
-  if (!project) notFound();
-  const plans = await listPlans(actor.team.teamId, projectId, { includeArchived: true });
-  const mayEdit = can(actor.team.role, 'plan.edit');
+  const { team, project } = await projectOfPage(projectId);
+  const plans = await listPlans(team.teamId, projectId, { includeArchived: true });
+  const mayEdit = can(team.role, 'plan.edit');
   const active = plans.filter((plan) => !plan.archived);
   const archived = plans.filter((plan) => plan.archived);
   return (
@@ -32,7 +27,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
           <h1 className="text-xl font-semibold">{project.name}{project.archived && <span className="ml-2 rounded bg-paper-sunk px-2 py-0.5 align-middle text-xs font-normal">Archived</span>}</h1>
           {project.site && <p className="text-sm text-graphite-500">{project.site}</p>}
         </div>
-        {can(actor.team.role, 'project.update') && <ProjectActions project={project} />}
+        {can(team.role, 'project.update') && <ProjectActions project={project} />}
       </div>
       {mayEdit && <NewPlanForm projectId={project.id} />}
       {active.length === 0 ? (

@@ -4,7 +4,8 @@ import { receiveWebhook } from '@/lib/billing/webhooks';
 export const dynamic = 'force-dynamic';
 
 // Called by the payment service; trusted only through its signature (lib/billing/webhooks.ts).
-export const POST = route({ access: 'public' }, async ({ request }) => {
-  const result = await receiveWebhook(await request.text(), request.headers.get('stripe-signature'));
+// Its events are a few KB: the body is read under the default limit like any other.
+export const POST = route({ access: 'public' }, async ({ request, readText }) => {
+  const result = await receiveWebhook(await readText(), request.headers.get('stripe-signature'));
   return json({ received: true, outcome: result.outcome });
 });

@@ -1,17 +1,15 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { ChangesTable } from '@/components/revisions/changes-table';
 import { FinishReview } from '@/components/revisions/finish-review';
 import { TreatmentTable } from '@/components/revisions/treatment-table';
 import { RoomPaths } from '@/components/revisions/room-paths';
 import { RevisionStateBadge } from '@/components/revisions/revision-state-badge';
 import { RevisionWorkspace } from '@/components/revisions/revision-workspace';
-import { requireActor } from '@/lib/auth/current';
-import { AppError } from '@/lib/errors';
+import { revisionOfPage } from '@/app/(app)/records-of-page';
 import { can } from '@/lib/permissions';
 import { compareRevisions } from '@/lib/revisions/changes';
-import { getRevisionByNumber, previousRevision } from '@/lib/revisions/data';
+import { previousRevision } from '@/lib/revisions/data';
 import { revisionsPath, schedulePath } from '@/lib/revisions/links';
 import { listDecisions, reviewTally } from '@/lib/reviews/data';
 import { listMembers } from '@/lib/team/members';
@@ -21,14 +19,8 @@ export const metadata: Metadata = { title: 'Revision' };
 export default async function RevisionPage({ params, searchParams }: { params: Promise<{ planId: string; number: string }>; searchParams: Promise<{ comment?: string }> }) {
   const { planId, number } = await params;
   const { comment } = await searchParams;
-  const actor = await requireActor();
-  if (!actor.team || !/^[0-9a-f-]{36}$/i.test(planId) || !/^\d{1,6}$/.test(number)) notFound();
-  const teamId = actor.team.teamId;
-  const revision = await getRevisionByNumber(teamId, planId, Number(number)).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === 'not_found') return null;
-    throw error;
-  });
-  if (!revision) notFound();
+  const { actor, team, revision } = await revisionOfPage(planId, number);
+  const teamId = team.teamId;
   const [previous, decisions, tally, members] = await Promise.all([
     previousRevision(teamId, planId, revision.number), listDecisions(teamId, revision.id), reviewTally(teamId, revision.id), listMembers(teamId),
   ]);
@@ -36,7 +28,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
     previous && { number: previous.number, analysis: previous.analysis, segmentCount: previous.document.segments.length },
     { analysis: revision.analysis, segmentCount: revision.document.segments.length },
   );
-  const role = actor.team.role;
+  const role = team.role;
   const canReview = can(role, 'review.write') && revision.state === 'waiting';
   const background = revision.background?.widthPx && revision.background.heightPx
     ? { url: `/api/v1/uploads/${revision.background.id}`, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx } : null;

@@ -1,15 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { EmptyState } from '@/components/feedback/empty-state';
 import { ActivityList } from '@/components/revisions/activity-list';
 import { PlanRevisionActions } from '@/components/revisions/plan-revision-actions';
 import { RevisionList } from '@/components/revisions/revision-list';
 import { listPlanActivity } from '@/lib/activity/data';
-import { requireActor } from '@/lib/auth/current';
-import { AppError } from '@/lib/errors';
+import { planOfPage } from '@/app/(app)/records-of-page';
 import { can } from '@/lib/permissions';
-import { getPlan } from '@/lib/plans/data';
 import { contentHash } from '@/lib/plans/analysis/content-hash';
 import { latestRevision, listRevisions } from '@/lib/revisions/data';
 
@@ -17,14 +14,8 @@ export const metadata: Metadata = { title: 'Revisions' };
 
 export default async function RevisionsPage({ params }: { params: Promise<{ planId: string }> }) {
   const { planId } = await params;
-  const actor = await requireActor();
-  if (!actor.team || !/^[0-9a-f-]{36}$/i.test(planId)) notFound();
-  const teamId = actor.team.teamId;
-  const plan = await getPlan(teamId, planId).catch((error: unknown) => {
-    if (error instanceof AppError && error.code === 'not_found') return null;
-    throw error;
-  });
-  if (!plan) notFound();
+  const { team, plan } = await planOfPage(planId);
+  const teamId = team.teamId;
   const [revisions, activity] = await Promise.all([listRevisions(teamId, planId), listPlanActivity(teamId, planId)]);
   return (
     <div className="space-y-6">
@@ -38,11 +29,11 @@ export default async function RevisionsPage({ params }: { params: Promise<{ plan
           <h1 className="text-xl font-semibold">Revisions of {plan.name}</h1>
           <p className="text-sm text-graphite-500">Each revision freezes the plan and its analysis as submitted. Edits after it make a new draft.</p>
         </div>
-        <PlanRevisionActions planId={plan.id} latest={revisions.length > 0 ? await latestRevision(actor.team.teamId, plan.id) : null} planVersion={plan.version} contentHash={contentHash(plan.document, plan.metresPerPixel)} canSubmit={can(actor.team.role, 'plan.edit')} canIssue={can(actor.team.role, 'schedule.issue')} showListLink={false} />
+        <PlanRevisionActions planId={plan.id} latest={revisions.length > 0 ? await latestRevision(team.teamId, plan.id) : null} planVersion={plan.version} contentHash={contentHash(plan.document, plan.metresPerPixel)} canSubmit={can(team.role, 'plan.edit')} canIssue={can(team.role, 'schedule.issue')} showListLink={false} />
       </div>
       {revisions.length === 0 ? (
         <EmptyState title="No revision yet">
-          {can(actor.team.role, 'plan.edit') ? 'Draw the duct runs, then “Submit for review” freezes the plan as revision 1 and asks the engineers to review it.' : 'When the acoustician submits this plan for review, its revisions appear here.'}
+          {can(team.role, 'plan.edit') ? 'Draw the duct runs, then “Submit for review” freezes the plan as revision 1 and asks the engineers to review it.' : 'When the acoustician submits this plan for review, its revisions appear here.'}
         </EmptyState>
       ) : (
         <RevisionList planId={plan.id} revisions={revisions} />
