@@ -56,7 +56,7 @@ test('the outlet of a room goes where the duct end feeding it goes, and back wit
   await expect(roomPanel.getByLabel('Length', { exact: true })).toHaveValue('6.00 m');
 
   // Fed from the run's end: the outlet goes to it.
-  await roomPanel.getByLabel('Fed from').selectOption({ label: 'Run 1, end 1' });
+  await roomPanel.getByLabel('Fed from').selectOption({ label: 'A1 end (Run 1)' });
   await waitForSaved(page);
   await expect(roomPanel.getByTestId('outlet-link')).toHaveAttribute('data-link', 'at-end');
   await expect(roomPanel.getByLabel('Outlet x')).toHaveValue('2.00 m');
