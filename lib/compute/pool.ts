@@ -71,6 +71,11 @@ export async function compute<T>(task: ComputeTask, options: ComputeOptions): Pr
   return outcome.value as T;
 }
 
+/** Resolves once no job waits for a thread (background work waits for this, so asked-for work goes first). */
+export async function whenIdle(pollMs = 50): Promise<void> {
+  while ((holder.antinodeComputePool?.queueSize ?? 0) > 0) await new Promise((resolve) => setTimeout(resolve, pollMs));
+}
+
 /** Jobs running and waiting now (for the health route). */
 export function computeLoad(): { threads: number; queued: number } {
   const current = holder.antinodeComputePool;

@@ -11,7 +11,8 @@ export function signPayload(payload: string, secret: string, timestamp = now()):
   return `t=${timestamp},v1=${signature}`;
 }
 
-const RETRIES = 3;
+// The real service retries for days; the fake keeps trying for about 18 s so a busy test server is not dropped.
+const RETRIES = 8;
 
 export class WebhookSender {
   private readonly held = new Map<string, FakeEvent[]>(); // by customer e-mail
@@ -49,8 +50,10 @@ export class WebhookSender {
           if (!response.ok) console.warn(`[payments fake] ${event.type} ${event.id}: the app answered ${response.status}`);
           return;
         }
-      } catch {
-        // the app is not up yet: try again below
+        console.warn(`[payments fake] ${event.type} ${event.id}: the app answered ${response.status}; trying again`);
+      } catch (error) {
+        // the app is not up yet, or too busy to answer: try again below
+        console.warn(`[payments fake] ${event.type} ${event.id}: ${error instanceof Error ? error.message : String(error)}; trying again`);
       }
       await new Promise((resolve) => setTimeout(resolve, 500 * attempt));
     }

@@ -3,7 +3,7 @@
 // flag evaluated in the background and kept beside it. Saving the plan changes its hash, so a new
 // version is analysed afresh and only that plan's older rows are pruned.
 import { Op } from 'sequelize';
-import { compute } from '@/lib/compute/pool';
+import { compute, whenIdle } from '@/lib/compute/pool';
 import { consumeRateLimit } from '@/lib/http/rate-limit';
 import type { PlanView } from '@/lib/plans/data';
 import { PlanAnalysisRow } from '@/models';
@@ -84,6 +84,7 @@ function precomputeCandidates(plan: Pick<PlanView, 'id' | 'document' | 'metresPe
     for (const flag of flags) {
       const target: RiskTarget = flag.roomId ? { roomId: flag.roomId } : { runId: flag.runId };
       try {
+        await whenIdle();
         await candidatesOf(plan, analysis, target, flag.id);
       } catch (error) {
         console.warn(`[analysis] candidates of flag ${flag.id} on plan ${plan.id} were not evaluated ahead:`, error instanceof Error ? error.message : error);
