@@ -12,7 +12,42 @@ import type { ComputeTask, TaskOutcome } from './tasks';
 /** Where scripts/build-worker.ts writes the bundled worker. */
 export const WORKER_FILE = process.env.ANTINODE_COMPUTE_WORKER ?? path.join(process.cwd(), '.compute', 'worker.mjs');
 
-const holder = globalThis as typeof globalThis & { antinodeComputePool?: Piscina };
+const holder = globalThis as typeof globalThis & { antinodeComputePool?: Piscina; antinodeComputeSlots?: Slots };
+
+/** Jobs hold a slot while they run, so a job's time limit counts its own running time, never its wait. */
+interface Slots { running: number; waiting: (() => void)[] }
+
+function slots(): Slots {
+  holder.antinodeComputeSlots ??= { running: 0, waiting: [] };
+  return holder.antinodeComputeSlots;
+}
+
+/** Longest a job waits for a free thread before the answer is "busy", ms. */
+const MAX_WAIT_MS = 20_000;
+
+function busy(): AppError {
+  return new AppError('busy', 'The server is busy with other analyses; try again in a few seconds.', { retryAfterS: 5 });
+}
+
+async function acquireSlot(): Promise<void> {
+  const state = slots();
+  if (state.running < COMPUTE_THREADS) {
+    state.running += 1;
+    return;
+  }
+  if (state.waiting.length >= COMPUTE_QUEUE) throw busy();
+  await new Promise<void>((resolve, reject) => {
+    const take = () => { clearTimeout(timer); state.running += 1; resolve(); };
+    const timer = setTimeout(() => { state.waiting.splice(state.waiting.indexOf(take), 1); reject(busy()); }, MAX_WAIT_MS);
+    state.waiting.push(take);
+  });
+}
+
+function releaseSlot(): void {
+  const state = slots();
+  state.running -= 1;
+  state.waiting.shift()?.();
+}
 
 function pool(): Piscina {
   holder.antinodeComputePool ??= new Piscina({
@@ -48,6 +83,7 @@ function isOutOfMemory(error: unknown): boolean {
 /** Runs the task in the pool; its result, or the task's own error (RangeError, PlanError, AppError). */
 export async function compute<T>(task: ComputeTask, options: ComputeOptions): Promise<T> {
   const timeLimitMs = options.timeLimitMs ?? COMPUTE_TIME_LIMIT_MS[task.kind];
+  await acquireSlot();
   const controller = new AbortController();
   const timer = setTimeout(() => controller.abort(), timeLimitMs);
   let outcome: TaskOutcome;
@@ -60,26 +96,25 @@ export async function compute<T>(task: ComputeTask, options: ComputeOptions): Pr
     if (isOutOfMemory(error)) {
       throw new AppError('too_much_work', `This needs more than the ${COMPUTE_HEAP_MB} MB one analysis may use, so it was stopped. Reduce ${options.reduce} and try again.`);
     }
-    if (/queue is at limit/i.test(String((error as Error)?.message))) {
-      throw new AppError('busy', 'The server is busy with other analyses; try again in a few seconds.', { retryAfterS: 5 });
-    }
+    if (/queue is at limit/i.test(String((error as Error)?.message))) throw busy();
     throw error;
   } finally {
     clearTimeout(timer);
+    releaseSlot();
   }
   if (!outcome.ok) throw rebuilt(outcome);
   return outcome.value as T;
 }
 
-/** Resolves once no job waits for a thread (background work waits for this, so asked-for work goes first). */
+/** Resolves once a thread is free and no job waits (background work waits for this, so asked-for work goes first). */
 export async function whenIdle(pollMs = 50): Promise<void> {
-  while ((holder.antinodeComputePool?.queueSize ?? 0) > 0) await new Promise((resolve) => setTimeout(resolve, pollMs));
+  while (slots().waiting.length > 0 || slots().running >= COMPUTE_THREADS) await new Promise((resolve) => setTimeout(resolve, pollMs));
 }
 
 /** Jobs running and waiting now (for the health route). */
 export function computeLoad(): { threads: number; queued: number } {
   const current = holder.antinodeComputePool;
-  return current ? { threads: current.threads.length, queued: current.queueSize } : { threads: 0, queued: 0 };
+  return { threads: current?.threads.length ?? 0, queued: slots().waiting.length };
 }
 
 /** Stops the pool's threads (tests and shutdown). */

@@ -4,6 +4,7 @@
 // common practice, no source).
 import { afterAll, describe, expect, it } from 'vitest';
 import { GET as health } from '@/app/api/v1/health/route';
+import { COMPUTE_THREADS } from '@/lib/compute/limits';
 import { compute, closeComputePool } from '@/lib/compute/pool';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
@@ -34,6 +35,16 @@ describe('compute budget', () => {
     expect(error).toBeInstanceOf(AppError);
     expect((error as AppError).status).toBe(422);
     expect((error as AppError).message).toMatch(/stopped\. Reduce the run's length/);
+  });
+
+  it('counts a job’s time limit from when it starts running, not while it waits for a thread', async () => {
+    // every thread busy with a job that will be stopped after 1.5 s
+    const blockers = Array.from({ length: COMPUTE_THREADS }, () => compute({ kind: 'analyze-run', input: heavyRun }, { reduce: 'x', timeLimitMs: 1500 }).catch((error: unknown) => error));
+    // a small run with a 1 s limit waits about 1.5 s for a thread, then runs in milliseconds
+    const small = { segments: [{ lengthM: 2, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxHz: 300 };
+    const analysis = await compute<{ resonances: unknown[] }>({ kind: 'analyze-run', input: small }, { reduce: 'x', timeLimitMs: 1000 });
+    expect(analysis.resonances.length).toBeGreaterThan(0);
+    for (const stopped of await Promise.all(blockers)) expect((stopped as AppError).status).toBe(422);
   });
 
   it('gives back the engine’s own RangeError, naming the field, from the worker thread', async () => {
