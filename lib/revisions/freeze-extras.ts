@@ -55,10 +55,9 @@ export function freezeExtras(document: PlanDocument, analysis: PlanAnalysis): Re
 /** The noise path's table as plain rows for the review and the schedule. */
 function pathRows(path: RoomNoisePath): NonNullable<RoomRow['path']> {
   const { result } = path;
-  const fanDb = result.steps.length > 0 ? result.steps[0].powerDb.map((power, band) => power + result.steps[0].lossDb[band]) : result.listenerDb;
   return {
     rows: [
-      { label: 'Fan sound power', valuesDb: fanDb, total: true },
+      { label: 'Fan sound power', valuesDb: path.fanSoundPowerDb, total: true },
       ...result.steps.map((step, index) => ({ label: `${path.sources[index]?.label ?? step.kind} (loss)`, valuesDb: step.lossDb.map((loss) => -loss) })),
       { label: 'Room correction (Schultz)', valuesDb: result.roomCorrectionDb },
       { label: 'Level at the listener', valuesDb: result.listenerDb, total: true },

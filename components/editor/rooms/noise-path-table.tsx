@@ -11,7 +11,7 @@ const cell = (value: number) => (Math.abs(value) < 0.05 ? 0 : value).toFixed(1);
 // The noise path from the fan to the room's listener, one row per element read off the plan: its
 // loss in each octave band and the sound power left after it; then the room correction, the level at
 // the listener, the criterion and the margin, with the governing band marked in words and a shape.
-export function NoisePathTable({ path, onHighlight }: { path: RoomNoisePath; onHighlight?: (place: { segmentId: string | null; nodeId: string | null } | null) => void }) {
+export function NoisePathTable({ path }: { path: RoomNoisePath }) {
   const { result } = path;
   const governing = OCTAVE_BANDS_HZ.indexOf(path.governingHz as (typeof OCTAVE_BANDS_HZ)[number]);
   const head = (
@@ -20,9 +20,8 @@ export function NoisePathTable({ path, onHighlight }: { path: RoomNoisePath; onH
       {BAND_LABELS.map((label, band) => <th key={label} scope="col" className={`num py-1 pr-1 text-right font-medium ${band === governing ? 'text-risk-ink' : ''}`}>{label}{band === governing ? ' ▲' : ''}</th>)}
     </tr>
   );
-  const row = (key: string, label: string, values: number[], options: { strong?: boolean; testId?: string; place?: { segmentId: string | null; nodeId: string | null } } = {}) => (
-    <tr key={key} className={`border-b border-graphite-100 ${options.strong ? 'font-medium' : ''}`} data-testid={options.testId}
-      onMouseEnter={options.place ? () => onHighlight?.(options.place!) : undefined} onMouseLeave={options.place ? () => onHighlight?.(null) : undefined}>
+  const row = (key: string, label: string, values: number[], options: { strong?: boolean; testId?: string } = {}) => (
+    <tr key={key} className={`border-b border-graphite-100 ${options.strong ? 'font-medium' : ''}`} data-testid={options.testId}>
       <th scope="row" className="py-1 pr-2 text-left font-normal">{label}</th>
       {values.map((value, band) => <td key={band} className={`num py-1 pr-1 text-right ${band === governing ? 'bg-risk-soft' : ''}`}>{cell(value)}</td>)}
     </tr>
@@ -33,9 +32,9 @@ export function NoisePathTable({ path, onHighlight }: { path: RoomNoisePath; onH
         <table className="w-full text-xs" aria-label="Noise path, fan to listener">
           <thead>{head}</thead>
           <tbody>
-            {row('fan', 'Fan sound power (dB re 1 pW)', path.result.steps.length > 0 ? path.result.steps[0].powerDb.map((power, band) => power + path.result.steps[0].lossDb[band]) : result.listenerDb, { strong: true })}
+            {row('fan', 'Fan sound power (dB re 1 pW)', path.fanSoundPowerDb, { strong: true })}
             {result.steps.map((step, index) => row(`loss-${index}`, `${ELEMENT_WORDS[step.kind] ?? step.kind}: ${path.sources[index]?.label ?? ''} — loss`, step.lossDb.map((loss) => -loss),
-              { testId: 'path-step', place: path.sources[index] ? { segmentId: path.sources[index].segmentId, nodeId: path.sources[index].nodeId } : undefined }))}
+              { testId: 'path-step' }))}
             {row('left', 'Sound power into the room (dB re 1 pW)', result.steps.at(-1)?.powerDb ?? [], { strong: true })}
             {row('room', 'Room correction, Schultz (Lp − Lw)', result.roomCorrectionDb)}
             {row('listener', 'Level at the listener (dB re 20 µPa)', result.listenerDb, { strong: true, testId: 'path-listener' })}

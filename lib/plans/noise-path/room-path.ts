@@ -13,6 +13,8 @@ const MEDIUM_EXCESS_DB = 2;
 export interface RoomNoisePath {
   runId: string;
   result: NoisePathResult;
+  /** The fan's sound power the path starts from, per band, dB re 1 pW. */
+  fanSoundPowerDb: number[];
   /** The elements as read off the drawing, one per step. */
   elements: PathElement[];
   sources: PathElementSource[];
@@ -28,7 +30,7 @@ export function roomNoisePath(doc: PlanDocument, metresPerPixel: number, room: P
   const criterionDb = ncCriterionCurveDb(room.criterionNc);
   const marginDb = result.listenerDb.map((levelDb, band) => criterionDb[band] - levelDb);
   const governing = marginDb.reduce((best, margin, band) => (margin < marginDb[best] ? band : best), 0);
-  return { runId: derived.runId, result, elements: derived.input.elements, sources: derived.sources, criterionDb, marginDb, governingHz: OCTAVE_BANDS_HZ[governing] };
+  return { runId: derived.runId, result, fanSoundPowerDb: derived.input.soundPowerDb, elements: derived.input.elements, sources: derived.sources, criterionDb, marginDb, governingHz: OCTAVE_BANDS_HZ[governing] };
 }
 
 /** "Level above criterion at the listener in band B by X dB", one flag per band above the curve. */
