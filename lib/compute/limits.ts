@@ -5,6 +5,8 @@ import os from 'node:os';
 export const COMPUTE_THREADS = Math.max(2, Number(process.env.ANTINODE_COMPUTE_THREADS ?? os.availableParallelism() - 1));
 /** Jobs waiting for a thread beyond this are refused as busy (503) rather than queued without end. */
 export const COMPUTE_QUEUE = Number(process.env.ANTINODE_COMPUTE_QUEUE ?? 32);
+/** Nice value of the worker threads (0 normal, 19 lowest): engine work gives way to answering requests. */
+export const COMPUTE_NICE = Number(process.env.ANTINODE_COMPUTE_NICE ?? 10);
 /** Heap of one worker thread, MB: a job that needs more is stopped (its thread is replaced). */
 export const COMPUTE_HEAP_MB = Number(process.env.ANTINODE_COMPUTE_HEAP_MB ?? 256);
 

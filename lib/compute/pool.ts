@@ -8,6 +8,8 @@ import { AppError } from '@/lib/errors';
 import { PlanError } from '@/lib/plan/errors';
 import { COMPUTE_HEAP_MB, COMPUTE_QUEUE, COMPUTE_THREADS, COMPUTE_TIME_LIMIT_MS } from './limits';
 import type { ComputeTask, TaskOutcome } from './tasks';
+import { threadCpuMs } from './thread-clock';
+import type { ComputeMessage } from './worker';
 
 /** Where scripts/build-worker.ts writes the bundled worker. */
 export const WORKER_FILE = process.env.ANTINODE_COMPUTE_WORKER ?? path.join(process.cwd(), '.compute', 'worker.mjs');
@@ -80,17 +82,46 @@ function isOutOfMemory(error: unknown): boolean {
   return code === 'ERR_WORKER_OUT_OF_MEMORY' || /out of memory|heap limit/i.test(String((error as Error)?.message ?? ''));
 }
 
+/** How often the pool reads a running job's processor time, ms. */
+const CLOCK_POLL_MS = 100;
+/** A job still running after this many times its time limit on the wall clock is stopped as "busy": the machine, not the job, is the problem. */
+const WALL_LIMIT_FACTOR = 10;
+
+type Stop = 'time' | 'wall';
+
+/**
+ * Stops the job when its own thread has used more processor time than the limit (read from /proc,
+ * so waiting behind other work does not count), or after the limit on the wall clock where the
+ * thread's time cannot be read; in any case after WALL_LIMIT_FACTOR times the limit.
+ */
+function watchJob(clockCell: Int32Array, timeLimitMs: number, stop: (why: Stop) => void): () => void {
+  const startedMs = performance.now();
+  const timer = setInterval(() => {
+    const wallMs = performance.now() - startedMs;
+    if (wallMs > timeLimitMs * WALL_LIMIT_FACTOR) return stop('wall');
+    const threadId = Atomics.load(clockCell, 0);
+    const cpuMs = threadId > 0 ? threadCpuMs(threadId) : null;
+    const usedMs = cpuMs === null ? wallMs : cpuMs - Atomics.load(clockCell, 1);
+    if (usedMs > timeLimitMs) stop('time');
+  }, CLOCK_POLL_MS);
+  return () => clearInterval(timer);
+}
+
 /** Runs the task in the pool; its result, or the task's own error (RangeError, PlanError, AppError). */
 export async function compute<T>(task: ComputeTask, options: ComputeOptions): Promise<T> {
   const timeLimitMs = options.timeLimitMs ?? COMPUTE_TIME_LIMIT_MS[task.kind];
   await acquireSlot();
   const controller = new AbortController();
-  const timer = setTimeout(() => controller.abort(), timeLimitMs);
+  let stopped: Stop | null = null;
+  const clockCell = new Int32Array(new SharedArrayBuffer(8));
+  const unwatch = watchJob(clockCell, timeLimitMs, (why) => { stopped = why; controller.abort(); });
   let outcome: TaskOutcome;
   try {
-    outcome = (await pool().run(task, { signal: controller.signal })) as TaskOutcome;
+    const message: ComputeMessage = { task, clockCell };
+    outcome = (await pool().run(message, { signal: controller.signal })) as TaskOutcome;
   } catch (error) {
-    if (controller.signal.aborted) {
+    if (stopped === 'wall') throw busy();
+    if (stopped === 'time') {
       throw new AppError('too_much_work', `This needs more than the ${Math.round(timeLimitMs / 1000)} s one analysis may take, so it was stopped. Reduce ${options.reduce} and try again.`);
     }
     if (isOutOfMemory(error)) {
@@ -99,7 +130,7 @@ export async function compute<T>(task: ComputeTask, options: ComputeOptions): Pr
     if (/queue is at limit/i.test(String((error as Error)?.message))) throw busy();
     throw error;
   } finally {
-    clearTimeout(timer);
+    unwatch();
     releaseSlot();
   }
   if (!outcome.ok) throw rebuilt(outcome);

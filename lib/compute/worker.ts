@@ -1,6 +1,30 @@
 // The entry of each worker thread in the compute pool (bundled by scripts/build-worker.ts).
+import os from 'node:os';
+import { COMPUTE_NICE } from './limits';
 import { runComputeTask, type ComputeTask, type TaskOutcome } from './tasks';
+import { currentThreadId, threadCpuMs } from './thread-clock';
 
-export default function work(task: ComputeTask): TaskOutcome {
+// On Linux each thread has its own nice value: the compute threads yield the processor to the
+// server's own thread (requests, health checks) and to the database whenever both want it.
+try {
+  os.setPriority(0, COMPUTE_NICE);
+} catch {
+  // Not permitted on this system: the threads run at the server's priority.
+}
+
+const THREAD_ID = currentThreadId();
+
+/** A job as the pool sends it: the task, and a shared cell where the thread says who runs it. */
+export interface ComputeMessage {
+  task: ComputeTask;
+  /** [thread id, the thread's processor time in ms when the job started]; the pool reads it to time the job. */
+  clockCell?: Int32Array;
+}
+
+export default function work({ task, clockCell }: ComputeMessage): TaskOutcome {
+  if (clockCell && THREAD_ID !== null) {
+    Atomics.store(clockCell, 1, Math.round(threadCpuMs(THREAD_ID) ?? 0));
+    Atomics.store(clockCell, 0, THREAD_ID);
+  }
   return runComputeTask(task);
 }
