@@ -5,14 +5,27 @@ import { Sequelize } from 'sequelize';
 // `npm start` and `npm test` write it for the cluster they start.
 const globalForDb = globalThis as unknown as { antinodeSequelize?: Sequelize };
 
-function createSequelize(): Sequelize {
-  const url = process.env.DATABASE_URL ?? 'postgres://antinode@127.0.0.1:54329/antinode';
+/** Errors that mean the connection, not the query, failed. */
+const CONNECTION_LOST = [
+  /Connection terminated/i,
+  /terminating connection due to administrator command/i,
+  /the database system is (starting up|shutting down|in recovery mode)/i,
+  /ECONNREFUSED/,
+  /ECONNRESET/,
+];
+
+/** A Sequelize instance with the app's settings (the app uses one per process: `sequelize` below). */
+export function createSequelize(url = process.env.DATABASE_URL ?? 'postgres://antinode@127.0.0.1:54329/antinode'): Sequelize {
   return new Sequelize(url, {
     dialect: 'postgres',
     dialectModule: pg,
     logging: process.env.ANTINODE_SQL_LOG === '1' ? console.log : false,
     define: { underscored: true },
     pool: { max: 10, idle: 10_000 },
+    // When PostgreSQL restarts under the app, the pooled connections die with it: a query that
+    // meets a dead or refused connection is tried again on a fresh one (a few times, backing off),
+    // so the app recovers without a restart and the person sees at most a short wait.
+    retry: { max: 6, backoffBase: 200, backoffExponent: 1.5, match: CONNECTION_LOST },
   });
 }
 

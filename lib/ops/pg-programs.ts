@@ -3,7 +3,7 @@ import { existsSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 
 /** The newest /usr/lib/postgresql/<version>/bin holding the program, or ANTINODE_PG_BIN when set. */
-export function pgProgram(name: 'pg_dump' | 'pg_restore' | 'psql'): string {
+export function pgProgram(name: 'pg_dump' | 'pg_restore' | 'psql' | 'initdb' | 'pg_ctl'): string {
   const configured = process.env.ANTINODE_PG_BIN;
   if (configured) return path.join(configured, name);
   const root = '/usr/lib/postgresql';
