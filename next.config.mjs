@@ -2,7 +2,7 @@
 const nextConfig = {
   // `npm test` builds into its own folder so it never disturbs a running `npm start`.
   distDir: process.env.ANTINODE_DIST_DIR || '.next',
-  serverExternalPackages: ['sequelize', 'pg', '@node-rs/argon2', 'sharp', 'piscina', 'rate-limiter-flexible'],
+  serverExternalPackages: ['sequelize', 'pg', '@node-rs/argon2', 'sharp', 'piscina', 'rate-limiter-flexible', 'pg-boss'],
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,

@@ -20,9 +20,10 @@ BENCH_PORT="${ANTINODE_BENCH_PORT:-3200}"
 step "Building the app for the editor benchmark"
 build_app bench-build.log
 # The bench measures the server, not the per-person rate limit: one person sends every request here.
+start_jobs_worker bench
 ANTINODE_ANALYSIS_RATE_PER_MINUTE=1000000 node node_modules/next/dist/bin/next start -p "$BENCH_PORT" -H 127.0.0.1 >"$DATA_DIR/bench-server.log" 2>&1 &
 SERVER_PID=$!
-trap 'kill $SERVER_PID 2>/dev/null' EXIT
+trap 'kill $SERVER_PID 2>/dev/null; stop_pid_file "$DATA_DIR/jobs-bench.pid" "the job worker (bench)"' EXIT
 wait_for_health "http://127.0.0.1:$BENCH_PORT/api/v1/health" "$SERVER_PID"
 ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/editor/run.ts || fail "the editor benchmark failed"
 

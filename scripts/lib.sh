@@ -211,6 +211,23 @@ build_compute_worker() {
   node node_modules/tsx/dist/cli.mjs scripts/build-worker.ts >/dev/null || fail "the compute worker did not build" "read the error above"
 }
 
+# The job worker (lib/jobs/worker-main.ts, bundled by build_compute_worker) beside the web server,
+# with the environment of the caller (DATABASE_URL, the fakes' settings); its output in .data/jobs-<name>.log.
+start_jobs_worker() {
+  local name="$1" pid_file="$DATA_DIR/jobs-$1.pid" log="$DATA_DIR/jobs-$1.log"
+  stop_pid_file "$pid_file" "the previous job worker ($name)"
+  step "Starting the job worker ($name; log in .data/jobs-$name.log)"
+  # Background work takes one compute thread: asked-for analyses in the web server keep the rest.
+  ANTINODE_COMPUTE_THREADS="${ANTINODE_JOBS_COMPUTE_THREADS:-1}" nohup node .compute/jobs-worker.mjs >"$log" 2>&1 &
+  echo $! > "$pid_file"
+  for _ in $(seq 1 150); do
+    grep -q 'job worker ready' "$log" 2>/dev/null && return 0
+    kill -0 "$(cat "$pid_file")" 2>/dev/null || { tail -n 30 "$log" >&2; fail "the job worker did not start (log in .data/jobs-$name.log)" "read the error above"; }
+    sleep 0.2
+  done
+  fail "the job worker did not report ready within 30 s (log in .data/jobs-$name.log)"
+}
+
 # next build into $ANTINODE_DIST_DIR (default .next), its output kept in .data/<log name>.
 build_app() {
   local log="$DATA_DIR/$1"

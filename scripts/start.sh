@@ -23,11 +23,12 @@ build_app build.log
 
 stop_pid_file "$DATA_DIR/server.pid" "the previous web server"
 export ANTINODE_BASE_URL="${ANTINODE_BASE_URL:-http://localhost:$APP_PORT}"
+start_jobs_worker app
 step "Serving Antinode"
 node node_modules/next/dist/bin/next start -p "$APP_PORT" -H "${HOST:-127.0.0.1}" &
 SERVER_PID=$!
 echo "$SERVER_PID" > "$DATA_DIR/server.pid"
-trap 'kill $SERVER_PID 2>/dev/null; rm -f "$DATA_DIR/server.pid"; printf "\nThe web server stopped. PostgreSQL keeps running: npm run stop stops it.\n"; exit 0' INT TERM
+trap 'kill $SERVER_PID 2>/dev/null; rm -f "$DATA_DIR/server.pid"; stop_pid_file "$DATA_DIR/jobs-app.pid" "the job worker"; printf "\nThe web server stopped. PostgreSQL keeps running: npm run stop stops it.\n"; exit 0' INT TERM
 
 wait_for_health "http://127.0.0.1:$APP_PORT/api/v1/health" "$SERVER_PID"
 
@@ -45,7 +46,8 @@ cat <<MSG
   Mail sent by the app lands in the local inbox: $MAIL_INBOX_URL
   Payments go to the local payment fake: $PAYMENTS_FAKE_URL (webhooks to $PAYMENTS_WEBHOOK_URL)
 
-  Ctrl-C stops the web server; npm run stop stops everything npm start started.
+  Background jobs (schedules, analyses ahead) run in the job worker: log in .data/jobs-app.log.
+  Ctrl-C stops the web server and the job worker; npm run stop stops everything npm start started.
 
 MSG
 wait "$SERVER_PID"

@@ -28,8 +28,11 @@ node node_modules/vitest/vitest.mjs run --project integration || fail "integrati
 step "Building the app for the browser tests"
 build_app test-build.log
 
+start_jobs_worker test
+trap 'stop_pid_file "$DATA_DIR/jobs-test.pid" "the job worker (test)"' EXIT
+
 step "Browser tests (Chromium)"
-node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/"
+node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/ (job worker log: .data/jobs-test.log)"
 
 stop_pid_file "$DATA_DIR/fakes-test.pid" "the local fakes (test)"
 step "All tests passed"

@@ -1,13 +1,14 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
+import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { apiFetch } from '@/components/api-fetch';
 import { FormAlert } from '@/components/forms/form-alert';
+import { schedulesKey } from './schedule-list';
 
-// Issues the schedule of a revision: renders it, stores it with its checksum.
+// Issues the schedule of a revision: asks for it; the list below shows it rendering, then issued.
 export function IssueSchedule({ revisionId, approved }: { revisionId: string; approved: boolean }) {
-  const router = useRouter();
+  const queryClient = useQueryClient();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const issue = async () => {
@@ -16,13 +17,13 @@ export function IssueSchedule({ revisionId, approved }: { revisionId: string; ap
     const answer = await apiFetch(`/api/v1/revisions/${revisionId}/schedules`, { method: 'POST', body: {} });
     setBusy(false);
     if (!answer.ok) setError(answer.error.message);
-    else router.refresh();
+    else await queryClient.invalidateQueries({ queryKey: schedulesKey(revisionId) });
   };
   return (
     <div className="space-y-2">
       {!approved && <p className="text-sm text-risk-ink">This revision is not approved: the schedule is issued as a draft, watermarked as such.</p>}
       <FormAlert message={error} />
-      <button type="button" className="btn-primary" disabled={busy} onClick={issue}>{busy ? 'Rendering the PDF…' : 'Issue schedule'}</button>
+      <button type="button" className="btn-primary" disabled={busy} onClick={issue}>{busy ? 'Asking…' : 'Issue schedule'}</button>
     </div>
   );
 }

@@ -3,7 +3,8 @@ import type { Transaction } from 'sequelize';
 import { PlanActivity } from '@/models';
 import type { ActivityKind } from './kinds';
 
-export interface ActivityActor { id: string; name: string }
+/** Who did it; id null for a person whose account is gone by the time a queued job records it. */
+export interface ActivityActor { id: string | null; name: string }
 
 export async function recordActivity(
   entry: { teamId: string; planId: string; actor: ActivityActor; kind: ActivityKind; summary: string; link?: string | null },

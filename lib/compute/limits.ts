@@ -1,8 +1,8 @@
 // The compute budget: how many worker threads, how long and how much memory one job may take.
 import os from 'node:os';
 
-/** Worker threads: one per core but one, and at least two, so one long job never holds every other person's analysis. */
-export const COMPUTE_THREADS = Math.max(2, Number(process.env.ANTINODE_COMPUTE_THREADS ?? os.availableParallelism() - 1));
+/** Worker threads: one per core but one, and at least two, so one long job never holds every other person's analysis (ANTINODE_COMPUTE_THREADS sets it: the job worker takes one). */
+export const COMPUTE_THREADS = process.env.ANTINODE_COMPUTE_THREADS ? Math.max(1, Number(process.env.ANTINODE_COMPUTE_THREADS)) : Math.max(2, os.availableParallelism() - 1);
 /** Jobs waiting for a thread beyond this are refused as busy (503) rather than queued without end. */
 export const COMPUTE_QUEUE = Number(process.env.ANTINODE_COMPUTE_QUEUE ?? 32);
 /** Nice value of the worker threads (0 normal, 19 lowest): engine work gives way to answering requests. */

@@ -6,7 +6,11 @@ import { sequelize } from '@/lib/db';
 import { assertId } from '@/lib/ids';
 import { Plan, Project, Upload } from '@/models';
 import { toUploadSummary, type UploadSummary } from '@/lib/uploads/data';
+import { askForAnalysisAhead } from './analysis/store';
 import type { SavePlanInput } from './schemas';
+
+/** Seconds after a save before the job worker analyses the new version ahead. */
+const ANALYSE_AHEAD_DELAY_S = 5;
 
 export interface PlanSummary { id: string; name: string; archived: boolean; version: number; updatedAt: string; hasBackground: boolean }
 
@@ -105,5 +109,7 @@ export async function savePlanDocument(teamId: string, userId: string, planId: s
     const current = await Plan.findByPk(planId, { attributes: ['version', 'updatedById', 'updatedAt'] });
     throw new AppError('conflict', `Someone saved this plan after you opened it (now version ${current?.version ?? '?'}, yours is ${input.version}). Your edits are kept: reload their version or overwrite it with yours.`);
   }
+  // The job worker analyses the new version ahead (after a moment: the editor asks for it at once).
+  await askForAnalysisAhead(planId, teamId, ANALYSE_AHEAD_DELAY_S);
   return { version: saved.version, updatedAt: new Date(saved.updated_at).toISOString() };
 }

@@ -1,10 +1,11 @@
 // Stored analyses of plan versions: read by content hash, computed in the compute pool when missing
 // (one computation per version, however many ask at once), and the candidate treatments of each
-// flag evaluated in the background and kept beside it. Saving the plan changes its hash, so a new
+// flag evaluated ahead by the job worker (an analyse-plan job) and kept beside it. Saving the plan changes its hash, so a new
 // version is analysed afresh and only that plan's older rows are pruned.
 import { Op } from 'sequelize';
 import { compute, whenIdle } from '@/lib/compute/pool';
 import { consumeRateLimit } from '@/lib/http/rate-limit';
+import { sendJob } from '@/lib/jobs/queue';
 import type { PlanView } from '@/lib/plans/data';
 import { PlanAnalysisRow } from '@/models';
 import type { RiskTarget } from '../risk-context';
@@ -39,9 +40,10 @@ async function prune(planId: string): Promise<void> {
 
 /**
  * The analysis of the plan as saved: stored, or computed now in the pool and stored. A computation
- * counts against the asking person's analysis rate limit (reading a stored analysis does not).
+ * counts against the asking person's analysis rate limit (reading a stored analysis does not); with
+ * the plan's team, a version computed here is queued for its candidates to be evaluated ahead.
  */
-export async function planAnalysisOf(plan: Pick<PlanView, 'id' | 'document' | 'metresPerPixel'>, askedBy: string | null = null): Promise<PlanAnalysis> {
+export async function planAnalysisOf(plan: Pick<PlanView, 'id' | 'document' | 'metresPerPixel'>, askedBy: string | null = null, teamId: string | null = null): Promise<PlanAnalysis> {
   const hash = contentHash(plan.document, plan.metresPerPixel);
   const row = await storedRow(plan.id, hash);
   if (row) return row.analysis as PlanAnalysis;
@@ -52,8 +54,22 @@ export async function planAnalysisOf(plan: Pick<PlanView, 'id' | 'document' | 'm
     await prune(plan.id);
     return computed;
   });
-  precomputeCandidates(plan, analysis);
+  if (analysis.risks.flags.length > 0) void askForAnalysisAhead(plan.id, teamId);
   return analysis;
+}
+
+/**
+ * Asks the job worker to analyse the plan's current version and evaluate its flags' candidates
+ * ahead (after `delayS`, so an analysis someone is already waiting for is stored by then). A queue
+ * that cannot be reached costs only the head start: everything is still computed when asked for.
+ */
+export async function askForAnalysisAhead(planId: string, teamId: string | null, delayS = 0): Promise<void> {
+  if (!teamId) return;
+  try {
+    await sendJob('analyse-plan', { planId, teamId }, planId, delayS);
+  } catch (error) {
+    console.warn(`[analysis] plan ${planId} was not queued for analysis ahead:`, error instanceof Error ? error.message : error);
+  }
 }
 
 /** The candidate treatments of one flag: stored beside the analysis, or evaluated now in the pool and stored. */
@@ -76,19 +92,20 @@ export async function candidatesOf(plan: Pick<PlanView, 'id' | 'document' | 'met
   });
 }
 
-/** Evaluates every flag's candidates in the background, one at a time, so the lists open at once. */
-function precomputeCandidates(plan: Pick<PlanView, 'id' | 'document' | 'metresPerPixel'>, analysis: PlanAnalysis): void {
+/** The analysis of the plan's version and every flag's candidates, each computed if missing (the analyse-plan job). */
+export async function analyseAhead(plan: Pick<PlanView, 'id' | 'document' | 'metresPerPixel'>): Promise<{ flags: number; evaluated: number }> {
+  const analysis = await planAnalysisOf(plan);
   const flags = analysis.risks.flags.slice(0, PRECOMPUTED_FLAGS);
-  if (flags.length === 0) return;
-  void once(`precompute:${plan.id}:${analysis.contentHash}`, async () => {
-    for (const flag of flags) {
-      const target: RiskTarget = flag.roomId ? { roomId: flag.roomId } : { runId: flag.runId };
-      try {
-        await whenIdle();
-        await candidatesOf(plan, analysis, target, flag.id);
-      } catch (error) {
-        console.warn(`[analysis] candidates of flag ${flag.id} on plan ${plan.id} were not evaluated ahead:`, error instanceof Error ? error.message : error);
-      }
+  let evaluated = 0;
+  for (const flag of flags) {
+    const target: RiskTarget = flag.roomId ? { roomId: flag.roomId } : { runId: flag.runId };
+    try {
+      await whenIdle();
+      await candidatesOf(plan, analysis, target, flag.id);
+      evaluated += 1;
+    } catch (error) {
+      console.warn(`[analysis] candidates of flag ${flag.id} on plan ${plan.id} were not evaluated ahead:`, error instanceof Error ? error.message : error);
     }
-  });
+  }
+  return { flags: flags.length, evaluated };
 }

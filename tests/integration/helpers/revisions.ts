@@ -6,7 +6,7 @@ import { createPlan, savePlanDocument } from '@/lib/plans/data';
 import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
 import { submitRevision } from '@/lib/revisions/data';
 import type { RevisionSummary } from '@/lib/revisions/types';
-import { issueSchedule } from '@/lib/schedules/data';
+import { issueSchedule, renderAskedSchedule } from '@/lib/schedules/data';
 import type { TestTeam } from './people';
 
 export const TEST_METRES_PER_PIXEL = 0.005;
@@ -39,5 +39,6 @@ export async function reviewFixtures(testTeam: TestTeam, projectId: string): Pro
   const revision = await submitted(testTeam, planId);
   const created = await createComment(testTeam.team.id, who, { planId, revisionId: revision.id, parentId: null, xPx: 10, yPx: 20, target: null, body: 'Walk comment' });
   const schedule = await issueSchedule(testTeam.team.id, who, revision.id);
+  await renderAskedSchedule(testTeam.team.id, schedule.id); // the render-schedule job's work
   return { revisionId: revision.id, commentId: created.comment.id, scheduleId: schedule.id };
 }

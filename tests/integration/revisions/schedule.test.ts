@@ -20,9 +20,9 @@ import { PRINTED_LOWEST_ORDERS } from '@/lib/schedules/content';
 import { call } from '../helpers/routes';
 import { createTestTeam, type TestTeam } from '../helpers/people';
 import { planWithRuns, submitted } from '../helpers/revisions';
-import { previewSchedule } from '@/lib/schedules/data';
+import { previewSchedule, renderAskedSchedule } from '@/lib/schedules/data';
 import sharp from 'sharp';
-import { POST as issue } from '@/app/api/v1/revisions/[revisionId]/schedules/route';
+import { GET as list, POST as issue } from '@/app/api/v1/revisions/[revisionId]/schedules/route';
 import { GET as download } from '@/app/api/v1/schedules/[scheduleId]/route';
 
 let t: TestTeam;
@@ -45,8 +45,14 @@ describe('treatment schedule', () => {
     const refused = await call(issue, 'POST', '/x', { cookie: await t.cookieFor('engineer'), params: { revisionId } });
     expect(refused.status).toBe(403);
     const issued = await call(issue, 'POST', '/x', { cookie: await t.cookieFor('acoustician'), params: { revisionId } });
-    expect(issued.status).toBe(201);
-    const schedule = (issued.body as { schedule: { id: string; sha256: string } }).schedule;
+    // asked for now, rendered by the job worker: here the job's own work is run in place
+    expect(issued.status).toBe(202);
+    const asked = (issued.body as { schedule: { id: string; status: string } }).schedule;
+    expect(asked.status).toBe('rendering');
+    expect(await renderAskedSchedule(t.team.id, asked.id)).toBe('issued');
+    const listed = await call(list, 'GET', '/x', { cookie: await t.cookieFor('viewer'), params: { revisionId } });
+    const schedule = (listed.body as { schedules: { id: string; sha256: string; status: string }[] }).schedules.find((row) => row.id === asked.id)!;
+    expect(schedule.status).toBe('issued');
     const fetchPdf = async () => {
       const response = await download(new Request(`http://localhost/api/v1/schedules/${schedule.id}`, { headers: { host: 'localhost', cookie: await t.cookieFor('viewer') } }), { params: Promise.resolve({ scheduleId: schedule.id }) });
       expect(response.status).toBe(200);

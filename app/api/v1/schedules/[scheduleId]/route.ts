@@ -12,7 +12,7 @@ export const GET = route<Params>({ access: 'schedule.read' }, async ({ team, par
       'content-type': 'application/pdf',
       'content-length': String(bytes.byteLength),
       'content-disposition': `${inline ? 'inline' : 'attachment'}; filename="${summary.fileName}"`,
-      'x-content-sha256': summary.sha256,
+      'x-content-sha256': summary.sha256 ?? '',
       'cache-control': 'private, max-age=31536000, immutable',
     },
   });

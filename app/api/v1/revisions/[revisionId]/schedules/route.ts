@@ -8,7 +8,8 @@ export const GET = route<Params>({ access: 'schedule.read' }, async ({ team, par
   json({ schedules: await listSchedules(team!.teamId, params.revisionId) })
 ));
 
-// Issue the treatment schedule of a revision: render, store with its checksum, record.
+// Ask for the treatment schedule of a revision: recorded now (202), rendered and stored with its
+// checksum by the job worker; GET shows its progress.
 export const POST = route<Params>({ access: 'schedule.issue' }, async ({ team, actor, params }) => (
-  json({ schedule: await issueSchedule(team!.teamId, auditActorOf(actor!), params.revisionId) }, 201)
+  json({ schedule: await issueSchedule(team!.teamId, auditActorOf(actor!), params.revisionId) }, 202)
 ));
