@@ -6,7 +6,7 @@ import { apiFetch } from '@/components/api-fetch';
 import { FormAlert } from '@/components/forms/form-alert';
 
 // Issues the schedule of a revision: renders it, stores it with its checksum.
-export function IssueSchedule({ revisionId, approved }: { revisionId: string; approved: boolean }) {
+export function IssueSchedule({ revisionId, accepted }: { revisionId: string; accepted: boolean }) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -20,7 +20,7 @@ export function IssueSchedule({ revisionId, approved }: { revisionId: string; ap
   };
   return (
     <div className="space-y-2">
-      {!approved && <p className="text-sm text-risk-ink">This revision is not approved: the schedule is issued as a draft, watermarked as such.</p>}
+      {!accepted && <p className="text-sm text-risk-ink">This revision has not been accepted in review: the schedule is issued as a draft, watermarked as such.</p>}
       <FormAlert message={error} />
       <button type="button" className="btn-primary" disabled={busy} onClick={issue}>{busy ? 'Rendering the PDF…' : 'Issue schedule'}</button>
     </div>

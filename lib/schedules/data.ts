@@ -2,9 +2,11 @@
 // stored through the S3 client with its SHA-256), list, and read back the issued bytes.
 import { createHash, randomUUID } from 'node:crypto';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
+import { recordAudit } from '@/lib/audit/record';
 import { AppError, notFound } from '@/lib/errors';
 import { getRevisionById } from '@/lib/revisions/data';
 import { schedulePath } from '@/lib/revisions/links';
+import { isAcceptedForIssue } from '@/lib/revisions/states';
 import type { RevisionView } from '@/lib/revisions/types';
 import { listDecisions } from '@/lib/reviews/data';
 import { getObject, putObject } from '@/lib/storage/object-store';
@@ -57,10 +59,9 @@ export async function issueSchedule(teamId: string, actor: ActivityActor, revisi
   const storageKey = `teams/${teamId}/schedules/${revision.id}/${randomUUID()}.pdf`;
   await putObject(storageKey, bytes, 'application/pdf');
   const row = await Schedule.create({ teamId, revisionId: revision.id, storageKey, sha256, bytes: bytes.byteLength, issuedById: actor.id, issuedByName: actor.name, createdAt: at });
-  await recordActivity({
-    teamId, planId: revision.planId, actor, kind: 'schedule.issued',
-    summary: `Treatment schedule issued for revision ${revision.number}${revision.state === 'approved' ? '' : ' (draft, not approved)'}`, link: schedulePath(revision.planId, revision.number),
-  });
+  const summary = `Treatment schedule issued for revision ${revision.number}${isAcceptedForIssue(revision.state) ? '' : ' (draft, not accepted)'}`;
+  await recordActivity({ teamId, planId: revision.planId, actor, kind: 'schedule.issued', summary, link: schedulePath(revision.planId, revision.number) });
+  await recordAudit({ teamId, actor, action: 'schedule.issued', subject: `${revision.project.name}, ${revision.planName}: ${summary} (SHA-256 ${sha256.slice(0, 12)}…)` });
   return toSummary(row, revision);
 }
 
