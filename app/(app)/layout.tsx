@@ -4,12 +4,12 @@ import { ReadOnlyBanner } from '@/components/shell/read-only-banner';
 import { requireActor } from '@/lib/auth/current';
 import { teamStanding } from '@/lib/billing/standing';
 import { can } from '@/lib/permissions';
-import { listWaitingReviews, waitingFor } from '@/lib/reviews/waiting';
+import { reviewsWaitingCount } from '@/lib/reviews/waiting';
 
 export default async function SignedInLayout({ children }: { children: ReactNode }) {
   const actor = await requireActor();
   const standing = actor.team ? await teamStanding(actor.team.teamId) : null;
-  const reviewsWaiting = actor.team && can(actor.team.role, 'review.write') ? waitingFor(await listWaitingReviews(actor.team.teamId), actor.user.id).length : null;
+  const reviewsWaiting = await reviewsWaitingCount(actor.user.id, actor.team);
   return (
     <div className="min-h-screen">
       <AppHeader actor={actor} reviewsWaiting={reviewsWaiting} />

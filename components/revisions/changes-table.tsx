@@ -16,7 +16,7 @@ function count(value: number | null): string {
 
 // Key numbers of this revision beside the previous one's, then every change to the plan itself.
 export function ChangesTable({ changes, planChanges, number }: { changes: RevisionChanges; planChanges: readonly DocumentChange[] | null; number: number }) {
-  const before = changes.previousNumber === null ? 'Before' : `Revision ${changes.previousNumber}`;
+  const before = changes.previousNumber === null ? 'before' : `revision ${changes.previousNumber}`;
   return (
     <section className="panel p-4" aria-labelledby="changes-title">
       <h2 id="changes-title" className="mb-2 font-semibold">What changed since {changes.previousNumber === null ? 'the start (first revision)' : `revision ${changes.previousNumber}`}</h2>

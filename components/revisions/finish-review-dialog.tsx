@@ -52,7 +52,7 @@ export function FinishReviewDialog({ revisionId, number, submittedByName, tally,
 
   return (
     <dialog ref={ref} aria-labelledby={titleId} onCancel={(event) => { event.preventDefault(); if (!busy) onClose(); }}
-      className="panel w-[min(40rem,calc(100vw-2rem))] max-h-[calc(100vh-2rem)] overflow-y-auto p-0 text-graphite backdrop:bg-graphite/40">
+      className="panel m-auto w-[min(40rem,calc(100vw-2rem))] max-h-[calc(100vh-2rem)] overflow-y-auto p-0 text-graphite backdrop:bg-graphite/40">
       <div className="space-y-4 p-5">
         <h2 id={titleId} className="text-lg font-semibold">Finish the review of revision {number}</h2>
         <section aria-label="What the review holds" className="rounded border border-graphite-100 bg-paper p-3 text-sm">

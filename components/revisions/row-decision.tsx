@@ -36,9 +36,9 @@ export function RowDecision({ label, current, canReview, busy, onDecide }: RowDe
         </>
       )}
       {canReview && querying && (
-        <span className="flex min-w-0 flex-wrap items-center gap-1">
+        <span className="flex max-w-full flex-wrap items-center gap-1">
           <label className="sr-only" htmlFor={fieldId}>Query on {label}</label>
-          <input id={fieldId} className="min-w-[12rem] flex-1 rounded border border-graphite-200 px-2 py-0.5 text-xs" placeholder="What should the acoustician answer or change?"
+          <input id={fieldId} className="w-80 max-w-full rounded border border-graphite-200 px-2 py-0.5 text-xs" placeholder="What should the acoustician answer or change?"
             value={note} onChange={(event) => setNote(event.target.value)} autoFocus
             onKeyDown={(event) => { if (event.key === 'Escape') setQuerying(false); }} />
           <button type="button" className="btn-risk px-2 py-0.5 text-xs" disabled={busy || note.trim().length === 0} onClick={() => { onDecide('query', note.trim()); setQuerying(false); }}>Raise query</button>

@@ -1,5 +1,6 @@
 // Revisions waiting for review in a team: for the projects list, the plan rows, the header count
 // and the list of reviews to do. A plan has at most one revision waiting (a newer one supersedes it).
+import { can, type Role } from '@/lib/permissions';
 import { Plan, Project, Revision } from '@/models';
 import { revisionPath } from '@/lib/revisions/links';
 
@@ -57,4 +58,10 @@ export function waitingByPlan(reviews: readonly WaitingReview[], reader: { userI
   return Object.fromEntries(reviews.map((review) => [review.planId, {
     number: review.number, link: review.link, forYou: reader.mayReview && review.submittedById !== reader.userId,
   }]));
+}
+
+/** For the header: how many revisions wait for this person's review; null for people who may not review. */
+export async function reviewsWaitingCount(userId: string, team: { teamId: string; role: Role } | null): Promise<number | null> {
+  if (!team || !can(team.role, 'review.write')) return null;
+  return waitingFor(await listWaitingReviews(team.teamId), userId).length;
 }

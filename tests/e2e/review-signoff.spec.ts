@@ -73,6 +73,7 @@ test('a pin says where it is in plan units and by the nearest labelled segment, 
   await page.goto(`/plans/${planId}/revisions/1`);
   await page.getByRole('button', { name: 'Place a pin' }).click();
   await expect(page.getByTestId('plan-canvas').locator('canvas').first()).toBeVisible();
+  await page.getByTestId('plan-canvas').scrollIntoViewIfNeeded();
   // 0.6 m off the middle of the corridor duct (120,380)–(520,380): 4.00 m along it (worked by hand, 0.02 m a pixel)
   const spot = await fittedPlanToScreen(page, { x: 320, y: 410 }, { document, metresPerPixel });
   await page.mouse.click(spot.x, spot.y);

@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { createPerson, createTeam, signIn } from './fixtures';
+import { expectCleanLayout } from './layout-check';
 
 test('a role change says it was saved, and the audit log shows it under the kind and person filters', async ({ page }) => {
   const team = await createTeam('Roles team');
@@ -19,6 +20,10 @@ test('a role change says it was saved, and the audit log shows it under the kind
   const table = page.getByRole('table', { name: 'Audit log' });
   await expect(table.getByRole('row')).toHaveCount(2); // the header and the one change
   await expect(table).toContainText(`${member.email}: Viewer → Architect`);
+  for (const size of [{ width: 1440, height: 900 }, { width: 1024, height: 768 }]) {
+    await page.setViewportSize(size);
+    await expectCleanLayout(page);
+  }
 
   // The admin's own sign-in is in the log too, under its own kind.
   await page.getByLabel('Kind of event').selectOption({ label: 'Sign-in: everything' });
