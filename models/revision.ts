@@ -8,7 +8,7 @@ import type { Upload } from './upload';
 import type { User } from './user';
 
 // A frozen revision of a plan: its document, scale and full analysis as submitted. Never
-// changed after it is written, except for the review's outcome (state, reviewer).
+// changed after it is written, except for the review's outcome (state, reviewer, the reviewer's note).
 export class Revision extends Model<InferAttributes<Revision>, InferCreationAttributes<Revision>> {
   declare id: CreationOptional<string>;
   declare teamId: ForeignKey<Team['id']>;
@@ -28,6 +28,7 @@ export class Revision extends Model<InferAttributes<Revision>, InferCreationAttr
   declare reviewedById: ForeignKey<User['id']> | null;
   declare reviewedByName: string | null;
   declare reviewedAt: Date | null;
+  declare reviewNote: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -46,6 +47,7 @@ Revision.init(
     submittedByName: { type: DataTypes.STRING(200), allowNull: false },
     reviewedByName: { type: DataTypes.STRING(200), allowNull: true },
     reviewedAt: { type: DataTypes.DATE, allowNull: true },
+    reviewNote: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     createdAt: DataTypes.DATE,
   },
   { sequelize, tableName: 'revisions', modelName: 'Revision', updatedAt: false },

@@ -15,7 +15,7 @@ export function benchRevision(runs: number, segmentsPerRun = 4): RevisionView {
   const metresPerPixel = 0.005;
   return {
     id: '00000000-0000-4000-8000-000000000001', planId: '00000000-0000-4000-8000-000000000002', teamId: '00000000-0000-4000-8000-000000000003',
-    number: 1, planVersion: 1, contentHash: null, state: 'waiting', note: '', submittedByName: 'Ines Varga', reviewedByName: null, reviewedAt: null,
+    number: 1, planVersion: 1, contentHash: null, state: 'waiting', note: '', submittedByName: 'Ines Varga', reviewedByName: null, reviewedAt: null, reviewNote: '',
     createdAt: new Date(0).toISOString(), planName: 'Level 3 supply', project: { id: '', name: 'Harbour Lane Recital Hall' },
     metresPerPixel, document, analysis: analysePlan(document, metresPerPixel), extras: {}, background: null,
   };

@@ -22,7 +22,7 @@ export function CommentPins({ view }: { view: PinView | null }) {
             key={thread.id}
             type="button"
             data-testid="comment-pin"
-            aria-label={`Comment ${index + 1} by ${thread.authorName}${thread.resolved ? ' (resolved)' : ''}`}
+            aria-label={`Comment ${index + 1} by ${thread.authorName}${thread.resolved ? ' (closed out)' : ''}`}
             onClick={() => setActiveId(active ? null : thread.id)}
             style={{ left, top }}
             className={`pointer-events-auto absolute -translate-x-1/2 -translate-y-full rounded-full rounded-bl-none border px-1.5 py-0.5 text-xs font-semibold shadow ${

@@ -5,8 +5,8 @@ import { createContext, useCallback, useContext, useMemo, useState, type ReactNo
 import { apiFetch } from '@/components/api-fetch';
 import type { CommentThread } from '@/lib/comments/types';
 
-// Where a new comment goes: a point of the plan (plan pixels) or a table row.
-export type CommentDraft = { kind: 'pin'; xPx: number; yPx: number } | { kind: 'row'; target: string; label: string };
+// Where a new comment goes: a point of the plan (plan pixels).
+export type CommentDraft = { kind: 'pin'; xPx: number; yPx: number };
 
 export interface CommentsState {
   planId: string;
@@ -60,7 +60,7 @@ export function CommentsProvider({ planId, revisionId = null, canWrite, members,
   }, []);
 
   const send = useCallback(async ({ body, parentId = null }: { body: string; parentId?: string | null }) => {
-    const place = parentId ? {} : draft?.kind === 'pin' ? { xPx: draft.xPx, yPx: draft.yPx } : draft?.kind === 'row' ? { target: draft.target } : {};
+    const place = parentId || !draft ? {} : { xPx: draft.xPx, yPx: draft.yPx };
     const answer = await apiFetch<{ comment: { id: string } }>('/api/v1/comments', { method: 'POST', body: { planId, revisionId, parentId, body, ...place } });
     if (!answer.ok) return answer.error.message;
     if (!parentId) { setDraft(null); setActiveId(answer.data.comment.id); }

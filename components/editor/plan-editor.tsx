@@ -220,7 +220,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
                   </button>
                 ))}
               </div>
-              {sideTab === 'comments' ? <CommentsPanel /> : (<>
+              {sideTab === 'comments' ? <CommentsPanel place={{ document: doc, metresPerPixel: model.metresPerPixel, unitSystem, labels }} /> : (<>
               {doc.runs.length > 1 && (
                 <div>
                   <label htmlFor="run-picker" className="block text-xs font-medium text-graphite-700">Results for</label>

@@ -1,4 +1,6 @@
 import type { RevisionChanges } from '@/lib/revisions/changes';
+import type { DocumentChange } from '@/lib/revisions/document-changes';
+import { DocumentChangesTable } from './document-changes-table';
 
 function hzList(values: number[]): string {
   return values.length === 0 ? '—' : values.map((value) => value.toFixed(1)).join(', ') + ' Hz';
@@ -12,13 +14,14 @@ function count(value: number | null): string {
   return value === null ? '—' : String(value);
 }
 
-// Key numbers of this revision beside the previous one's.
-export function ChangesTable({ changes, number }: { changes: RevisionChanges; number: number }) {
-  const before = changes.previousNumber === null ? 'Before' : `Revision ${changes.previousNumber}`;
+// Key numbers of this revision beside the previous one's, then every change to the plan itself.
+export function ChangesTable({ changes, planChanges, number }: { changes: RevisionChanges; planChanges: readonly DocumentChange[] | null; number: number }) {
+  const before = changes.previousNumber === null ? 'before' : `revision ${changes.previousNumber}`;
   return (
     <section className="panel p-4" aria-labelledby="changes-title">
       <h2 id="changes-title" className="mb-2 font-semibold">What changed since {changes.previousNumber === null ? 'the start (first revision)' : `revision ${changes.previousNumber}`}</h2>
       <p className="mb-2 text-sm text-graphite-500">Runs: {count(changes.runCount[0])} → {changes.runCount[1]} · segments: {count(changes.segmentCount[0])} → {changes.segmentCount[1]}</p>
+      <div className="overflow-x-auto">
       <table className="w-full text-sm" aria-label="Changes by run">
         <thead>
           <tr className="border-b border-graphite-100 text-left text-xs text-graphite-500">
@@ -46,6 +49,13 @@ export function ChangesTable({ changes, number }: { changes: RevisionChanges; nu
           })}
         </tbody>
       </table>
+      </div>
+      {changes.previousNumber !== null && planChanges && (
+        <div className="mt-4">
+          <h3 className="mb-1 text-sm font-semibold">Changes to the plan</h3>
+          <DocumentChangesTable changes={planChanges} previousNumber={changes.previousNumber} />
+        </div>
+      )}
     </section>
   );
 }

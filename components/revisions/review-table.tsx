@@ -16,12 +16,11 @@ interface ReviewTableProps {
   risks: readonly RiskRow[];
   decisions: Record<string, RowDecisionState>;
   canReview: boolean;
-  // Lets a commenter start a comment on a row.
-  onCommentRow?: (target: string, label: string) => void;
 }
 
-// The frozen resonance table of every run (and the risk flags), each row with its review.
-export function ReviewTable({ revisionId, runs, risks, decisions, canReview, onCommentRow }: ReviewTableProps) {
+// The frozen resonance table of every run (and the risk flags), each row with its mark: checked,
+// a query, or not checked yet.
+export function ReviewTable({ revisionId, runs, risks, decisions, canReview }: ReviewTableProps) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -50,7 +49,7 @@ export function ReviewTable({ revisionId, runs, risks, decisions, canReview, onC
                   <th scope="col" className="py-1 pr-2 text-right font-medium">Frequency</th>
                   <th scope="col" className="py-1 pr-2 text-right font-medium">Q</th>
                   <th scope="col" className="py-1 pr-2 font-medium">Fan tone</th>
-                  <th scope="col" className="py-1 font-medium">Review</th>
+                  <th scope="col" className="py-1 font-medium">Check</th>
                 </tr>
               </thead>
               <tbody>
@@ -66,7 +65,6 @@ export function ReviewTable({ revisionId, runs, risks, decisions, canReview, onC
                       <td className="py-1 pr-2">{tone === null ? <span className="text-graphite-300">clear</span> : <span className="rounded bg-risk-soft px-1 text-xs text-risk-ink">⚠ near {tone.toFixed(0)} Hz</span>}</td>
                       <td className="py-1">
                         <RowDecision label={label} current={decisions[target] ?? null} canReview={canReview} busy={busy} onDecide={(decision, note) => decide(target, decision, note)} />
-                        {onCommentRow && <button type="button" className="mt-0.5 text-xs text-select-ink underline" onClick={() => onCommentRow(target, label)}>Comment on this row</button>}
                       </td>
                     </tr>
                   );

@@ -7,7 +7,7 @@ import { FormAlert } from '@/components/forms/form-alert';
 import { schedulesKey } from './schedule-list';
 
 // Issues the schedule of a revision: asks for it; the list below shows it rendering, then issued.
-export function IssueSchedule({ revisionId, approved }: { revisionId: string; approved: boolean }) {
+export function IssueSchedule({ revisionId, accepted }: { revisionId: string; accepted: boolean }) {
   const queryClient = useQueryClient();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -21,7 +21,7 @@ export function IssueSchedule({ revisionId, approved }: { revisionId: string; ap
   };
   return (
     <div className="space-y-2">
-      {!approved && <p className="text-sm text-risk-ink">This revision is not approved: the schedule is issued as a draft, watermarked as such.</p>}
+      {!accepted && <p className="text-sm text-risk-ink">This revision has not been accepted in review: the schedule is issued as a draft, watermarked as such.</p>}
       <FormAlert message={error} />
       <button type="button" className="btn-primary" disabled={busy} onClick={issue}>{busy ? 'Asking…' : 'Issue schedule'}</button>
     </div>

@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState, useTransition } from 'react';
 import { changeRoleAction, removeMemberAction } from '@/app/(app)/team/actions';
 import type { ActionResult } from '@/lib/actions';
-import { isRole, type Role } from '@/lib/permissions';
+import { isRole, ROLE_LABELS, type Role } from '@/lib/permissions';
 import type { MemberSummary } from '@/lib/team/members';
 import { RoleSelect } from './role-select';
 
@@ -14,12 +14,15 @@ export function MemberRow({ member, isYou }: { member: MemberSummary; isYou: boo
   const [role, setRole] = useState<Role>(member.role);
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  const [saved, setSaved] = useState<string | null>(null);
 
-  function run(action: () => Promise<ActionResult<null>>, onFail?: () => void) {
+  function run(action: () => Promise<ActionResult<null>>, onFail?: () => void, onDone?: () => void) {
     setError(null);
+    setSaved(null);
     startTransition(async () => {
       const result = await action();
       if (!result.ok) { setError(result.error.message); onFail?.(); return; }
+      onDone?.();
       router.refresh();
     });
   }
@@ -41,7 +44,7 @@ export function MemberRow({ member, isYou }: { member: MemberSummary; isYou: boo
           if (!isRole(next)) return;
           const before = role;
           setRole(next);
-          run(() => changeRoleAction(member.id, { role: next }), () => setRole(before));
+          run(() => changeRoleAction(member.id, { role: next }), () => setRole(before), () => setSaved(`Saved: ${member.name} is now ${ROLE_LABELS[next].toLowerCase()}.`));
         }}
       />
       <div className="flex justify-end gap-2">
@@ -57,6 +60,7 @@ export function MemberRow({ member, isYou }: { member: MemberSummary; isYou: boo
         )}
       </div>
       {error && <p role="alert" className="text-sm text-risk-ink sm:col-span-3"><span className="font-semibold">Not done: </span>{error}</p>}
+      {saved && <p role="status" className="text-sm text-graphite-700 sm:col-span-3"><span aria-hidden="true">✓ </span>{saved}</p>}
     </li>
   );
 }

@@ -1,11 +1,11 @@
 // Every kind of line in a plan's activity, with the words shown for it.
 export const ACTIVITY_KINDS = {
   'revision.submitted': 'Submitted for review',
-  'review.decided': 'Reviewed a row',
+  'review.decided': 'Checked or queried rows',
   'review.finished': 'Finished the review',
   'comment.added': 'Commented',
   'comment.answered': 'Answered a comment',
-  'comment.resolved': 'Resolved a comment',
+  'comment.resolved': 'Closed out a comment',
   'comment.reopened': 'Reopened a comment',
   'schedule.issued': 'Issued a treatment schedule',
 } as const;

@@ -3,11 +3,11 @@ import type { Transaction } from 'sequelize';
 import { PlanActivity } from '@/models';
 import type { ActivityKind } from './kinds';
 
-/** Who did it; id null for a person whose account is gone by the time a queued job records it. */
-export interface ActivityActor { id: string | null; name: string }
+export interface ActivityActor { id: string; name: string }
 
 export async function recordActivity(
-  entry: { teamId: string; planId: string; actor: ActivityActor; kind: ActivityKind; summary: string; link?: string | null },
+  // actor id null: a person whose account is gone by the time a queued job records their action.
+  entry: { teamId: string; planId: string; actor: ActivityActor | { id: null; name: string }; kind: ActivityKind; summary: string; link?: string | null },
   transaction?: Transaction,
 ): Promise<void> {
   await PlanActivity.create(

@@ -3,6 +3,7 @@ import type { Cookie } from 'lucia';
 import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { recordSignIn } from '@/lib/audit/record';
 import { Membership, Session, Team, User } from '@/models';
 import { lucia } from './lucia';
 import { decoyPasswordHash, hashPassword, verifyPassword } from './password';
@@ -50,6 +51,7 @@ export async function signIn(email: string, password: string, clientAddress: str
     throw new AppError('wrong_credentials', WRONG_CREDENTIALS);
   }
   await clearFailures(email);
+  await recordSignIn(user, clientAddress);
   const first = await Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] });
   return startSession(user.id, first?.teamId ?? null);
 }

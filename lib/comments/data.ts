@@ -1,4 +1,4 @@
-// Comments on a team's plans: list threads, write, answer, resolve and reopen.
+// Comments on a team's plans: list threads, write, answer, close out and reopen.
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
 import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
@@ -70,7 +70,7 @@ export async function setCommentResolved(teamId: string, actor: ActivityActor, c
   return sequelize.transaction(async (transaction) => {
     const row = await Comment.findOne({ where: { id: commentId, teamId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!row) throw notFound('That comment');
-    if (row.parentId) throw new AppError('bad_input', 'Resolve the thread from its first comment.');
+    if (row.parentId) throw new AppError('bad_input', 'Close out the thread from its first comment.');
     await row.update({ resolvedAt: resolved ? new Date() : null, resolvedByName: resolved ? actor.name : null }, { transaction });
     await recordActivity({
       teamId, planId: row.planId, actor, kind: resolved ? 'comment.resolved' : 'comment.reopened', summary: row.body.slice(0, 200), link: null,

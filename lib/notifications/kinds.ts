@@ -4,6 +4,6 @@ export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
 
 export const NOTIFICATION_LABELS: Record<NotificationKind, { title: string; detail: string }> = {
   review_requested: { title: 'Review requested', detail: 'A plan of your team was submitted for review (sent to engineers and admins).' },
-  review_finished: { title: 'Review finished', detail: 'A revision you submitted was approved or returned.' },
+  review_finished: { title: 'Review finished', detail: 'A revision you submitted was reviewed: accepted, accepted with notes, to revise and resubmit, or rejected.' },
   mention: { title: 'Mentions', detail: 'Someone wrote @ and your name in a comment.' },
 };

@@ -3,12 +3,24 @@ import type { MailMessage } from '@/lib/mail/send';
 
 const FOOTER = 'You can turn these mails off on your Antinode account page.';
 
-export function reviewRequestedMail(input: { to: string; submitterName: string; planName: string; number: number; link: string }): MailMessage {
+/** Where a revision sits, as every review mail names it. */
+export interface RevisionPlace { projectName: string; planName: string; number: number }
+
+function placeOf(place: RevisionPlace): string {
+  return `${place.projectName}: ${place.planName}, revision ${place.number}`;
+}
+
+function quoted(text: string): string[] {
+  return text.split(/\r?\n/).map((line) => `  ${line}`);
+}
+
+export function reviewRequestedMail(input: { to: string; submitterName: string; place: RevisionPlace; note: string; link: string }): MailMessage {
   return {
     to: input.to,
-    subject: `Review requested: ${input.planName}, revision ${input.number}`,
+    subject: `Review requested: ${placeOf(input.place)}`,
     text: [
-      `${input.submitterName} submitted revision ${input.number} of ${input.planName} for review.`,
+      `${input.submitterName} submitted revision ${input.place.number} of ${input.place.planName} (project ${input.place.projectName}) for review.`,
+      ...(input.note ? ['', `${input.submitterName}'s note:`, ...quoted(input.note)] : []),
       '',
       `Open the revision: ${input.link}`,
       '',
@@ -17,12 +29,18 @@ export function reviewRequestedMail(input: { to: string; submitterName: string; 
   };
 }
 
-export function reviewFinishedMail(input: { to: string; reviewerName: string; planName: string; number: number; outcome: string; link: string }): MailMessage {
+export function reviewFinishedMail(input: {
+  to: string; reviewerName: string; place: RevisionPlace; outcome: string; meaning: string; note: string; queries: readonly { row: string; note: string }[]; link: string;
+}): MailMessage {
   return {
     to: input.to,
-    subject: `Review finished: ${input.planName}, revision ${input.number} (${input.outcome})`,
+    subject: `Review finished: ${placeOf(input.place)}, ${input.outcome.toLowerCase()}`,
     text: [
-      `${input.reviewerName} finished the review of revision ${input.number} of ${input.planName}: ${input.outcome}.`,
+      `${input.reviewerName} finished the review of revision ${input.place.number} of ${input.place.planName} (project ${input.place.projectName}).`,
+      '',
+      `Outcome: ${input.outcome}. ${input.meaning}`,
+      ...(input.note ? ['', `${input.reviewerName}'s note:`, ...quoted(input.note)] : []),
+      ...(input.queries.length > 0 ? ['', `Queries on rows (${input.queries.length}):`, ...input.queries.map((query) => `  - ${query.row}: ${query.note}`)] : []),
       '',
       `Open the revision: ${input.link}`,
       '',

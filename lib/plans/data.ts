@@ -6,7 +6,9 @@ import { sequelize } from '@/lib/db';
 import { assertId } from '@/lib/ids';
 import { Plan, Project, Upload } from '@/models';
 import { toUploadSummary, type UploadSummary } from '@/lib/uploads/data';
+import { auditActorById, recordAudit, type AuditActor } from '@/lib/audit/record';
 import { askForAnalysisAhead } from './analysis/store';
+import { recordDocumentAudit } from './document-audit';
 import type { SavePlanInput } from './schemas';
 
 /** Seconds after a save before the job worker analyses the new version ahead. */
@@ -61,9 +63,12 @@ export async function listPlans(teamId: string, projectId: string, options: { in
 }
 
 export async function createPlan(teamId: string, userId: string, projectId: string, name: string): Promise<PlanSummary> {
-  await projectInTeam(teamId, projectId);
-  const row = await Plan.create({ projectId, name, document: emptyDocument(), updatedById: userId });
-  return toSummary(row);
+  const project = await projectInTeam(teamId, projectId);
+  return sequelize.transaction(async (transaction) => {
+    const row = await Plan.create({ projectId, name, document: emptyDocument(), updatedById: userId }, { transaction });
+    await recordAudit({ teamId, actor: await auditActorById(userId, transaction), action: 'plan.created', subject: `${name} in ${project.name}` }, transaction);
+    return toSummary(row);
+  });
 }
 
 export async function getPlan(teamId: string, planId: string): Promise<PlanView> {
@@ -82,21 +87,35 @@ export async function getPlan(teamId: string, planId: string): Promise<PlanView>
   };
 }
 
-export async function updatePlanMeta(teamId: string, planId: string, changes: { name?: string; archived?: boolean }): Promise<PlanSummary> {
+export async function updatePlanMeta(teamId: string, actor: AuditActor, planId: string, changes: { name?: string; archived?: boolean }): Promise<PlanSummary> {
   const row = await planRowInTeam(teamId, planId);
-  await row.update(changes);
-  return toSummary(row);
+  const before = { name: row.name, archived: row.archived };
+  return sequelize.transaction(async (transaction) => {
+    await row.update(changes, { transaction });
+    const said = [
+      changes.name !== undefined && changes.name !== before.name ? `renamed from ${before.name}` : null,
+      changes.archived !== undefined && changes.archived !== before.archived ? (changes.archived ? 'archived' : 'taken out of the archive') : null,
+    ].filter(Boolean);
+    if (said.length > 0) await recordAudit({ teamId, actor, action: 'plan.changed', subject: `${row.name}: ${said.join(', ')}` }, transaction);
+    return toSummary(row);
+  });
 }
 
-export async function setPlanBackground(teamId: string, planId: string, uploadId: string | null): Promise<void> {
+export async function setPlanBackground(teamId: string, actor: AuditActor, planId: string, uploadId: string | null): Promise<void> {
   const row = await planRowInTeam(teamId, planId);
-  await row.update({ backgroundUploadId: uploadId });
+  await sequelize.transaction(async (transaction) => {
+    await row.update({ backgroundUploadId: uploadId }, { transaction });
+    const upload = uploadId ? await Upload.findOne({ where: { id: uploadId, teamId }, attributes: ['fileName'], transaction }) : null;
+    await recordAudit(uploadId
+      ? { teamId, actor, action: 'plan.drawing_set', subject: `${row.name}: ${upload?.fileName ?? 'a drawing'}` }
+      : { teamId, actor, action: 'plan.drawing_removed', subject: `${row.name}: back to the blank grid` }, transaction);
+  });
 }
 
 // Saves the drawn document only if nobody saved since `version` was loaded; else 409 and
 // nothing changes, so the editor can keep the person's edits and offer a choice.
 export async function savePlanDocument(teamId: string, userId: string, planId: string, input: SavePlanInput): Promise<{ version: number; updatedAt: string }> {
-  await planRowInTeam(teamId, planId);
+  const before = await planRowInTeam(teamId, planId);
   const [rows] = (await sequelize.query(
     `update plans set document = :document::jsonb, metres_per_pixel = :metresPerPixel, version = version + 1,
        updated_by_id = :userId, updated_at = now()
@@ -108,6 +127,10 @@ export async function savePlanDocument(teamId: string, userId: string, planId: s
   if (!saved) {
     const current = await Plan.findByPk(planId, { attributes: ['version', 'updatedById', 'updatedAt'] });
     throw new AppError('conflict', `Someone saved this plan after you opened it (now version ${current?.version ?? '?'}, yours is ${input.version}). Your edits are kept: reload their version or overwrite it with yours.`);
+  }
+  // The version read above is the one this save replaced when their numbers agree.
+  if (before.version === input.version) {
+    await recordDocumentAudit(teamId, () => auditActorById(userId), before.name, { document: before.document, metresPerPixel: before.metresPerPixel }, input);
   }
   // The job worker analyses the new version ahead (after a moment: the editor asks for it at once).
   await askForAnalysisAhead(planId, teamId, ANALYSE_AHEAD_DELAY_S);

@@ -1,4 +1,6 @@
 // Projects of a team. Every query is scoped by team id: one team never sees another's.
+import { auditActorById, recordAudit, type AuditActor } from '@/lib/audit/record';
+import { sequelize } from '@/lib/db';
 import { Project } from '@/models';
 import { notFound } from '@/lib/errors';
 import { isId } from '@/lib/ids';
@@ -25,14 +27,29 @@ export async function getProject(teamId: string, projectId: string): Promise<Pro
 }
 
 export async function createProject(teamId: string, userId: string, input: Required<ProjectInput>): Promise<ProjectSummary> {
-  const row = await Project.create({ teamId, createdById: userId, name: input.name, site: input.site });
-  return toSummary(row);
+  return sequelize.transaction(async (transaction) => {
+    const row = await Project.create({ teamId, createdById: userId, name: input.name, site: input.site }, { transaction });
+    await recordAudit({ teamId, actor: await auditActorById(userId, transaction), action: 'project.created', subject: input.name }, transaction);
+    return toSummary(row);
+  });
 }
 
-export async function updateProject(teamId: string, projectId: string, changes: ProjectUpdate): Promise<ProjectSummary> {
+function describeProjectChanges(before: ProjectSummary, changes: ProjectUpdate): string[] {
+  return [
+    changes.name !== undefined && changes.name !== before.name ? `renamed from ${before.name}` : null,
+    changes.site !== undefined && changes.site !== before.site ? `site now ${changes.site || 'blank'}` : null,
+    changes.archived !== undefined && changes.archived !== before.archived ? (changes.archived ? 'archived' : 'taken out of the archive') : null,
+  ].filter((said): said is string => said !== null);
+}
+
+export async function updateProject(teamId: string, actor: AuditActor, projectId: string, changes: ProjectUpdate): Promise<ProjectSummary> {
   if (!isId(projectId)) throw notFound('That project');
   const row = await Project.findOne({ where: { teamId, id: projectId } });
   if (!row) throw notFound('That project');
-  await row.update(changes);
-  return toSummary(row);
+  const said = describeProjectChanges(toSummary(row), changes);
+  return sequelize.transaction(async (transaction) => {
+    await row.update(changes, { transaction });
+    if (said.length > 0) await recordAudit({ teamId, actor, action: 'project.changed', subject: `${row.name}: ${said.join(', ')}` }, transaction);
+    return toSummary(row);
+  });
 }

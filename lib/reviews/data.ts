@@ -1,23 +1,35 @@
-// The review of a revision: one decision per row, then the reviewer finishes it.
+// The review of a revision: the engineer checks each row or raises a query on it, then finishes
+// the review by stamping an outcome with an overall note.
+import { Op, type Transaction } from 'sequelize';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
+import { recordAudit } from '@/lib/audit/record';
 import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
 import { toRevisionSummary } from '@/lib/revisions/data';
 import { revisionPath } from '@/lib/revisions/links';
-import { reviewRows } from '@/lib/revisions/rows';
-import { REVISION_STATE_LABELS } from '@/lib/revisions/states';
+import { reviewRows, type ReviewRow } from '@/lib/revisions/rows';
+import { REVISION_STATE_LABELS, revisionStateLabel, type ReviewOutcome } from '@/lib/revisions/states';
 import type { RevisionExtras, RevisionSummary } from '@/lib/revisions/types';
 import type { RunResult } from '@/lib/plans/results';
 import { assertId } from '@/lib/ids';
-import { ReviewDecision, Revision } from '@/models';
+import { Comment, ReviewDecision, Revision } from '@/models';
 import { DECISION_LABELS, type Decision } from './decisions';
-import { tallyReview, type ReviewTally } from './outcome';
-import type { decisionSchema } from './schemas';
+import { isClearRow, outcomeRefusal, tallyReview, type RaisedQuery, type ReviewTally } from './outcome';
+import type { decisionSchema, finishReviewSchema } from './schemas';
 import type { z } from 'zod';
 
 export interface DecisionView { target: string; decision: Decision; note: string; reviewerName: string; at: string }
 
-async function revisionInTeam(teamId: string, revisionId: string, lock?: { transaction: import('sequelize').Transaction }): Promise<Revision> {
+export type { RaisedQuery };
+
+export interface FinishedReview {
+  revision: RevisionSummary;
+  tally: ReviewTally;
+  submittedById: string | null;
+  queries: RaisedQuery[];
+}
+
+async function revisionInTeam(teamId: string, revisionId: string, lock?: { transaction: Transaction }): Promise<Revision> {
   assertId(revisionId, 'That revision');
   const row = await Revision.findOne({ where: { id: revisionId, teamId }, ...(lock ? { transaction: lock.transaction, lock: lock.transaction.LOCK.UPDATE } : {}) });
   if (!row) throw notFound('That revision');
@@ -31,8 +43,27 @@ function assertOpen(row: Revision): void {
   }
 }
 
-function rowsOf(row: Revision) {
+function rowsOf(row: Revision): ReviewRow[] {
   return reviewRows(row.analysis as RunResult[], (row.extras ?? {}) as RevisionExtras);
+}
+
+function rowName(row: ReviewRow): string {
+  return `${row.runName ? `${row.runName}, ` : ''}${row.label}`;
+}
+
+// Rows someone left an open remark on (a comment on the row that nobody has closed out yet).
+async function openRemarkTargets(revisionId: string, transaction?: Transaction): Promise<Set<string>> {
+  const rows = await Comment.findAll({ where: { revisionId, parentId: null, resolvedAt: null, target: { [Op.ne]: null } }, attributes: ['target'], transaction });
+  return new Set(rows.map((row) => row.target!));
+}
+
+async function decisionsOf(revisionId: string, transaction?: Transaction): Promise<Map<string, ReviewDecision>> {
+  const rows = await ReviewDecision.findAll({ where: { revisionId }, transaction });
+  return new Map(rows.map((row) => [row.target, row]));
+}
+
+function tallyOf(rows: readonly ReviewRow[], decisions: ReadonlyMap<string, ReviewDecision>, openRemarks: ReadonlySet<string>): ReviewTally {
+  return tallyReview(rows, new Map([...decisions].map(([target, row]) => [target, row.decision as Decision])), openRemarks);
 }
 
 export async function listDecisions(teamId: string, revisionId: string): Promise<DecisionView[]> {
@@ -50,32 +81,74 @@ export async function decideRow(teamId: string, actor: ActivityActor, revisionId
     const [saved] = await ReviewDecision.upsert({
       revisionId, target: input.target, decision: input.decision, note: input.note, reviewerId: actor.id, reviewerName: actor.name,
     }, { transaction, conflictFields: ['revision_id', 'target'] as never });
-    await recordActivity({
-      teamId, planId: revision.planId, actor, kind: 'review.decided',
-      summary: `${DECISION_LABELS[input.decision]} ${row.runName ? `${row.runName}, ` : ''}${row.label} in revision ${revision.number}${input.note ? `: ${input.note}` : ''}`,
-      link: revisionPath(revision.planId, revision.number),
-    }, transaction);
+    const summary = `${DECISION_LABELS[input.decision]}: ${rowName(row)} in revision ${revision.number}${input.note ? ` (${input.note})` : ''}`;
+    await recordActivity({ teamId, planId: revision.planId, actor, kind: 'review.decided', summary, link: revisionPath(revision.planId, revision.number) }, transaction);
+    await recordAudit({ teamId, actor, action: input.decision === 'query' ? 'review.query_raised' : 'review.row_checked', subject: `${revision.planName}: ${summary}` }, transaction);
     return { target: saved.target, decision: saved.decision as Decision, note: saved.note, reviewerName: saved.reviewerName, at: saved.updatedAt.toISOString() };
+  });
+}
+
+// Checks, in one step, every row not yet marked that the analysis did not mark at risk and that
+// carries no open remark. Rows near a fan tone, risk flags and rows with a query stay for the engineer.
+export async function checkClearRows(teamId: string, actor: ActivityActor, revisionId: string): Promise<{ checked: number; tally: ReviewTally }> {
+  return sequelize.transaction(async (transaction) => {
+    const revision = await revisionInTeam(teamId, revisionId, { transaction });
+    assertOpen(revision);
+    const rows = rowsOf(revision);
+    const decisions = await decisionsOf(revisionId, transaction);
+    const openRemarks = await openRemarkTargets(revisionId, transaction);
+    const clear = rows.filter((row) => !decisions.has(row.target) && isClearRow(row, openRemarks));
+    if (clear.length > 0) {
+      await ReviewDecision.bulkCreate(
+        clear.map((row) => ({ revisionId, target: row.target, decision: 'checked', note: '', reviewerId: actor.id, reviewerName: actor.name })),
+        { transaction, ignoreDuplicates: true },
+      );
+      const summary = `${clear.length} clear ${clear.length === 1 ? 'row' : 'rows'} checked in revision ${revision.number}`;
+      await recordActivity({ teamId, planId: revision.planId, actor, kind: 'review.decided', summary, link: revisionPath(revision.planId, revision.number) }, transaction);
+      await recordAudit({ teamId, actor, action: 'review.rows_checked', subject: `${revision.planName}: ${summary}` }, transaction);
+    }
+    const tally = tallyOf(rows, await decisionsOf(revisionId, transaction), openRemarks);
+    return { checked: clear.length, tally };
   });
 }
 
 export async function reviewTally(teamId: string, revisionId: string): Promise<ReviewTally> {
   const revision = await revisionInTeam(teamId, revisionId);
-  const decisions = await ReviewDecision.findAll({ where: { revisionId } });
-  return tallyReview(rowsOf(revision), new Map(decisions.map((row) => [row.target, row.decision as Decision])));
+  return tallyOf(rowsOf(revision), await decisionsOf(revisionId), await openRemarkTargets(revisionId));
 }
 
-export async function finishReview(teamId: string, actor: ActivityActor, revisionId: string): Promise<{ revision: RevisionSummary; tally: ReviewTally; submittedById: string | null }> {
+/** The queries raised on a revision's rows, in table order, for the finishing summary and the mail. */
+export async function raisedQueries(teamId: string, revisionId: string): Promise<RaisedQuery[]> {
+  const revision = await revisionInTeam(teamId, revisionId);
+  const decisions = await decisionsOf(revisionId);
+  return queriesOf(rowsOf(revision), decisions);
+}
+
+function queriesOf(rows: readonly ReviewRow[], decisions: ReadonlyMap<string, ReviewDecision>): RaisedQuery[] {
+  return rows.flatMap((row) => {
+    const decision = decisions.get(row.target);
+    return decision?.decision === 'query' ? [{ row: rowName(row), note: decision.note }] : [];
+  });
+}
+
+export async function finishReview(teamId: string, actor: ActivityActor, revisionId: string, input: z.infer<typeof finishReviewSchema>): Promise<FinishedReview> {
   return sequelize.transaction(async (transaction) => {
     const revision = await revisionInTeam(teamId, revisionId, { transaction });
     assertOpen(revision);
-    const decisions = await ReviewDecision.findAll({ where: { revisionId }, transaction });
-    const tally = tallyReview(rowsOf(revision), new Map(decisions.map((row) => [row.target, row.decision as Decision])));
-    await revision.update({ state: tally.outcome, reviewedById: actor.id, reviewedByName: actor.name, reviewedAt: new Date() }, { transaction });
-    const words = tally.outcome === 'approved'
-      ? `Revision ${revision.number} approved (${tally.accepted} rows accepted)`
-      : `Revision ${revision.number} returned: ${tally.flagged} flagged, ${tally.open} not settled`;
-    await recordActivity({ teamId, planId: revision.planId, actor, kind: 'review.finished', summary: words, link: revisionPath(revision.planId, revision.number) }, transaction);
-    return { revision: toRevisionSummary(revision), tally, submittedById: revision.submittedById };
+    const rows = rowsOf(revision);
+    const decisions = await decisionsOf(revisionId, transaction);
+    const tally = tallyOf(rows, decisions, await openRemarkTargets(revisionId, transaction));
+    const refusal = outcomeRefusal(tally, input.outcome, input.note);
+    if (refusal) throw new AppError('bad_input', refusal.message, { field: refusal.field });
+    await revision.update({ state: input.outcome, reviewNote: input.note, reviewedById: actor.id, reviewedByName: actor.name, reviewedAt: new Date() }, { transaction });
+    const summary = finishedSummary(revision.number, input.outcome, tally);
+    await recordActivity({ teamId, planId: revision.planId, actor, kind: 'review.finished', summary: input.note ? `${summary}. Note: ${input.note}` : summary, link: revisionPath(revision.planId, revision.number) }, transaction);
+    await recordAudit({ teamId, actor, action: 'review.finished', subject: `${revision.planName}: ${summary}` }, transaction);
+    return { revision: toRevisionSummary(revision), tally, submittedById: revision.submittedById, queries: queriesOf(rows, decisions) };
   });
+}
+
+function finishedSummary(number: number, outcome: ReviewOutcome, tally: ReviewTally): string {
+  const queries = tally.queries === 1 ? '1 query' : `${tally.queries} queries`;
+  return `Revision ${number}: ${revisionStateLabel(outcome).toLowerCase()} (${tally.checked} of ${tally.rows} rows checked, ${queries}${tally.unchecked > 0 ? `, ${tally.unchecked} not checked` : ''})`;
 }

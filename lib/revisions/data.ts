@@ -9,6 +9,7 @@ import type { RunResult } from '@/lib/plans/results';
 import { assertId } from '@/lib/ids';
 import { Plan, Project, Revision, Upload } from '@/models';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
+import { recordAudit } from '@/lib/audit/record';
 import { freezeExtras } from './freeze-extras';
 import { revisionPath } from './links';
 import { isRevisionState, type RevisionState } from './states';
@@ -22,7 +23,7 @@ export function toRevisionSummary(row: Revision): RevisionSummary {
   return {
     id: row.id, planId: row.planId, number: row.number, planVersion: row.planVersion, state: stateOf(row), note: row.note,
     contentHash: row.document ? contentHash(planDocumentSchema.parse(row.document), row.metresPerPixel) : null,
-    submittedByName: row.submittedByName, reviewedByName: row.reviewedByName, reviewedAt: row.reviewedAt?.toISOString() ?? null,
+    submittedByName: row.submittedByName, reviewedByName: row.reviewedByName, reviewedAt: row.reviewedAt?.toISOString() ?? null, reviewNote: row.reviewNote ?? '',
     createdAt: row.createdAt.toISOString(),
   };
 }
@@ -47,9 +48,9 @@ export async function submitRevision(teamId: string, actor: ActivityActor, planI
       document: plan.document, analysis, extras, backgroundUploadId: plan.background?.id ?? null, state: 'waiting', note,
       submittedById: actor.id, submittedByName: actor.name, reviewedById: null, reviewedByName: null, reviewedAt: null,
     }, { transaction });
-    await recordActivity({
-      teamId, planId, actor, kind: 'revision.submitted', summary: `Revision ${number} submitted for review${note ? `: ${note}` : ''}`, link: revisionPath(planId, number),
-    }, transaction);
+    const summary = `Revision ${number} submitted for review${note ? `: ${note}` : ''}`;
+    await recordActivity({ teamId, planId, actor, kind: 'revision.submitted', summary, link: revisionPath(planId, number) }, transaction);
+    await recordAudit({ teamId, actor, action: 'revision.submitted', subject: `${plan.project.name}, ${plan.name}: ${summary}` }, transaction);
     return toRevisionSummary(row);
   });
 }

@@ -9,6 +9,8 @@ export interface ReviewRow {
   runName: string;
   label: string;
   frequencyHz: number | null;
+  /** The analysis marked it: a resonance near a fan tone, or a risk flag. Such rows are checked one by one. */
+  atRisk: boolean;
 }
 
 export function resonanceTarget(runId: string, order: number): string {
@@ -26,12 +28,13 @@ export function reviewRows(analysis: readonly RunResult[], extras: RevisionExtra
       rows.push({
         target: resonanceTarget(run.runId, resonance.order), kind: 'resonance', runName: run.name,
         label: `Order ${resonance.order}, ${resonance.frequencyHz.toFixed(1)} Hz`, frequencyHz: resonance.frequencyHz,
+        atRisk: (run.nearFanTone[resonance.order] ?? null) !== null,
       });
     }
   }
   for (const risk of extras.risks ?? []) {
     const run = analysis.find((candidate) => candidate.runId === risk.runId);
-    rows.push({ target: riskTarget(risk.id), kind: 'risk', runName: run?.name ?? '', label: risk.label, frequencyHz: null });
+    rows.push({ target: riskTarget(risk.id), kind: 'risk', runName: run?.name ?? '', label: risk.label, frequencyHz: null, atRisk: true });
   }
   return rows;
 }

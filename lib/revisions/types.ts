@@ -37,6 +37,8 @@ export interface RevisionSummary {
   submittedByName: string;
   reviewedByName: string | null;
   reviewedAt: string | null;
+  /** The engineer's overall note when finishing the review ('' before, or when none was written). */
+  reviewNote: string;
   createdAt: string;
 }
 

@@ -7,7 +7,7 @@ import { planLabels, type PlanLabels } from '@/lib/plan/labels';
 import { roomRectPx } from '@/lib/plan/rooms/room-input';
 import type { RunResult } from '@/lib/plans/results';
 import { resonanceTarget } from '@/lib/revisions/rows';
-import { revisionStateLabel } from '@/lib/revisions/states';
+import { isAcceptedForIssue, revisionStateLabel } from '@/lib/revisions/states';
 import type { RevisionView, RiskRow, RoomRow, TreatmentRow } from '@/lib/revisions/types';
 import type { DecisionView } from '@/lib/reviews/data';
 import { DECISION_LABELS } from '@/lib/reviews/decisions';
@@ -125,7 +125,7 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
   const all = analysis?.resonances ?? [];
   const keep = (resonance: (typeof all)[number], index: number) => index < PRINTED_LOWEST_ORDERS
     || (result.nearFanTone[resonance.order] ?? null) !== null
-    || decisions.get(resonanceTarget(result.runId, resonance.order))?.decision === 'flagged';
+    || decisions.get(resonanceTarget(result.runId, resonance.order))?.decision === 'query';
   const printed = all.filter(keep);
   const left = all.filter((resonance, index) => !keep(resonance, index));
   const terminations = Object.entries(run?.terminations ?? {}).map(([nodeId, termination]: [string, Termination]) => ({
@@ -176,7 +176,7 @@ export function scheduleContent(input: {
     preparedBy: revision.submittedByName,
     reviewedBy: revision.reviewedByName ?? 'Not reviewed yet',
     stateLabel: revisionStateLabel(revision.state),
-    draft: revision.state !== 'approved',
+    draft: !isAcceptedForIssue(revision.state),
     issuedBy: input.issuedBy,
     figure: planFigure(revision, input.image),
     runs: revision.analysis.map((result) => runOf(revision, result, decisions)),

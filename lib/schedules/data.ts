@@ -3,9 +3,11 @@
 // back the issued bytes.
 import { createHash } from 'node:crypto';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
+import { recordAudit } from '@/lib/audit/record';
 import { AppError, notFound } from '@/lib/errors';
 import { getRevisionById } from '@/lib/revisions/data';
 import { schedulePath } from '@/lib/revisions/links';
+import { isAcceptedForIssue } from '@/lib/revisions/states';
 import type { RevisionView } from '@/lib/revisions/types';
 import { listDecisions } from '@/lib/reviews/data';
 import { getObject, putObject } from '@/lib/storage/object-store';
@@ -98,10 +100,10 @@ export async function renderAskedSchedule(teamId: string, scheduleId: string): P
     { where: { id: row.id, status: ['rendering', 'failed'] } },
   );
   if (marked === 0) return 'already issued';
-  await recordActivity({
-    teamId, planId: revision.planId, actor: { id: row.issuedById ?? null, name: row.issuedByName }, kind: 'schedule.issued',
-    summary: `Treatment schedule issued for revision ${revision.number}${revision.state === 'approved' ? '' : ' (draft, not approved)'}`, link: schedulePath(revision.planId, revision.number),
-  });
+  const actor = { id: row.issuedById ?? null, name: row.issuedByName };
+  const summary = `Treatment schedule issued for revision ${revision.number}${isAcceptedForIssue(revision.state) ? '' : ' (draft, not accepted)'}`;
+  await recordActivity({ teamId, planId: revision.planId, actor, kind: 'schedule.issued', summary, link: schedulePath(revision.planId, revision.number) });
+  await recordAudit({ teamId, actor: actor.id ? { id: actor.id, name: actor.name } : null, action: 'schedule.issued', subject: `${revision.project.name}, ${revision.planName}: ${summary} (SHA-256 ${sha256.slice(0, 12)}…)` });
   return 'issued';
 }
 

@@ -54,8 +54,9 @@ function examples(f: Fixtures): Record<string, { body: unknown; params?: Record<
     // On a plan with no runs, so that no generated body can make the engine run.
     'POST /api/v1/plans/[planId]/treatments/evaluate': { body: { roomId: null, runId: 'run-1', flagId: 'resonance-near-tone:run-1:1' }, params: { planId: f.emptyPlanId } },
     'POST /api/v1/plans/[planId]/revisions': { body: { note: 'For review' }, params: { planId: f.emptyPlanId } },
-    'PUT /api/v1/revisions/[revisionId]/decisions': { body: { target: f.rowTarget, decision: 'flagged', note: 'Near the blade-pass tone' }, params: { revisionId: f.revisionId } },
-    'POST /api/v1/revisions/[revisionId]/review': { body: {}, params: { revisionId: f.revisionId } },
+    'PUT /api/v1/revisions/[revisionId]/decisions': { body: { target: f.rowTarget, decision: 'query', note: 'Near the blade-pass tone' }, params: { revisionId: f.revisionId } },
+    'POST /api/v1/revisions/[revisionId]/clear-rows': { body: {}, params: { revisionId: f.revisionId } },
+    'POST /api/v1/revisions/[revisionId]/review': { body: { outcome: 'revise_resubmit', note: 'Retune the riser' }, params: { revisionId: f.revisionId } },
     'POST /api/v1/comments': { body: { planId: f.emptyPlanId, revisionId: null, parentId: null, xPx: 10, yPx: 20, target: null, body: 'Hum near the grille' } },
     'PATCH /api/v1/comments/[commentId]': { body: { resolved: true }, params: { commentId: f.commentId } },
     'PUT /api/v1/team/billing/seats': { body: { paidSeats: 1 } },

@@ -60,6 +60,7 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'GET /api/v1/revisions/[revisionId]': 'plan.read',
   'PUT /api/v1/revisions/[revisionId]/decisions': 'review.write',
   'POST /api/v1/revisions/[revisionId]/review': 'review.write',
+  'POST /api/v1/revisions/[revisionId]/clear-rows': 'review.write',
   'GET /api/v1/revisions/[revisionId]/schedules': 'schedule.read',
   'POST /api/v1/revisions/[revisionId]/schedules': 'schedule.issue',
   'GET /api/v1/revisions/[revisionId]/schedule-preview': 'schedule.read',

@@ -35,7 +35,7 @@ beforeAll(async () => {
   planId = await planWithRuns(t, project.id, 2, 'Level 3 supply');
   // A drawing behind the runs, so the plan page draws the stored image too.
   const upload = await storePlanBackground(t.team.id, t.members.acoustician.id, 'level-3.png', tinyPng(4000, 3000));
-  await setPlanBackground(t.team.id, planId, upload.id);
+  await setPlanBackground(t.team.id, { id: t.members.acoustician.id, name: t.members.acoustician.name }, planId, upload.id);
   revisionId = (await submitted(t, planId)).id;
 });
 afterAll(async () => { await sequelize.close(); });
@@ -104,7 +104,7 @@ describe('treatment schedule', () => {
       teamId: t.team.id, uploadedById: t.members.acoustician.id, storageKey, fileName: 'gallery.png', contentType: 'image/png',
       bytes: bomb.byteLength, sha256: createHash('sha256').update(bomb).digest('hex'), widthPx: 30000, heightPx: 30000,
     });
-    await setPlanBackground(t.team.id, legacyPlanId, legacy.id);
+    await setPlanBackground(t.team.id, { id: t.members.acoustician.id, name: t.members.acoustician.name }, legacyPlanId, legacy.id);
     const revision = await submitted(t, legacyPlanId);
     const { bytes } = await previewSchedule(t.team.id, revision.id);
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
@@ -118,7 +118,7 @@ describe('treatment schedule', () => {
     const webp = await sharp({ create: { width: 1600, height: 1200, channels: 3, background: '#c8c8c8' } }).webp().toBuffer();
     const upload = await storePlanBackground(t.team.id, t.members.acoustician.id, 'level-1.webp', new Uint8Array(webp));
     expect(upload.contentType).toBe('image/webp');
-    await setPlanBackground(t.team.id, webpPlanId, upload.id);
+    await setPlanBackground(t.team.id, { id: t.members.acoustician.id, name: t.members.acoustician.name }, webpPlanId, upload.id);
     const revision = await submitted(t, webpPlanId);
     const { bytes } = await previewSchedule(t.team.id, revision.id);
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });

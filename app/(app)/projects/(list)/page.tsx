@@ -5,6 +5,7 @@ import { ProjectList } from '@/components/projects/project-list';
 import { requireActor } from '@/lib/auth/current';
 import { can } from '@/lib/permissions';
 import { listProjects } from '@/lib/projects/data';
+import { listWaitingReviews, waitingByProject } from '@/lib/reviews/waiting';
 
 export const metadata: Metadata = { title: 'Projects' };
 
@@ -17,7 +18,7 @@ export default async function ProjectsPage() {
       </EmptyState>
     );
   }
-  const projects = await listProjects(actor.team.teamId);
+  const [projects, waiting] = await Promise.all([listProjects(actor.team.teamId), listWaitingReviews(actor.team.teamId)]);
   const mayCreate = can(actor.team.role, 'project.create');
   return (
     <div className="space-y-6">
@@ -38,7 +39,7 @@ export default async function ProjectsPage() {
             : 'When an acoustician in your team creates a project, it appears here.'}
         </EmptyState>
       ) : (
-        <ProjectList projects={projects} />
+        <ProjectList projects={projects} waiting={waitingByProject(waiting, { userId: actor.user.id, mayReview: can(actor.team.role, 'review.write') })} />
       )}
     </div>
   );

@@ -7,13 +7,15 @@ import { ProjectActions } from '@/components/projects/project-actions';
 import { projectOfPage } from '@/app/(app)/records-of-page';
 import { can } from '@/lib/permissions';
 import { listPlans } from '@/lib/plans/data';
+import { listWaitingReviews, waitingByPlan } from '@/lib/reviews/waiting';
 
 export const metadata: Metadata = { title: 'Project' };
 
 export default async function ProjectPage({ params }: { params: Promise<{ projectId: string }> }) {
   const { projectId } = await params;
-  const { team, project } = await projectOfPage(projectId);
-  const plans = await listPlans(team.teamId, projectId, { includeArchived: true });
+  const { actor, team, project } = await projectOfPage(projectId);
+  const [plans, reviews] = await Promise.all([listPlans(team.teamId, projectId, { includeArchived: true }), listWaitingReviews(team.teamId)]);
+  const waiting = waitingByPlan(reviews.filter((review) => review.projectId === project.id), { userId: actor.user.id, mayReview: can(team.role, 'review.write') });
   const mayEdit = can(team.role, 'plan.edit');
   const active = plans.filter((plan) => !plan.archived);
   const archived = plans.filter((plan) => plan.archived);
@@ -37,7 +39,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
             : 'When an acoustician adds a plan, it appears here.'}
         </EmptyState>
       ) : (
-        <PlanList plans={active} label="Plans" />
+        <PlanList plans={active} label="Plans" waiting={waiting} />
       )}
       {archived.length > 0 && <PlanList plans={archived} label="Archived plans" />}
     </div>

@@ -1,3 +1,4 @@
+import { auditActorOf } from '@/lib/audit/record';
 import { json, route } from '@/lib/http/route';
 import { notFound } from '@/lib/errors';
 import { getProject, updateProject } from '@/lib/projects/data';
@@ -11,7 +12,7 @@ export const GET = route<Params>({ access: 'project.read' }, async ({ team, para
   return json({ project });
 });
 
-export const PATCH = route<Params>({ access: 'project.update', maxBodyBytes: 8192 }, async ({ team, params, readJson }) => {
+export const PATCH = route<Params>({ access: 'project.update', maxBodyBytes: 8192 }, async ({ team, actor, params, readJson }) => {
   const changes = await readJson(projectUpdateSchema);
-  return json({ project: await updateProject(team!.teamId, params.projectId, changes) });
+  return json({ project: await updateProject(team!.teamId, auditActorOf(actor!), params.projectId, changes) });
 });

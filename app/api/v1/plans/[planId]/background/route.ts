@@ -1,3 +1,4 @@
+import { auditActorOf } from '@/lib/audit/record';
 import { AppError } from '@/lib/errors';
 import { json, route } from '@/lib/http/route';
 import { getPlan, setPlanBackground } from '@/lib/plans/data';
@@ -17,12 +18,12 @@ export const POST = route<Params>({ access: 'plan.edit', maxBodyBytes: MAX_UPLOA
   if (!(file instanceof File)) throw new AppError('bad_input', 'Choose a file to upload.', { field: 'file' });
   if (file.size > MAX_UPLOAD_BYTES) throw new AppError('too_large', TOO_LARGE, { field: 'file' });
   const upload = await storePlanBackground(team!.teamId, actor!.user.id, file.name, new Uint8Array(await file.arrayBuffer()));
-  await setPlanBackground(team!.teamId, params.planId, upload.id);
+  await setPlanBackground(team!.teamId, auditActorOf(actor!), params.planId, upload.id);
   return json({ upload }, 201);
 });
 
 // Back to a blank grid.
-export const DELETE = route<Params>({ access: 'plan.edit' }, async ({ team, params }) => {
-  await setPlanBackground(team!.teamId, params.planId, null);
+export const DELETE = route<Params>({ access: 'plan.edit' }, async ({ team, actor, params }) => {
+  await setPlanBackground(team!.teamId, auditActorOf(actor!), params.planId, null);
   return json({ background: null });
 });

@@ -18,6 +18,6 @@ export const POST = route<Params>({ access: 'plan.edit' }, async ({ team, actor,
   const who = auditActorOf(actor!);
   const revision = await submitRevision(team!.teamId, who, params.planId, input.note);
   const plan = await getPlan(team!.teamId, params.planId);
-  await announceReviewRequested(team!.teamId, who, plan.name, revision);
+  await announceReviewRequested(team!.teamId, who, { projectName: plan.project.name, planName: plan.name }, revision);
   return json({ revision }, 201);
 });

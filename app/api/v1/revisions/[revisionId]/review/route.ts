@@ -7,12 +7,12 @@ import { finishReviewSchema } from '@/lib/reviews/schemas';
 
 type Params = { revisionId: string };
 
-// Finish the review: approved when every row is settled and none flagged, else returned.
-export const POST = route<Params>({ access: 'review.write' }, async ({ team, actor, params, readJson }) => {
-  await readJson(finishReviewSchema);
+// Finish the review: stamp the chosen outcome and the overall note, then mail the submitter.
+export const POST = route<Params>({ access: 'review.write', maxBodyBytes: 16 * 1024 }, async ({ team, actor, params, readJson }) => {
+  const input = await readJson(finishReviewSchema);
   const who = auditActorOf(actor!);
-  const { revision, tally, submittedById } = await finishReview(team!.teamId, who, params.revisionId);
-  const view = await getRevisionById(team!.teamId, revision.id);
-  await announceReviewFinished(submittedById, who, view.planName, revision);
-  return json({ revision, tally });
+  const finished = await finishReview(team!.teamId, who, params.revisionId, input);
+  const view = await getRevisionById(team!.teamId, finished.revision.id);
+  await announceReviewFinished(finished.submittedById, who, { projectName: view.project.name, planName: view.planName }, finished.revision, finished.queries);
+  return json({ revision: finished.revision, tally: finished.tally });
 });

@@ -7,6 +7,7 @@ import { ScheduleList } from '@/components/schedules/schedule-list';
 import { revisionOfPage } from '@/app/(app)/records-of-page';
 import { can } from '@/lib/permissions';
 import { revisionPath } from '@/lib/revisions/links';
+import { isAcceptedForIssue } from '@/lib/revisions/states';
 import { listSchedules } from '@/lib/schedules/data';
 
 export const metadata: Metadata = { title: 'Treatment schedule' };
@@ -27,7 +28,7 @@ export default async function SchedulePage({ params }: { params: Promise<{ planI
             <h1 className="text-xl font-semibold">Treatment schedule: {revision.planName}, revision {revision.number}</h1>
             <p className="flex items-center gap-2 text-sm text-graphite-500"><RevisionStateBadge state={revision.state} /> {revision.project.name}</p>
           </div>
-          {can(team.role, 'schedule.issue') && <IssueSchedule revisionId={revision.id} approved={revision.state === 'approved'} />}
+          {can(team.role, 'schedule.issue') && <IssueSchedule revisionId={revision.id} accepted={isAcceptedForIssue(revision.state)} />}
         </div>
         <section aria-labelledby="issued-title">
           <h2 id="issued-title" className="mb-2 text-sm font-semibold text-graphite-700">Issued</h2>
