@@ -1,9 +1,10 @@
-// The work that runs off the request thread, as plain data in and out: one duct run's analysis (with
-// the pressure envelopes asked for), the analysis of a plan version, the envelopes of a plan version's
+// The work that runs off the request thread, as plain data in and out: one duct run's analysis (the
+// answer's JSON text, with the pressure envelopes asked for), the analysis of a plan version, the envelopes of a plan version's
 // resonances, and the candidate treatments of one flag. Pure: the worker
 // threads run these; errors come back as plain data so their kind survives the thread boundary.
 import { analyzeRun, type RunInput } from '@/lib/acoustic';
 import { NO_ENVELOPES, type EnvelopeRequest } from '@/lib/analysis/envelope-request';
+import { roundedRunAnalysis } from '@/lib/analysis/round-answer';
 import { withEnvelopesAsked } from '@/lib/analysis/select-envelopes';
 import { AppError, type ErrorCode } from '@/lib/errors';
 import type { PlanDocument } from '@/lib/plan/document';
@@ -26,7 +27,9 @@ export type TaskOutcome = { ok: true; value: unknown } | { ok: false; error: Tas
 function perform(task: ComputeTask): unknown {
   switch (task.kind) {
     case 'analyze-run':
-      return withEnvelopesAsked(analyzeRun(task.input as RunInput), task.envelopes ?? NO_ENVELOPES);
+      // The answer's JSON text, made here: a string crosses to the server's thread as one copy, where the
+      // objects of thousands of envelope samples would be cloned one by one.
+      return JSON.stringify(roundedRunAnalysis(withEnvelopesAsked(analyzeRun(task.input as RunInput), task.envelopes ?? NO_ENVELOPES)));
     case 'plan-analysis':
       return computePlanAnalysis(task.document, task.metresPerPixel);
     case 'plan-envelopes':

@@ -1,10 +1,8 @@
 import { z } from 'zod';
-import type { RunAnalysis } from '@/lib/acoustic';
 import { analyzeEnvelopeRequest } from '@/lib/analysis/envelope-request';
-import { roundedRunAnalysis } from '@/lib/analysis/round-answer';
 import { MAX_ANALYZE_BODY_BYTES, assertRunSize } from '@/lib/analysis/run-limits';
 import { compute } from '@/lib/compute/pool';
-import { json, route } from '@/lib/http/route';
+import { jsonText, route } from '@/lib/http/route';
 
 // POST /api/v1/analyze[?include=envelopes | ?envelopes=<orders>]
 //
@@ -29,6 +27,6 @@ export const POST = route({ access: 'analysis.run', maxBodyBytes: MAX_ANALYZE_BO
   const envelopes = analyzeEnvelopeRequest(request.url);
   const input = await readJson(z.unknown());
   assertRunSize(input);
-  const analysis = await compute<RunAnalysis>({ kind: 'analyze-run', input, envelopes }, { reduce: "the run's length, its number of segments, or its frequency range (maxHz)" });
-  return json(roundedRunAnalysis(analysis));
+  // The compute worker keeps the envelopes asked for, rounds (lib/analysis/round-answer.ts) and serialises.
+  return jsonText(await compute<string>({ kind: 'analyze-run', input, envelopes }, { reduce: "the run's length, its number of segments, or its frequency range (maxHz)" }));
 });
