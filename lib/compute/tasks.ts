@@ -1,7 +1,7 @@
 // The work that runs off the request thread, as plain data in and out: one duct run's analysis (the
-// answer's JSON text, with the pressure envelopes asked for), the analysis of a plan version, the envelopes of a plan version's
-// resonances, and the candidate treatments of one flag. Pure: the worker
-// threads run these; errors come back as plain data so their kind survives the thread boundary.
+// answer's JSON text, with the pressure envelopes asked for), the analysis of a plan version, the
+// envelopes asked for of a plan version's resonances, and the candidate treatments of one flag. Pure:
+// the worker threads run these; errors come back as plain data so their kind survives the thread boundary.
 import { analyzeRun, type RunInput } from '@/lib/acoustic';
 import { NO_ENVELOPES, type EnvelopeRequest } from '@/lib/analysis/envelope-request';
 import { roundedRunAnalysis } from '@/lib/analysis/round-answer';
