@@ -30,6 +30,9 @@ ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli
 step "Load on loopback (concurrency 8, an oversized analysis in flight)"
 ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" ANTINODE_BENCH_SERVER_PID="$SERVER_PID" node node_modules/tsx/dist/cli.mjs bench/load/run.ts || fail "the load benchmark failed"
 
+step "Analysis answers (the 100-segment run, concurrency 8, route and bare handler)"
+ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/load/analysis-answers.ts || fail "the analysis answer benchmark failed"
+
 step "Treatment schedule PDF"
 # @react-pdf/renderer ships ES modules only, so the benchmark is bundled (packages stay external) and run as ESM.
 node_modules/.bin/esbuild bench/schedule/run.ts --bundle --platform=node --format=esm --packages=external --jsx=automatic --log-level=warning --outfile="$DATA_DIR/bench-schedule.mjs" || fail "the schedule benchmark did not build"

@@ -27,6 +27,7 @@ import { ToolStrip } from './tool-strip';
 import { mayUseTool, type ToolName } from './tools';
 import { useAutosave } from './use-autosave';
 import { gridSpacingPx, useCanvasTools } from './use-canvas-tools';
+import { useModeEnvelope } from './use-mode-envelope';
 import { usePlanResults } from './use-plan-results';
 import { usePlanRisks } from './use-plan-risks';
 import { RiskDrawer } from './risk/risk-drawer';
@@ -84,7 +85,10 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
 
   const activeRunId = model.state.activeRunId ?? doc.runs[0]?.id ?? null;
   const activeResult = results.data?.runs.find((run) => run.runId === activeRunId) ?? results.data?.runs[0] ?? null;
-  const resonance = activeResult?.analysis?.resonances.find((candidate) => candidate.order === selectedOrder) ?? null;
+  const listed = activeResult?.analysis?.resonances.find((candidate) => candidate.order === selectedOrder) ?? null;
+  const envelope = useModeEnvelope(plan.id, results.data?.version ?? null, activeResult?.runId ?? null, listed ? listed.order : null);
+  // The overlay draws from the nodes and antinodes until the engine's envelope of this resonance arrives.
+  const resonance = useMemo(() => (listed && envelope.data ? { ...listed, pressureEnvelope: envelope.data } : listed), [listed, envelope.data]);
   useEffect(() => setSelectedOrder(null), [activeRunId]);
 
   // A tool that would change the plan is refused, with the reason, when the person may only read it.

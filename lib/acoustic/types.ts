@@ -55,7 +55,7 @@ export interface Resonance {
   dampingHz: number;
   /**
    * |p(x)| / max |p| along the main path (positionM from the start end), from the closed-form standing
-   * wave in each segment: every segment boundary plus at least 12 samples per half wavelength, about 400 at most.
+   * wave in each segment: every segment boundary plus 8 samples per half wavelength. Computed when first read.
    */
   pressureEnvelope?: PressureEnvelopePoint[];
 }

@@ -14,5 +14,6 @@ export const COMPUTE_HEAP_MB = Number(process.env.ANTINODE_COMPUTE_HEAP_MB ?? 25
 export const COMPUTE_TIME_LIMIT_MS = {
   'analyze-run': Number(process.env.ANTINODE_RUN_TIME_LIMIT_MS ?? 5000),
   'plan-analysis': Number(process.env.ANTINODE_PLAN_TIME_LIMIT_MS ?? 15000),
+  'plan-envelopes': Number(process.env.ANTINODE_PLAN_TIME_LIMIT_MS ?? 15000),
   'treatment-options': Number(process.env.ANTINODE_TREATMENT_TIME_LIMIT_MS ?? 10000),
 } as const;

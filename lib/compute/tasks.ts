@@ -1,18 +1,24 @@
-// The work that runs off the request thread, as plain data in and out: one duct run's analysis,
-// the analysis of a plan version, and the candidate treatments of one flag. Pure: the worker
-// threads run these; errors come back as plain data so their kind survives the thread boundary.
+// The work that runs off the request thread, as plain data in and out: one duct run's analysis (the
+// answer's JSON text, with the pressure envelopes asked for), the analysis of a plan version, the
+// envelopes asked for of a plan version's resonances, and the candidate treatments of one flag. Pure:
+// the worker threads run these; errors come back as plain data so their kind survives the thread boundary.
 import { analyzeRun, type RunInput } from '@/lib/acoustic';
+import { NO_ENVELOPES, type EnvelopeRequest } from '@/lib/analysis/envelope-request';
+import { roundedRunAnalysis } from '@/lib/analysis/round-answer';
+import { withEnvelopesAsked } from '@/lib/analysis/select-envelopes';
 import { AppError, type ErrorCode } from '@/lib/errors';
 import type { PlanDocument } from '@/lib/plan/document';
 import { PlanError } from '@/lib/plan/errors';
 import { computePlanAnalysis } from '@/lib/plans/analysis/compute';
+import { planRunEnvelopes } from '@/lib/plans/run-envelopes';
 import { treatmentOptionsFromAnalysis } from '@/lib/plans/treatment-options';
 import type { PlanAnalysis } from '@/lib/plans/analysis/types';
 import type { RiskTarget } from '@/lib/plans/risk-context';
 
 export type ComputeTask =
-  | { kind: 'analyze-run'; input: unknown }
+  | { kind: 'analyze-run'; input: unknown; envelopes?: EnvelopeRequest }
   | { kind: 'plan-analysis'; document: PlanDocument; metresPerPixel: number }
+  | { kind: 'plan-envelopes'; document: PlanDocument; metresPerPixel: number; runId: string | null; envelopes: EnvelopeRequest }
   | { kind: 'treatment-options'; document: PlanDocument; metresPerPixel: number; analysis: PlanAnalysis; target: RiskTarget; flagId: string };
 
 export interface TaskError { name: string; message: string; code?: ErrorCode; field?: string }
@@ -21,9 +27,13 @@ export type TaskOutcome = { ok: true; value: unknown } | { ok: false; error: Tas
 function perform(task: ComputeTask): unknown {
   switch (task.kind) {
     case 'analyze-run':
-      return analyzeRun(task.input as RunInput);
+      // The answer's JSON text, made here: a string crosses to the server's thread as one copy, where the
+      // objects of thousands of envelope samples would be cloned one by one.
+      return JSON.stringify(roundedRunAnalysis(withEnvelopesAsked(analyzeRun(task.input as RunInput), task.envelopes ?? NO_ENVELOPES)));
     case 'plan-analysis':
       return computePlanAnalysis(task.document, task.metresPerPixel);
+    case 'plan-envelopes':
+      return planRunEnvelopes(task.document, task.metresPerPixel, task.runId, task.envelopes);
     case 'treatment-options':
       return treatmentOptionsFromAnalysis(task.document, task.metresPerPixel, task.analysis, task.target, task.flagId);
   }

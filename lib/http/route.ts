@@ -44,6 +44,11 @@ export function json(data: unknown, status = 200, headers: HeadersInit = {}): Re
   return Response.json(data, { status, headers });
 }
 
+/** An answer already serialised as JSON (made off the request thread). */
+export function jsonText(text: string, status = 200): Response {
+  return new Response(text, { status, headers: { 'content-type': 'application/json' } });
+}
+
 export function errorResponse(error: unknown): Response {
   if (error instanceof AppError) {
     const headers: Record<string, string> = {};

@@ -1,6 +1,7 @@
 // The analysis of every run on a plan, computed from the document (never stored as truth
 // for a draft). A run that cannot be analysed says why instead.
-import { analyzeRun, bladePassHarmonicsHz, type Resonance, type RunAnalysis } from '@/lib/acoustic';
+import { analyzeRun, bladePassHarmonicsHz, type RunAnalysis } from '@/lib/acoustic';
+import { withoutEnvelope } from '@/lib/analysis/select-envelopes';
 import type { PlanDocument } from '@/lib/plan/document';
 import { toRunInputWithMap } from '@/lib/plan/to-run-input';
 
@@ -17,23 +18,6 @@ export interface RunResult {
 }
 
 const FAN_HARMONICS = 5;
-// Pressure envelopes travel with the lowest resonances only, thinned, to keep the answer small;
-// the editor draws the others from their nodes and antinodes.
-const ENVELOPE_ORDERS = 40;
-const ENVELOPE_POINTS = 120;
-
-function thinned<T>(points: readonly T[], most: number): T[] {
-  if (points.length <= most) return [...points];
-  const step = (points.length - 1) / (most - 1);
-  return Array.from({ length: most }, (_, index) => points[Math.round(index * step)]);
-}
-
-function forTheWire(resonance: Resonance): Resonance {
-  const { order, frequencyHz, q, bandwidthHz, antinodesM, nodesM, dampingHz } = resonance;
-  const plain: Resonance = { order, frequencyHz, q, bandwidthHz, antinodesM, nodesM, dampingHz };
-  if (order <= ENVELOPE_ORDERS && resonance.pressureEnvelope) plain.pressureEnvelope = thinned(resonance.pressureEnvelope, ENVELOPE_POINTS);
-  return plain;
-}
 const NEAR_TONE_FRACTION = 0.03;
 
 function fanTones(fan: PlanDocument['runs'][number]['fan'], maxHz: number): number[] {
@@ -48,7 +32,8 @@ export function analysePlanRun(document: PlanDocument, runId: string, metresPerP
   try {
     const { input, path } = toRunInputWithMap(document, runId, metresPerPixel);
     const computed = analyzeRun(input);
-    const analysis: RunAnalysis = { ...computed, resonances: computed.resonances.map(forTheWire) };
+    // Pressure envelopes are not kept: the results route computes the ones asked for (run-envelopes.ts).
+    const analysis: RunAnalysis = { ...computed, resonances: computed.resonances.map(withoutEnvelope) };
     const tones = fanTones(run.fan, analysis.resonances.at(-1)?.frequencyHz ?? 0);
     const nearFanTone: Record<number, number | null> = {};
     for (const resonance of analysis.resonances) {
@@ -63,6 +48,12 @@ export function analysePlanRun(document: PlanDocument, runId: string, metresPerP
     }
     throw error;
   }
+}
+
+/** A run's results without pressure envelopes (revisions frozen before envelopes came only on request carry some). */
+export function runWithoutEnvelopes(result: RunResult): RunResult {
+  if (!result.analysis) return result;
+  return { ...result, analysis: { ...result.analysis, resonances: result.analysis.resonances.map(withoutEnvelope) } };
 }
 
 export function analysePlan(document: PlanDocument, metresPerPixel: number): RunResult[] {

@@ -5,7 +5,7 @@ import { planDocumentSchema, readSavedDocument } from '@/lib/plan/schema';
 import { getPlan } from '@/lib/plans/data';
 import { contentHash } from '@/lib/plans/analysis/content-hash';
 import { planAnalysisOf } from '@/lib/plans/analysis/store';
-import type { RunResult } from '@/lib/plans/results';
+import { runWithoutEnvelopes, type RunResult } from '@/lib/plans/results';
 import { assertId } from '@/lib/ids';
 import { Plan, Project, Revision, Upload } from '@/models';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
@@ -71,7 +71,7 @@ async function toView(row: Revision): Promise<RevisionView> {
     project: { id: project?.id ?? '', name: project?.name ?? '' },
     metresPerPixel: row.metresPerPixel,
     document: readSavedDocument(() => planDocumentSchema.parse(row.document)),
-    analysis: row.analysis as RunResult[],
+    analysis: (row.analysis as RunResult[]).map(runWithoutEnvelopes),
     extras: (row.extras ?? {}) as RevisionExtras,
     background: background && { id: background.id, contentType: background.contentType, widthPx: background.widthPx, heightPx: background.heightPx },
   };

@@ -2,6 +2,7 @@
 
 import { Circle, Group, Line, Text } from 'react-konva';
 import type { Resonance } from '@/lib/acoustic';
+import { POSITION_STEP_M } from '@/lib/analysis/answer-precision';
 import type { PlanNode } from '@/lib/plan/document';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
 import { envelopeAt, extremaOf } from './mode-envelope';
@@ -16,6 +17,8 @@ interface ModeOverlayProps {
 
 const SAMPLES_PER_SEGMENT = 24;
 const ENVELOPE_HEIGHT_PX = 26;
+/** Places along the path arrive rounded to 0.1 mm, each on its own: a sample and a piece's end may differ by one step. */
+const SAME_PLACE_M = 1.5 * POSITION_STEP_M;
 
 function pointAlong(piece: MainPathPiece, nodes: ReadonlyMap<string, PlanNode>, positionM: number) {
   const from = nodes.get(piece.fromNodeId);
@@ -33,12 +36,14 @@ export function ModeOverlay({ resonance, path, nodes, speedOfSoundMps, scale }: 
   const quarterWavelengthM = speedOfSoundMps / (4 * resonance.frequencyHz);
   const height = ENVELOPE_HEIGHT_PX / scale;
   const marker = (positionM: number) => {
-    const piece = path.find((candidate) => positionM >= candidate.startM - 1e-9 && positionM <= candidate.endM + 1e-9);
+    const piece = path.find((candidate) => positionM >= candidate.startM - SAME_PLACE_M && positionM <= candidate.endM + SAME_PLACE_M);
     return piece ? pointAlong(piece, nodes, positionM) : null;
   };
-  // The engine's own envelope where it came with the resonance; else one drawn from the extrema.
-  const samples = resonance.pressureEnvelope && resonance.pressureEnvelope.length > 1
-    ? resonance.pressureEnvelope.map((sample) => ({ positionM: sample.positionM, relative: sample.relative }))
+  // The engine's own envelope once it has been fetched for this resonance; until then one drawn from the extrema.
+  const fromEngine = resonance.pressureEnvelope !== undefined && resonance.pressureEnvelope.length > 1;
+  const source = fromEngine ? 'engine' : 'extrema';
+  const samples = fromEngine
+    ? resonance.pressureEnvelope!.map((sample) => ({ positionM: sample.positionM, relative: sample.relative }))
     : path.flatMap((piece) => Array.from({ length: SAMPLES_PER_SEGMENT + 1 }, (_, index) => {
       const positionM = piece.startM + ((piece.endM - piece.startM) * index) / SAMPLES_PER_SEGMENT;
       return { positionM, relative: envelopeAt(positionM, extrema, quarterWavelengthM) };
@@ -54,8 +59,8 @@ export function ModeOverlay({ resonance, path, nodes, speedOfSoundMps, scale }: 
   }
   return (
     <Group listening={false}>
-      <Line points={upper} stroke="#2d6a96" strokeWidth={1.5 / scale} />
-      <Line points={lower} stroke="#2d6a96" strokeWidth={1.5 / scale} />
+      <Line name={`mode-envelope ${source}`} points={upper} stroke="#2d6a96" strokeWidth={1.5 / scale} />
+      <Line name={`mode-envelope ${source}`} points={lower} stroke="#2d6a96" strokeWidth={1.5 / scale} />
       {resonance.antinodesM.map((positionM) => {
         const point = marker(positionM);
         return point && (

@@ -1,5 +1,6 @@
 'use client';
 
+import { POSITION_STEP_M } from '@/lib/analysis/answer-precision';
 import type { RunResult } from '@/lib/plans/results';
 import { EchoChart } from '../results/echo-chart';
 import { ReflectionTable } from '../results/reflection-table';
@@ -17,8 +18,8 @@ interface ResultsPanelProps {
   nodeLabels?: Readonly<Record<string, string>>;
 }
 
-/** Within this distance, m, a reflection is at the path point (the engine reports exact sums of lengths). */
-const SAME_POINT_M = 1e-6;
+/** Within this distance, m, a reflection is at the path point: both arrive rounded to 0.1 mm, each on its own. */
+const SAME_POINT_M = 1.5 * POSITION_STEP_M;
 
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
   return (

@@ -60,7 +60,7 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, samp
   const antinodesM: number[] = [];
   const nodesM: number[] = [];
   const stretches = network.mainStretches;
-  sampler?.reset(wavelengthM, network.mainLengthM, stretches.length);
+  sampler?.reset(wavelengthM);
   const rootHz = Math.sqrt(frequencyHz);
   let offsetM = 0;
   for (let position = 0; position < stretches.length; position++) {

@@ -1,33 +1,37 @@
 // The pressure envelope |p(x)| / max |p| of a resonance along the main path, sampled from the
 // closed-form standing wave in each segment, p(x) = p0 cos kx - j Zc U0 sin kx (Kinsler & Frey,
-// Fundamentals of Acoustics, ch. 10), at every segment boundary and at least SAMPLES_PER_HALF_WAVELENGTH
-// points per half wavelength, the interior samples thinned so the total stays near MAX_ENVELOPE_SAMPLES.
-// Within a segment the samples are equally spaced and cos kx, sin kx advance by the angle-addition
-// formulas (one complex cos/sin per segment). One sampler serves all the resonances of a run.
+// Fundamentals of Acoustics, ch. 10), at every segment boundary and SAMPLES_PER_HALF_WAVELENGTH points
+// per half wavelength: a resonance of order n has about n half wavelengths along the path, so its
+// envelope has about n * SAMPLES_PER_HALF_WAVELENGTH samples plus one per segment, whatever the run's
+// length in metres. Within a segment the samples are equally spaced and cos kx, sin kx advance by the
+// angle-addition formulas (one complex cos/sin per segment). One sampler serves all the resonances of a run.
 import { complexCosSin } from '../network/complex-trig';
 import type { PressureEnvelopePoint } from '../types';
 import { doubled } from './grow';
 
-/** Samples per half wavelength, enough to draw a smooth curve. */
-export const SAMPLES_PER_HALF_WAVELENGTH = 12;
-/** Target number of samples per resonance; segment boundaries are always sampled, so runs of more segments exceed it. */
-export const MAX_ENVELOPE_SAMPLES = 400;
+/**
+ * Samples per half wavelength. Drawn as straight lines between samples, a lobe |cos kx| departs from
+ * its chord by at most 1 - cos(pi / 16), under 2 % of the envelope's height (common practice, no source:
+ * enough for a plot; the nodes and antinodes themselves are listed exactly beside the envelope).
+ */
+export const SAMPLES_PER_HALF_WAVELENGTH = 8;
+/** Room for this many samples before the buffers grow. */
+const INITIAL_CAPACITY = 256;
 /** Guards ceil() against a length that is a whole number of spacings up to rounding. */
 const STEP_COUNT_SLACK = 1e-9;
 
 export class EnvelopeSampler {
-  private positionsM = new Float64Array(MAX_ENVELOPE_SAMPLES);
-  private magnitudes = new Float64Array(MAX_ENVELOPE_SAMPLES);
+  private positionsM = new Float64Array(INITIAL_CAPACITY);
+  private magnitudes = new Float64Array(INITIAL_CAPACITY);
   private count = 0;
   private spacingM = 1;
   /** Factor from the path state (rescaled at tees) to one amplitude along the whole path. */
   private amplitude = 1;
   private readonly trig = new Float64Array(4);
 
-  /** Starts a new resonance. */
-  reset(wavelengthM: number, pathLengthM: number, segmentCount: number): void {
-    const interiorBudget = Math.max(1, MAX_ENVELOPE_SAMPLES - segmentCount - 1);
-    this.spacingM = Math.max(wavelengthM / (2 * SAMPLES_PER_HALF_WAVELENGTH), pathLengthM / interiorBudget);
+  /** Starts a new resonance of this wavelength. */
+  reset(wavelengthM: number): void {
+    this.spacingM = wavelengthM / (2 * SAMPLES_PER_HALF_WAVELENGTH);
     this.count = 0;
     this.amplitude = 1;
   }

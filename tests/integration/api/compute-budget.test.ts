@@ -42,7 +42,7 @@ describe('compute budget', () => {
     const blockers = Array.from({ length: COMPUTE_THREADS }, () => compute({ kind: 'analyze-run', input: heavyRun }, { reduce: 'x', timeLimitMs: 1500 }).catch((error: unknown) => error));
     // a small run with a 1 s limit waits about 1.5 s for a thread, then runs in milliseconds
     const small = { segments: [{ lengthM: 2, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxHz: 300 };
-    const analysis = await compute<{ resonances: unknown[] }>({ kind: 'analyze-run', input: small }, { reduce: 'x', timeLimitMs: 1000 });
+    const analysis = JSON.parse(await compute<string>({ kind: 'analyze-run', input: small }, { reduce: 'x', timeLimitMs: 1000 })) as { resonances: unknown[] };
     expect(analysis.resonances.length).toBeGreaterThan(0);
     for (const stopped of await Promise.all(blockers)) expect((stopped as AppError).status).toBe(422);
   });

@@ -1,6 +1,8 @@
 // One truth per plan version: for the demo plan and a random plan with a tee, a lined branch and a
 // room fed from the branch (not the run's chosen end), the resonance numbers are identical in the
-// results, the risk flags, the frozen revision, its review rows and the schedule PDF's text.
+// results, the risk flags, the frozen revision, its review rows and the schedule PDF's text. The results
+// route states them rounded on the way out (frequencies to 0.001 Hz, Q to 4 significant figures), so
+// there they agree to that rounding; everywhere else exactly.
 // Consistency of the product with itself (common practice, no source).
 import { extractText, getDocumentProxy } from 'unpdf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -77,6 +79,11 @@ async function savedPlan(name: string, document: PlanDocument, metresPerPixel: n
   return planId;
 }
 
+/** The results route's number is the full one to 0.001 Hz: within half of that step. */
+const sameToTheMillihertz = (sentHz: number, fullHz: number) => Math.abs(sentHz - fullHz) <= 0.0005 + 1e-12 * fullHz;
+/** ... and Q to 4 significant figures. */
+const sameToFourFigures = (sent: number | null, full: number | null) => (sent === null || full === null ? sent === full : Math.abs(sent - full) <= 0.5e-3 * Math.abs(full));
+
 const byOrder = (runs: readonly RunResult[]) => new Map<string, Resonance>(runs.flatMap((run) => (run.analysis?.resonances ?? []).map((resonance) => [`${run.runId}:${resonance.order}`, resonance] as const)));
 
 async function checkOneTruth(planId: string): Promise<void> {
@@ -90,16 +97,21 @@ async function checkOneTruth(planId: string): Promise<void> {
   for (const flag of resonanceFlags) {
     const resonance = resonances.get(`${flag.runId}:${flag.resonanceOrder}`);
     expect(resonance, `flag ${flag.id} cites order ${flag.resonanceOrder}, which the results list`).toBeDefined();
-    expect(flag.quantity.valueHz).toBe(resonance!.frequencyHz);
-    expect(flag.reason).toContain(`Resonance ${flag.resonanceOrder} at ${resonance!.frequencyHz.toFixed(1)} Hz`);
+    expect(sameToTheMillihertz(resonance!.frequencyHz, flag.quantity.valueHz!), `flag ${flag.id}: ${flag.quantity.valueHz} Hz, results ${resonance!.frequencyHz} Hz`).toBe(true);
+    expect(flag.reason).toContain(`Resonance ${flag.resonanceOrder} at ${flag.quantity.valueHz!.toFixed(1)} Hz`);
   }
 
   const revision = await getRevisionById(team.team.id, (await submitted(team, planId)).id);
   const frozen = byOrder(revision.analysis);
-  expect([...frozen.entries()].map(([key, resonance]) => [key, resonance.frequencyHz, resonance.q])).toEqual([...resonances.entries()].map(([key, resonance]) => [key, resonance.frequencyHz, resonance.q]));
+  expect([...frozen.keys()]).toEqual([...resonances.keys()]);
+  for (const [key, resonance] of frozen) {
+    const sent = resonances.get(key)!;
+    expect(sameToTheMillihertz(sent.frequencyHz, resonance.frequencyHz) && sameToFourFigures(sent.q, resonance.q), `${key}: frozen ${resonance.frequencyHz} Hz Q ${resonance.q}, results ${sent.frequencyHz} Hz Q ${sent.q}`).toBe(true);
+  }
+  for (const flag of resonanceFlags) expect(flag.quantity.valueHz).toBe(frozen.get(`${flag.runId}:${flag.resonanceOrder}`)!.frequencyHz);
   for (const row of reviewRows(revision.analysis, revision.extras).filter((candidate) => candidate.kind === 'resonance')) {
     const [, runId, order] = row.target.split(':');
-    expect(row.frequencyHz).toBe(resonances.get(`${runId}:${order}`)!.frequencyHz);
+    expect(row.frequencyHz).toBe(frozen.get(`${runId}:${order}`)!.frequencyHz);
   }
   expect((revision.extras.risks ?? []).map((risk) => risk.detail)).toEqual(risks.flags.map((flag) => flag.reason));
 
@@ -107,7 +119,7 @@ async function checkOneTruth(planId: string): Promise<void> {
   const { text } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
   const flat = text.replace(/\s+/g, ' ');
   for (const flag of resonanceFlags) {
-    const resonance = resonances.get(`${flag.runId}:${flag.resonanceOrder}`)!;
+    const resonance = frozen.get(`${flag.runId}:${flag.resonanceOrder}`)!;
     // the resonance table prints every row near a fan tone, and the risk section prints the flag's own words
     expect(flat).toContain(`${resonance.frequencyHz.toFixed(1)} Hz`);
     expect(flat).toContain(`Resonance ${flag.resonanceOrder} at ${resonance.frequencyHz.toFixed(1)} Hz`);

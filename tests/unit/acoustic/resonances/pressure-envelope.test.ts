@@ -12,8 +12,9 @@ describe('pressure envelope along the main path', () => {
     run.resonances.forEach((resonance, index) => {
       const n = index + 1;
       const envelope = resonance.pressureEnvelope ?? [];
-      // at least 12 samples per half wavelength: n half wavelengths along L
-      expect(envelope.length).toBeGreaterThanOrEqual(12 * n + 1);
+      // 8 samples per half wavelength: n half wavelengths along L give 8 n intervals (one more where rounding tips the count)
+      expect(envelope.length).toBeGreaterThanOrEqual(8 * n + 1);
+      expect(envelope.length).toBeLessThanOrEqual(8 * n + 2);
       expectClose(envelope[0].positionM, 0, 1e-12, 'first sample at the start end');
       expectClose(envelope[envelope.length - 1].positionM, lengthM, 1e-12, 'last sample at the end');
       for (const point of envelope) {
@@ -44,11 +45,34 @@ describe('pressure envelope along the main path', () => {
     }
   });
 
+  it('samples per half wavelength, not per metre: mode n of a 2 m and of a 40 m pipe have the same number of samples', () => {
+    // f_n = n c / 2L for a pipe closed at both ends (Kinsler & Frey, ch. 10): n half wavelengths along L, whatever L is.
+    const counts = [2, 40].map((lengthM) => {
+      const run = analyzeRun({ segments: [{ lengthM, section: round(0.2) }], start: closed, end: closed, minHz: 1, maxHz: (6.5 * 343) / (2 * lengthM), wallLosses: false });
+      return run.resonances.slice(0, 6).map((resonance) => resonance.pressureEnvelope?.length ?? 0);
+    });
+    expect(counts[0]).toHaveLength(6);
+    counts[0].forEach((count, index) => expect(Math.abs(count - counts[1][index]), `mode ${index + 1}`).toBeLessThanOrEqual(1));
+  });
+
+  it('a run of many short segments adds one sample per segment boundary to its half wavelengths', () => {
+    const segments = Array.from({ length: 60 }, (_, index) => ({ lengthM: 0.05 + 0.01 * (index % 3), section: round(0.15 + 0.05 * (index % 2)) }));
+    const lengthM = segments.reduce((sum, segment) => sum + segment.lengthM, 0);
+    const run = analyzeRun({ segments, start: closed, end: closed, maxHz: 700 });
+    for (const resonance of run.resonances) {
+      const halfWavelengths = lengthM / (run.speedOfSoundMps / (2 * resonance.frequencyHz));
+      const envelope = resonance.pressureEnvelope ?? [];
+      // each segment holds ceil(its share of 8 samples per half wavelength) intervals, at least one
+      expect(envelope.length).toBeGreaterThanOrEqual(Math.max(segments.length, 8 * halfWavelengths) + 1 - 1e-6);
+      expect(envelope.length).toBeLessThanOrEqual(8 * halfWavelengths + segments.length + 1 + 1e-6);
+    }
+  });
+
   it('is plain data: survives JSON round trip', () => {
     const run = analyzeRun({ segments: [{ lengthM: 1, section: round(0.1) }], start: closed, end: closed, maxHz: 400 });
     const copy = JSON.parse(JSON.stringify(run)) as typeof run;
     expect(copy.resonances[0].pressureEnvelope).toEqual(run.resonances[0].pressureEnvelope);
-    expect(copy.resonances[0].pressureEnvelope?.length).toBeGreaterThan(12);
+    expect(copy.resonances[0].pressureEnvelope?.length).toBeGreaterThan(8);
   });
 });
 
