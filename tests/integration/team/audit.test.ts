@@ -14,7 +14,7 @@ import { getPlan, savePlanDocument, setPlanBackground } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
 import { getRevisionById } from '@/lib/revisions/data';
 import { reviewRows } from '@/lib/revisions/rows';
-import { issueSchedule } from '@/lib/schedules/data';
+import { issueSchedule, renderAskedSchedule } from '@/lib/schedules/data';
 import { storePlanBackground } from '@/lib/uploads/data';
 import { AuditEvent } from '@/models';
 import { tinyPng } from '../helpers/files';
@@ -77,7 +77,8 @@ describe('audit log of the team’s work', () => {
     await call(decide, 'PUT', '/x', { cookie: engineer, params, body: { target: atRisk.target, decision: 'query', note: 'On the fan tone' } });
     await call(checkClear, 'POST', '/x', { cookie: engineer, params, body: {} });
     await call(finish, 'POST', '/x', { cookie: engineer, params, body: { outcome: 'revise_resubmit', note: 'Retune' } });
-    await issueSchedule(team.id, acoustician, revision.id);
+    const asked = await issueSchedule(team.id, acoustician, revision.id);
+    await renderAskedSchedule(team.id, asked.id); // the render-schedule job's work: the schedule is issued when stored
 
     const all = await call(listAudit, 'GET', '/api/v1/team/audit', { cookie: admin });
     const actions = (all.body as { events: { action: string }[] }).events.map((event) => event.action);
