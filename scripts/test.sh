@@ -26,7 +26,11 @@ step "Building the app for the browser tests"
 build_app test-build.log
 
 step "Browser tests (Chromium)"
-node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/"
+node node_modules/@playwright/test/cli.js test || {
+  show_log_tail "$DATA_DIR/e2e-server-${ANTINODE_E2E_PORT:-3100}.log" "the test web server"
+  show_log_tail "$DATA_DIR/fakes-test.log" "the local fakes (mail, storage, payments)"
+  fail "browser tests failed" "see playwright-report/, test-results/ and the logs above (in .data/)"
+}
 
 stop_pid_file "$DATA_DIR/fakes-test.pid" "the local fakes (test)"
 step "All tests passed"

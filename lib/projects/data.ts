@@ -1,13 +1,13 @@
 // Projects of a team. Every query is scoped by team id: one team never sees another's.
 import { Project } from '@/models';
-import { notFound } from '@/lib/errors';
+import { AppError, notFound } from '@/lib/errors';
 import { isId } from '@/lib/ids';
 import type { ProjectInput, ProjectUpdate } from './schemas';
 
-export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; updatedAt: string }
+export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; version: number; updatedAt: string }
 
 function toSummary(row: Project): ProjectSummary {
-  return { id: row.id, name: row.name, site: row.site, archived: row.archived, updatedAt: row.updatedAt.toISOString() };
+  return { id: row.id, name: row.name, site: row.site, archived: row.archived, version: row.version, updatedAt: row.updatedAt.toISOString() };
 }
 
 export async function listProjects(teamId: string, options: { includeArchived?: boolean } = {}): Promise<ProjectSummary[]> {
@@ -33,6 +33,11 @@ export async function updateProject(teamId: string, projectId: string, changes: 
   if (!isId(projectId)) throw notFound('That project');
   const row = await Project.findOne({ where: { teamId, id: projectId } });
   if (!row) throw notFound('That project');
-  await row.update(changes);
+  const { version, ...fields } = changes;
+  const [updated] = await Project.update({ ...fields, version: version + 1 }, { where: { teamId, id: projectId, version } });
+  if (updated === 0) {
+    throw new AppError('conflict', `Someone changed this project since you opened it (it is now “${row.name}”, version ${row.version}). Reload to see their change, then make yours again.`, { field: 'version' });
+  }
+  await row.reload();
   return toSummary(row);
 }

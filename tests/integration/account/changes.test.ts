@@ -6,6 +6,9 @@ import { AppError } from '@/lib/errors';
 import { Session } from '@/models';
 import { mailsTo } from '../helpers/inbox';
 import { createTestTeam, TEST_PASSWORD, uniqueEmail } from '../helpers/people';
+import { FILE_PEER } from '../helpers/routes';
+
+const here = { address: FILE_PEER, deviceToken: null };
 
 afterAll(async () => { await sequelize.close(); });
 
@@ -18,18 +21,19 @@ describe('account changes', () => {
     await expect(changePassword(user.id, kept.value, 'not it', 'a new long password')).rejects.toMatchObject({ code: 'wrong_credentials', field: 'currentPassword' });
     await changePassword(user.id, kept.value, TEST_PASSWORD, 'a new long password');
     expect((await Session.findAll({ where: { userId: user.id } })).map((session) => session.id)).toEqual([kept.value]);
-    await expect(signIn(user.email, 'a new long password', null)).resolves.toMatchObject({ name: 'antinode_session' });
+    await expect(signIn(user.email, 'a new long password', here)).resolves.toMatchObject({ session: { name: 'antinode_session' } });
   });
 
   it('a new e-mail needs the current password and must be free', async () => {
-    const { members } = await createTestTeam('change-email');
+    const { team, members } = await createTestTeam('change-email');
+    const sessionId = (await startSession(members.engineer.id, team.id)).value;
     const taken = members.viewer.email;
-    await expect(changeEmail(members.engineer.id, TEST_PASSWORD, taken)).rejects.toMatchObject({ code: 'conflict', field: 'email' });
-    await expect(changeEmail(members.engineer.id, 'wrong', uniqueEmail('new'))).rejects.toBeInstanceOf(AppError);
+    await expect(changeEmail(members.engineer.id, sessionId, TEST_PASSWORD, taken)).rejects.toMatchObject({ code: 'conflict', field: 'email' });
+    await expect(changeEmail(members.engineer.id, sessionId, 'wrong', uniqueEmail('new'))).rejects.toBeInstanceOf(AppError);
     const fresh = uniqueEmail('moved');
     const previous = members.engineer.email;
-    await expect(changeEmail(members.engineer.id, TEST_PASSWORD, fresh)).resolves.toBe(fresh);
+    await expect(changeEmail(members.engineer.id, sessionId, TEST_PASSWORD, fresh)).resolves.toBe(fresh);
     expect((await mailsTo(previous)).map((mail) => mail.subject)).toEqual(['Your Antinode e-mail address was changed']);
-    await expect(signIn(fresh, TEST_PASSWORD, null)).resolves.toMatchObject({ name: 'antinode_session' });
+    await expect(signIn(fresh, TEST_PASSWORD, here)).resolves.toMatchObject({ session: { name: 'antinode_session' } });
   });
 });

@@ -2,12 +2,13 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { POST as requestReset } from '@/app/api/v1/password-resets/route';
 import { POST as completeReset } from '@/app/api/v1/password-resets/complete/route';
 import { signIn } from '@/lib/auth/accounts';
+import { allAnswered } from '@/lib/jobs/after-answer';
 import { sequelize } from '@/lib/db';
 import { newLinkToken } from '@/lib/tokens';
 import { PasswordReset, Session } from '@/models';
 import { lastLinkTo, mailsTo } from '../helpers/inbox';
 import { createTestTeam, uniqueEmail } from '../helpers/people';
-import { call } from '../helpers/routes';
+import { call, FILE_PEER } from '../helpers/routes';
 
 afterAll(async () => { await sequelize.close(); });
 
@@ -25,12 +26,13 @@ describe('forgotten password', () => {
     const { members, cookieFor } = await createTestTeam('reset-flow');
     await cookieFor('engineer');
     await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email: members.engineer.email } });
+    await allAnswered();
     expect(await mailsTo(members.engineer.email)).toHaveLength(1);
     const token = await lastLinkTo(members.engineer.email, '/reset-password');
     const done = await call(completeReset, 'POST', '/x', { body: { token, password: 'a brand new password' } });
     expect(done.status).toBe(200);
     expect(await Session.count({ where: { userId: members.engineer.id } })).toBe(0);
-    await expect(signIn(members.engineer.email, 'a brand new password', null)).resolves.toMatchObject({ name: 'antinode_session' });
+    await expect(signIn(members.engineer.email, 'a brand new password', { address: FILE_PEER, deviceToken: null })).resolves.toMatchObject({ session: { name: 'antinode_session' } });
 
     const reused = await call(completeReset, 'POST', '/x', { body: { token, password: 'yet another password' } });
     expect(reused.status).toBe(409);

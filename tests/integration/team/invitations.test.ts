@@ -3,6 +3,7 @@ import { POST as accept } from '@/app/api/v1/invitations/accept/route';
 import { POST as invite } from '@/app/api/v1/team/invitations/route';
 import { DELETE as revoke } from '@/app/api/v1/team/invitations/[invitationId]/route';
 import { sequelize } from '@/lib/db';
+import { allAnswered } from '@/lib/jobs/after-answer';
 import { newLinkToken } from '@/lib/tokens';
 import { AuditEvent, Invitation, Membership, User } from '@/models';
 import { lastLinkTo } from '../helpers/inbox';
@@ -27,6 +28,7 @@ describe('invitations', () => {
     const sent = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email, role: 'architect' } });
     expect(sent.status).toBe(201);
     const stored = await Invitation.findOne({ where: { teamId: team.id, email } });
+    await allAnswered();
     const token = await lastLinkTo(email, '/invitation');
     expect(stored!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(stored!.tokenHash).not.toContain(token);
