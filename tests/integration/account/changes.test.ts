@@ -13,6 +13,28 @@ const here = { address: FILE_PEER, deviceToken: null };
 afterAll(async () => { await sequelize.close(); });
 
 describe('account changes', () => {
+  it('wrong current passwords are budgeted per session (5) and per account (10): a stolen session cannot guess on', async () => {
+    // Before, 30 wrong current passwords in a row were each answered "wrong" at once.
+    const { team, members } = await createTestTeam('guessing');
+    const user = members.engineer;
+    const stolen = (await startSession(user.id, team.id)).value;
+    const outcomes: string[] = [];
+    for (let attempt = 0; attempt < 6; attempt += 1) {
+      outcomes.push(await changePassword(user.id, stolen, `guess ${attempt}`, 'a new long password').then(() => 'changed', (error: AppError) => error.code));
+    }
+    expect(outcomes).toEqual(['wrong_credentials', 'wrong_credentials', 'wrong_credentials', 'wrong_credentials', 'wrong_credentials', 'throttled']);
+    // Spent for this session, the right password included; the answer says when and what else to do.
+    await expect(changeEmail(user.id, stolen, TEST_PASSWORD, uniqueEmail('taken-over'))).rejects.toMatchObject({
+      code: 'throttled', field: 'currentPassword', message: expect.stringContaining('Too many wrong current passwords'), retryAfterS: expect.any(Number),
+    });
+    // A second session may try until the account's budget of 10 is spent; then every session waits.
+    const second = (await startSession(user.id, team.id)).value;
+    for (let attempt = 0; attempt < 5; attempt += 1) await changePassword(user.id, second, `more ${attempt}`, 'a new long password').catch(() => undefined);
+    const third = (await startSession(user.id, team.id)).value;
+    await expect(changePassword(user.id, third, TEST_PASSWORD, 'a new long password')).rejects.toMatchObject({ code: 'throttled', message: expect.stringContaining('for this account') });
+    await expect(signIn(user.email, TEST_PASSWORD, here)).resolves.toMatchObject({ session: { name: 'antinode_session' } }); // the password did not change
+  });
+
   it('a new password needs the current one, and ends every other session', async () => {
     const { team, members } = await createTestTeam('change-pw');
     const user = members.architect;

@@ -41,6 +41,12 @@ export async function loadHandlers(route: RouteFile): Promise<Partial<Record<Met
 // hold back another's.
 export const FILE_PEER = `10.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}.${1 + Math.floor(Math.random() * 250)}`;
 
+/** A fresh peer address, for a request that must not meet a per-address budget another spent. */
+export function freshPeer(): Record<string, string> {
+  const part = (from: number, span: number) => from + Math.floor(Math.random() * span);
+  return { [PEER_HEADER]: `100.${part(64, 60)}.${part(0, 250)}.${part(1, 250)}` };
+}
+
 export async function call(
   handler: RouteHandler,
   method: Method,
