@@ -3,6 +3,7 @@
 // whatever order they arrive in, and whatever time they carry, each one re-reads the
 // subscription, so the last to be applied carries the newest state. The Seats and billing page
 // does the same when it opens, so a lost webhook never leaves a team stuck.
+import { cache } from 'react';
 import Stripe from 'stripe';
 import type { Transaction } from 'sequelize';
 import { recordAudit } from '@/lib/audit/record';
@@ -18,10 +19,13 @@ const STATE_OF_STATUS: Partial<Record<string, BillingState>> = {
 
 export interface SubscriptionNow { id: string; customerId: string; status: string; quantity: number }
 
+// A page waits for the payment service at most this long, once: past it, it shows what is stored.
+const PAGE_TIMEOUT_MS = 3000;
+
 /** The subscription as the payment service holds it now; null if it does not know it. */
-export async function readSubscription(subscriptionId: string): Promise<SubscriptionNow | null> {
+export async function readSubscription(subscriptionId: string, forPage = false): Promise<SubscriptionNow | null> {
   try {
-    const found = await paymentService().subscriptions.retrieve(subscriptionId);
+    const found = await paymentService().subscriptions.retrieve(subscriptionId, {}, forPage ? { timeout: PAGE_TIMEOUT_MS, maxNetworkRetries: 0 } : undefined);
     const customerId = typeof found.customer === 'string' ? found.customer : found.customer.id;
     return { id: found.id, customerId, status: found.status, quantity: found.items.data[0]?.quantity ?? 0 };
   } catch (error) {
@@ -62,7 +66,7 @@ export async function applySubscription(row: TeamBilling, now: SubscriptionNow, 
   return { changed, paidSeats, state, reason: `${paidSeats} paid seats, ${state}` };
 }
 
-/** For the Seats and billing page: brings the team in line with the payment service, if it can. */
+/** For pages: brings the team in line with the payment service, if it can within a few seconds. */
 export async function reconcileTeam(teamId: string): Promise<void> {
   const stored = await TeamBilling.findByPk(teamId, { attributes: ['subscriptionId'] });
   if (!stored?.subscriptionId) return;
@@ -70,7 +74,7 @@ export async function reconcileTeam(teamId: string): Promise<void> {
     await sequelize.transaction(async (transaction) => {
       const row = await TeamBilling.findByPk(teamId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!row?.subscriptionId) return;
-      const now = await readSubscription(row.subscriptionId);
+      const now = await readSubscription(row.subscriptionId, true);
       if (now) await applySubscription(row, now, transaction);
     });
   } catch (error) {
@@ -78,3 +82,10 @@ export async function reconcileTeam(teamId: string): Promise<void> {
     console.error('[billing] could not reconcile with the payment service', error instanceof Error ? error.message : error);
   }
 }
+
+/**
+ * The same, at most once per page request (React's request cache): the Seats and billing page
+ * calls it always; the signed-in layout calls it while the team is read-only, so a lost "paid"
+ * webhook does not keep the banner up, and so the banner and the page agree.
+ */
+export const reconcileTeamForPage = cache(reconcileTeam);

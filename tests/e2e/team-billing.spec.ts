@@ -46,7 +46,9 @@ test('webhooks that never arrive: the billing page asks the payment service, and
   await paymentFake('hold', { email });
   await page.getByLabel('Paid seats', { exact: true }).fill('2');
   await page.getByRole('button', { name: 'Change paid seats' }).click();
-  await page.reload(); // opening the page reconciles with the payment service
+  // The page drawn again after the request asks the payment service, as does every opening of it.
+  await expect(page.getByTestId('paid-seats')).toHaveText('2');
+  await page.reload();
   await expect(page.getByTestId('paid-seats')).toHaveText('2');
   await expect(page.getByTestId('total-seats')).toHaveText('5');
   await expect(page.getByTestId('seat-change-pending')).toHaveCount(0);
@@ -58,7 +60,7 @@ test('webhooks that never arrive: the billing page asks the payment service, and
     await page.reload();
     await expect(page.getByRole('table', { name: 'Audit log' })).toContainText('Invoice', { timeout: 1000 });
   }).toPass({ timeout: 60_000 });
-  await expect(page.getByRole('table', { name: 'Audit log' }).getByText('0 → 2 paid seats')).toHaveCount(1);
+  await expect(page.getByRole('table', { name: 'Audit log' }).getByRole('row').filter({ hasText: 'Paid seats changed' })).toHaveCount(1);
   expect(await storedPaidSeats(page)).toBe(2);
 });
 
