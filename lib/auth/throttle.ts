@@ -11,10 +11,9 @@
 // browser that signed in to the account before (known-devices.ts) is not held by it nor by the
 // address budget. (Growing delays in place of lockouts, per account and per source: OWASP
 // Authentication Cheat Sheet, "Account lockout"; the figures are product rules.)
-import { throttledError } from '@/lib/http/rate-limit';
 import { addressKey } from '@/lib/http/client-address';
+import { forgetRateLimit, heldFor, holdFor, releaseHold, spend, throttledError } from '@/lib/http/rate-limit';
 import { emailKey, waitInWords, type RateLimitName } from '@/lib/http/rate-limit-rules';
-import { forgetRateLimit, heldFor, holdFor, releaseHold, spend } from '@/lib/http/rate-limit';
 
 export const SIGN_IN_FREE_FAILURES = { pair: 5, address: 30, account: 20 } as const;
 export const FIRST_WAIT_S = 30;
