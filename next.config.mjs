@@ -6,6 +6,17 @@ const nextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,
+  // Static files (scripts, styles, fonts, the icon): the headers pages and API answers get from
+  // proxy.ts and the route wrapper that apply to a file (lib/http/security-headers.ts).
+  async headers() {
+    const headers = [
+      { key: 'X-Content-Type-Options', value: 'nosniff' },
+      { key: 'Referrer-Policy', value: 'same-origin' },
+      { key: 'Cross-Origin-Resource-Policy', value: 'same-origin' },
+      { key: 'X-Frame-Options', value: 'DENY' },
+    ];
+    return ['/_next/static/:path*', '/fonts/:path*', '/icon.svg', '/favicon.ico'].map((source) => ({ source, headers }));
+  },
   experimental: {
     // Server action calls: proxy.ts refuses a body over 256 KB (413) before Next reads it; this
     // is Next's own limit behind it (lib/server-actions/check-request.ts, MAX_ACTION_BODY_BYTES).

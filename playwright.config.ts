@@ -2,7 +2,10 @@ import { defineConfig } from '@playwright/test';
 
 // Browser tests drive Debian's Chromium (nothing is downloaded) against a production build
 // served on loopback with the test database. `npm test` builds first and sets DATABASE_URL.
+// The server's output goes to SERVER_LOG (.data/e2e-server-<port>.log), where a failure can be
+// read afterwards; scripts/test.sh prints its end when a browser test fails.
 const PORT = Number(process.env.ANTINODE_E2E_PORT ?? 3100);
+const SERVER_LOG = `.data/e2e-server-${PORT}.log`;
 
 export default defineConfig({
   testDir: 'tests/e2e',
@@ -25,7 +28,7 @@ export default defineConfig({
   },
   projects: [{ name: 'chromium', use: { browserName: 'chromium' } }],
   webServer: {
-    command: `node node_modules/next/dist/bin/next start -p ${PORT} -H 127.0.0.1`,
+    command: `mkdir -p .data && exec node scripts/serve.mjs --port ${PORT} --host 127.0.0.1 > ${SERVER_LOG} 2>&1`,
     url: `http://127.0.0.1:${PORT}/api/v1/health`,
     reuseExistingServer: false,
     timeout: 60_000,

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { headers } from 'next/headers';
 import type { ReactNode } from 'react';
 import { plexMono, plexSans } from './fonts';
 import './globals.css';
@@ -8,7 +9,10 @@ export const metadata: Metadata = {
   description: 'Duct-run resonances, reflections and room risks for HVAC acousticians.',
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+// Every page is rendered per request: its scripts carry that request's nonce (proxy.ts), which a
+// page rendered once at build time could not.
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await headers();
   return (
     <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
       <body className="min-h-screen bg-paper font-sans text-graphite">

@@ -1,11 +1,14 @@
 // One check over a whole decoded body (JSON or a server action's arguments) before any schema
 // sees it: nesting no deeper than MAX_INPUT_DEPTH, and every key and string clean text
 // (lib/text.ts). It covers the parts a schema leaves open (records of unknown values), and it
-// walks with its own stack, so no input can overflow the call stack here or later.
+// walks with its own stack, so no input can overflow the call stack here or later. Keys that
+// name an object's prototype machinery (__proto__, constructor, prototype) are refused: a
+// schema would drop them, or worse, an object spread would take them as its prototype.
 import { AppError } from '@/lib/errors';
 import { textProblem } from '@/lib/text';
 
 export const MAX_INPUT_DEPTH = 64;
+const PROTOTYPE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 
 export interface InputProblem { path: string; message: string }
 
@@ -32,6 +35,7 @@ export function findInputProblem(value: unknown): InputProblem | null {
       if (typeof key === 'string') {
         const message = textProblem(key);
         if (message) return { path: item.path, message: `has a key that ${message}` };
+        if (PROTOTYPE_KEYS.has(key)) return { path: join(item.path, key), message: `"${key}" is not allowed as a key` };
       }
       stack.push({ value: entry, path: join(item.path, key), depth: item.depth + 1 });
     }

@@ -8,6 +8,7 @@ export const ERROR_STATUS = {
   not_found: 404,
   conflict: 409,
   too_large: 413,
+  unsupported_media_type: 415,
   too_much_work: 422,
   throttled: 429,
   internal: 500,

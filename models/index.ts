@@ -1,8 +1,10 @@
 // Every model, and every association in one place.
 import { AuditEvent } from './audit-event';
 import { BillingEvent } from './billing-event';
+import { BillingRefusal } from './billing-refusal';
 import { Comment } from './comment';
 import { Invitation } from './invitation';
+import { KnownDevice } from './known-device';
 import { Membership } from './membership';
 import { NotificationSetting } from './notification-setting';
 import { PasswordReset } from './password-reset';
@@ -14,7 +16,7 @@ import { ReviewDecision } from './review-decision';
 import { Revision } from './revision';
 import { Schedule } from './schedule';
 import { Session } from './session';
-import { SignInThrottle } from './sign-in-throttle';
+import { SignUpRequest } from './sign-up-request';
 import { Team } from './team';
 import { TeamBilling } from './team-billing';
 import { Upload } from './upload';
@@ -41,6 +43,8 @@ Invitation.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
 User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
 PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+User.hasMany(KnownDevice, { foreignKey: 'userId', as: 'knownDevices' });
+KnownDevice.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Team.hasOne(TeamBilling, { foreignKey: 'teamId', as: 'billing' });
 TeamBilling.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 BillingEvent.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -74,5 +78,5 @@ PlanActivity.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 Plan.hasMany(PlanAnalysisRow, { foreignKey: 'planId', as: 'analyses' });
 PlanAnalysisRow.belongsTo(Plan, { foreignKey: 'planId', as: 'plan' });
 
-export { AuditEvent, BillingEvent, Invitation, Membership, PasswordReset, Plan, Project, Session, SignInThrottle, Team, TeamBilling, Upload, User };
+export { AuditEvent, BillingEvent, BillingRefusal, Invitation, KnownDevice, Membership, PasswordReset, Plan, Project, Session, SignUpRequest, Team, TeamBilling, Upload, User };
 export { Comment, NotificationSetting, PlanActivity, PlanAnalysisRow, ReviewDecision, Revision, Schedule };

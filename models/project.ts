@@ -12,6 +12,7 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare name: string;
   declare site: CreationOptional<string>;
   declare archived: CreationOptional<boolean>;
+  declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -22,6 +23,7 @@ Project.init(
     name: { type: DataTypes.STRING(160), allowNull: false },
     site: { type: DataTypes.STRING(240), allowNull: false, defaultValue: '' },
     archived: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

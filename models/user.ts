@@ -9,6 +9,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare passwordHash: string;
   declare unitSystem: CreationOptional<UnitSystem>;
+  // When the account's address was shown to reach its owner (a mailed link used); null: not yet.
+  declare emailVerifiedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -20,6 +22,7 @@ User.init(
     name: { type: DataTypes.STRING(120), allowNull: false },
     passwordHash: { type: DataTypes.STRING(255), allowNull: false },
     unitSystem: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'si' },
+    emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -21,7 +21,9 @@ step "Building the app for the editor benchmark"
 build_app bench-build.log
 # The bench measures the server, not the per-person rate limit: one person sends every request here.
 start_jobs_worker bench
-ANTINODE_ANALYSIS_RATE_PER_MINUTE=1000000 node node_modules/next/dist/bin/next start -p "$BENCH_PORT" -H 127.0.0.1 >"$DATA_DIR/bench-server.log" 2>&1 &
+# It stands behind a "proxy" on loopback, so the account bench can send each request as its own client.
+ANTINODE_ANALYSIS_RATE_PER_MINUTE=1000000 ANTINODE_TRUSTED_PROXIES=127.0.0.1 ANTINODE_BASE_URL="http://localhost:$BENCH_PORT" \
+  node scripts/serve.mjs --port "$BENCH_PORT" --host 127.0.0.1 >"$DATA_DIR/bench-server.log" 2>&1 &
 SERVER_PID=$!
 trap 'kill $SERVER_PID 2>/dev/null; stop_pid_file "$DATA_DIR/jobs-bench.pid" "the job worker (bench)"' EXIT
 wait_for_health "http://127.0.0.1:$BENCH_PORT/api/v1/health" "$SERVER_PID"
@@ -32,6 +34,9 @@ ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" ANTINODE_BENCH_SERVER_PID="$SE
 
 step "Analysis answers (the 100-segment run, concurrency 8, route and bare handler)"
 ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/load/analysis-answers.ts || fail "the analysis answer benchmark failed"
+
+step "Account answers: an address with an account and one without (reset, sign-up)"
+ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/accounts/run.ts || fail "the account benchmark failed"
 
 step "Treatment schedule PDF"
 # @react-pdf/renderer ships ES modules only, so the benchmark is bundled (packages stay external) and run as ESM.

@@ -167,6 +167,13 @@ wait_for_health() {
   fail "the web server did not answer $url within 30 s"
 }
 
+# The end of a log, for a failure's cause: `show_log_tail <file> <what it is>`.
+show_log_tail() {
+  [ -f "$1" ] || return 0
+  printf '\n\033[1m--- last 60 lines of %s (%s) ---\033[0m\n' "${1#"$ROOT"/}" "$2" >&2
+  tail -n 60 "$1" >&2
+}
+
 ensure_chromium() {
   if [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
   step "Chromium found: $(/usr/bin/chromium --version 2>/dev/null | head -n 1)"

@@ -25,7 +25,7 @@ stop_pid_file "$DATA_DIR/server.pid" "the previous web server"
 export ANTINODE_BASE_URL="${ANTINODE_BASE_URL:-http://localhost:$APP_PORT}"
 start_jobs_worker app
 step "Serving Antinode"
-node node_modules/next/dist/bin/next start -p "$APP_PORT" -H "${HOST:-127.0.0.1}" &
+node scripts/serve.mjs --port "$APP_PORT" --host "${HOST:-127.0.0.1}" &
 SERVER_PID=$!
 echo "$SERVER_PID" > "$DATA_DIR/server.pid"
 trap 'kill $SERVER_PID 2>/dev/null; rm -f "$DATA_DIR/server.pid"; stop_pid_file "$DATA_DIR/jobs-app.pid" "the job worker"; printf "\nThe web server stopped. PostgreSQL keeps running: npm run stop stops it.\n"; exit 0' INT TERM

@@ -32,7 +32,12 @@ start_jobs_worker test
 trap 'stop_pid_file "$DATA_DIR/jobs-test.pid" "the job worker (test)"' EXIT
 
 step "Browser tests (Chromium)"
-node node_modules/@playwright/test/cli.js test || fail "browser tests failed" "see playwright-report/ and test-results/ (job worker log: .data/jobs-test.log)"
+node node_modules/@playwright/test/cli.js test || {
+  show_log_tail "$DATA_DIR/e2e-server-${ANTINODE_E2E_PORT:-3100}.log" "the test web server"
+  show_log_tail "$DATA_DIR/jobs-test.log" "the job worker"
+  show_log_tail "$DATA_DIR/fakes-test.log" "the local fakes (mail, storage, payments)"
+  fail "browser tests failed" "see playwright-report/, test-results/ and the logs above (in .data/)"
+}
 
 stop_pid_file "$DATA_DIR/fakes-test.pid" "the local fakes (test)"
 step "All tests passed"

@@ -27,7 +27,7 @@ export async function up({ context: queryInterface }: { context: QueryInterface 
   const users = PEOPLE.map((person) => ({ id: randomUUID(), ...person }));
   await queryInterface.bulkInsert(
     'users',
-    users.map((user) => ({ id: user.id, email: user.email, name: user.name, password_hash: passwordHash, unit_system: 'si', ...stamp })),
+    users.map((user) => ({ id: user.id, email: user.email, name: user.name, password_hash: passwordHash, unit_system: 'si', email_verified_at: stamp.created_at, ...stamp })),
   );
   await queryInterface.bulkInsert('memberships', [
     ...users.map((user) => ({ id: randomUUID(), user_id: user.id, team_id: practiceId, role: user.role, ...stamp })),

@@ -2,7 +2,6 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import Link from 'next/link';
-import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { signUpAction } from '@/app/(auth)/actions';
@@ -11,8 +10,8 @@ import { FormAlert } from '@/components/forms/form-alert';
 import { TextField } from '@/components/forms/text-field';
 
 export function SignUpForm() {
-  const router = useRouter();
   const [serverError, setServerError] = useState<string | null>(null);
+  const [sent, setSent] = useState<string | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<SignUpInput>({ resolver: zodResolver(signUpSchema) });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -23,9 +22,17 @@ export function SignUpForm() {
       else setServerError(result.error.message);
       return;
     }
-    router.replace('/projects');
-    router.refresh();
+    setSent(result.data.message);
   });
+
+  if (sent) {
+    return (
+      <div className="space-y-4">
+        <p role="status" className="text-sm">{sent}</p>
+        <p className="text-sm"><Link href="/sign-in" className="text-select-ink underline">Back to sign in</Link></p>
+      </div>
+    );
+  }
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Create an account">
@@ -35,7 +42,7 @@ export function SignUpForm() {
       <TextField label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." error={formState.errors.password?.message} {...register('password')} />
       <TextField label="Team name" hint="Your practice or group. You will be its admin and can invite others." error={formState.errors.teamName?.message} {...register('teamName')} />
       <button type="submit" className="btn-primary w-full" disabled={formState.isSubmitting}>
-        {formState.isSubmitting ? 'Creating…' : 'Create account and team'}
+        {formState.isSubmitting ? 'Sending…' : 'Create account and team'}
       </button>
       <p className="text-center text-sm text-graphite-500">
         Already have an account? <Link href="/sign-in" className="text-select-ink underline">Sign in</Link>

@@ -13,7 +13,7 @@ export function ProjectActions({ project }: { project: ProjectSummary }) {
   const [error, setError] = useState<string | null>(null);
 
   async function patch(body: Record<string, unknown>) {
-    const result = await apiFetch(`/api/v1/projects/${project.id}`, { method: 'PATCH', body });
+    const result = await apiFetch(`/api/v1/projects/${project.id}`, { method: 'PATCH', body: { version: project.version, ...body } });
     if (!result.ok) { setError(result.error.message); return false; }
     setError(null);
     router.refresh();

@@ -1,17 +1,36 @@
-// Changes from the account page; each asks for the current password first.
+// Changes from the account page; each asks for the current password first. Wrong current
+// passwords are budgeted per session and per account (lib/http/rate-limit-rules.ts), so a
+// session someone else got hold of cannot be used to guess the password: past either budget
+// the check is refused (429) for every password, the right one included, until it comes back.
 import { Op, UniqueConstraintError } from 'sequelize';
 import { hashPassword, verifyPassword } from '@/lib/auth/password';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { isSpent, spend, throttledError } from '@/lib/http/rate-limit';
+import { RATE_LIMIT_RULES } from '@/lib/http/rate-limit-rules';
 import { emailChangedMail } from '@/lib/mail/messages';
 import { sendMail } from '@/lib/mail/send';
 import { appUrl } from '@/lib/tokens';
 import { PasswordReset, Session, User } from '@/models';
 
-async function provenUser(userId: string, currentPassword: string): Promise<User> {
+const BUDGETS = [
+  { name: 'currentPasswordPerSession', keyOf: (userId: string, sessionId: string) => sessionId },
+  { name: 'currentPasswordPerAccount', keyOf: (userId: string) => userId },
+] as const;
+
+async function assertMayCheck(userId: string, sessionId: string): Promise<void> {
+  for (const budget of BUDGETS) {
+    const state = await isSpent(budget.name, budget.keyOf(userId, sessionId));
+    if (!state.allowed) throw throttledError(RATE_LIMIT_RULES[budget.name].refusal(state.retryAfterS), state.retryAfterS, 'currentPassword');
+  }
+}
+
+async function provenUser(userId: string, sessionId: string, currentPassword: string): Promise<User> {
+  await assertMayCheck(userId, sessionId);
   const user = await User.findByPk(userId);
   if (!user) throw new AppError('not_signed_in', 'Your session has ended. Sign in again.');
   if (!(await verifyPassword(user.passwordHash, currentPassword))) {
+    for (const budget of BUDGETS) await spend(budget.name, budget.keyOf(userId, sessionId));
     throw new AppError('wrong_credentials', 'The current password is wrong. Nothing was changed.', { field: 'currentPassword' });
   }
   return user;
@@ -19,7 +38,7 @@ async function provenUser(userId: string, currentPassword: string): Promise<User
 
 // New password; every other session of the account ends, this one stays.
 export async function changePassword(userId: string, sessionId: string, currentPassword: string, newPassword: string): Promise<void> {
-  const user = await provenUser(userId, currentPassword);
+  const user = await provenUser(userId, sessionId, currentPassword);
   const passwordHash = await hashPassword(newPassword);
   await sequelize.transaction(async (transaction) => {
     await user.update({ passwordHash }, { transaction });
@@ -28,8 +47,8 @@ export async function changePassword(userId: string, sessionId: string, currentP
   });
 }
 
-export async function changeEmail(userId: string, currentPassword: string, email: string): Promise<string> {
-  const user = await provenUser(userId, currentPassword);
+export async function changeEmail(userId: string, sessionId: string, currentPassword: string, email: string): Promise<string> {
+  const user = await provenUser(userId, sessionId, currentPassword);
   if (user.email === email) throw new AppError('bad_input', 'That is already your e-mail address.', { field: 'email' });
   const previous = user.email;
   try {

@@ -1,9 +1,16 @@
 // Forgotten passwords. The request answers the same whether or not the address has an
-// account; the mailed link works once, for an hour, and only its hash is stored.
+// account, at once: looking the address up and sending the mail happen after the answer
+// (lib/jobs/after-answer.ts), so neither shows in how long it takes. The mailed link works once,
+// for an hour, and only its hash is stored. Requests from one client address, and mails to one
+// account, have budgets (lib/http/rate-limit-rules.ts).
 import { Op } from 'sequelize';
+import { rememberDevice, type PlainCookie } from '@/lib/auth/known-devices';
 import { hashPassword } from '@/lib/auth/password';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { addressKey } from '@/lib/http/client-address';
+import { consumeRateLimit, spend } from '@/lib/http/rate-limit';
+import { afterAnswer } from '@/lib/jobs/after-answer';
 import { passwordResetMail } from '@/lib/mail/messages';
 import { sendMail } from '@/lib/mail/send';
 import { appUrl, hashLinkToken, newLinkToken } from '@/lib/tokens';
@@ -15,25 +22,37 @@ const MIN_GAP_MS = 60_000; // at most one mail a minute per account
 export const RESET_REQUESTED_MESSAGE =
   'If an account uses that address, a link to choose a new password is on its way. It works once, within an hour.';
 
-export async function requestPasswordReset(email: string, now = new Date()): Promise<void> {
+async function mailReset(email: string, now: Date): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user) return;
   const recent = await PasswordReset.count({ where: { userId: user.id, createdAt: { [Op.gt]: new Date(now.getTime() - MIN_GAP_MS) } } });
   if (recent > 0) return;
+  if (!(await spend('resetMailsPerAccount', user.id)).allowed) {
+    console.warn('[mail] password reset not sent: the account has had its reset mails for the day');
+    return;
+  }
   const { token, tokenHash } = newLinkToken();
   const expiresAt = new Date(now.getTime() + RESET_LINK_MINUTES * 60_000);
   await PasswordReset.create({ userId: user.id, tokenHash, expiresAt });
   try {
     await sendMail(passwordResetMail({ to: user.email, link: appUrl(`/reset-password?token=${encodeURIComponent(token)}`), expiresAt }));
   } catch (error) {
-    console.error('[mail] password reset not sent', error); // the answer stays the same
+    console.error('[mail] password reset not sent', error); // the answer has gone: the log is all that can know
   }
 }
 
-// Sets the new password, uses up the link (and any other open link), ends every session.
-export async function resetPassword(token: string, password: string, now = new Date()): Promise<void> {
+/** Counts against the client's budget (429 past it, the same for every address), then answers. */
+export async function requestPasswordReset(email: string, clientAddress: string | null, now = new Date()): Promise<void> {
+  await consumeRateLimit('resetPerAddress', addressKey(clientAddress));
+  afterAnswer('password reset mail', () => mailReset(email, now));
+}
+
+// Sets the new password, uses up the link (and any other open link), ends every session. The
+// browser that used the link proved it reads the account's mail: it is remembered as a known
+// device (lib/auth/known-devices.ts), so others' failed sign-ins do not hold it back.
+export async function resetPassword(token: string, password: string, deviceToken: string | null = null, now = new Date()): Promise<PlainCookie> {
   const passwordHash = await hashPassword(password);
-  await sequelize.transaction(async (transaction) => {
+  const userId = await sequelize.transaction(async (transaction) => {
     const reset = await PasswordReset.findOne({ where: { tokenHash: hashLinkToken(token) }, transaction, lock: transaction.LOCK.UPDATE });
     if (!reset) throw new AppError('not_found', 'This reset link is not valid. Ask for a new one from the sign-in page.', { field: 'token' });
     if (reset.usedAt) throw new AppError('conflict', 'This reset link has already been used. Ask for a new one if you need to change the password again.', { field: 'token' });
@@ -41,5 +60,7 @@ export async function resetPassword(token: string, password: string, now = new D
     await User.update({ passwordHash }, { where: { id: reset.userId }, transaction });
     await PasswordReset.update({ usedAt: now }, { where: { userId: reset.userId, usedAt: null }, transaction });
     await Session.destroy({ where: { userId: reset.userId }, transaction });
+    return reset.userId;
   });
+  return rememberDevice(userId, deviceToken, now);
 }

@@ -8,7 +8,8 @@ export const lucia = new Lucia(sequelizeSessionAdapter, {
   sessionExpiresIn: new TimeSpan(30, 'd'),
   sessionCookie: {
     name: SESSION_COOKIE,
-    expires: false,
+    // The cookie lives as long as the session (30 days, renewed with it), not lucia's 400-day default.
+    expires: true,
     attributes: { secure: process.env.NODE_ENV === 'production', sameSite: 'lax' },
   },
   getUserAttributes: (attributes) => ({ email: attributes.email, name: attributes.name, unitSystem: attributes.unitSystem }),

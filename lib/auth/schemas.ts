@@ -23,3 +23,8 @@ export const signUpSchema = z.object({
   teamName: text({ error: 'Name your team.' }).trim().min(1, 'Name your team, e.g. your practice.').max(120, 'Keep the team name under 120 characters.'),
 });
 export type SignUpInput = z.input<typeof signUpSchema>;
+
+// The link from the sign-up mail.
+export const signUpConfirmSchema = z.object({
+  token: text({ error: 'The confirmation link is incomplete.' }).trim().min(1, 'The confirmation link is incomplete.').max(200, 'The confirmation link is not valid.'),
+});

@@ -3,7 +3,7 @@
 import type { z } from 'zod';
 import { assertCleanInput } from '@/lib/clean-input';
 import { AppError } from '@/lib/errors';
-import { zodToAppError } from '@/lib/validation';
+import { parseExactly } from '@/lib/validation';
 
 export interface BodyLimit {
   maxBytes: number;
@@ -52,8 +52,19 @@ export async function readBodyText(request: Request, limit: BodyLimit): Promise<
 
 const strictUtf8 = new TextDecoder('utf-8', { fatal: true });
 
-/** A JSON body: valid UTF-8 and JSON, clean text and bounded nesting, then the schema. */
+/** application/json, or a type ending in +json, with any parameters. */
+export function isJsonContentType(value: string | null): boolean {
+  return /^application\/([\w.-]+\+)?json\s*(;|$)/i.test(value ?? '');
+}
+
+/**
+ * A JSON body: sent as JSON (415 otherwise, before anything is read), valid UTF-8 and JSON,
+ * clean text and bounded nesting, then the schema, which must know every key.
+ */
 export async function readJsonBody<T extends z.ZodType>(request: Request, schema: T, limit: BodyLimit): Promise<z.infer<T>> {
+  if (!isJsonContentType(request.headers.get('content-type'))) {
+    throw new AppError('unsupported_media_type', 'Send the body as JSON, with the header Content-Type: application/json.');
+  }
   let text: string;
   try {
     text = strictUtf8.decode(await readBodyBytes(request, limit));
@@ -69,9 +80,7 @@ export async function readJsonBody<T extends z.ZodType>(request: Request, schema
     throw new AppError('bad_input', 'The request body is not valid JSON.');
   }
   assertCleanInput(value);
-  const result = schema.safeParse(value);
-  if (!result.success) throw zodToAppError(result.error);
-  return result.data;
+  return parseExactly(schema, value);
 }
 
 /** A multipart/form-data body, parsed only once it is known to be within the limit. */

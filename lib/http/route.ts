@@ -1,5 +1,6 @@
 // The one wrapper every route handler goes through: origin check, who is asking, the
-// permission map, the URL's ids, body reading under a size limit, and errors in one shape.
+// permission map, the URL's ids, body reading under a size limit, errors in one shape, and the
+// security headers on every answer (lib/http/security-headers.ts).
 import { z } from 'zod';
 import { actorFromSessionId, sessionIdFromCookieHeader, type Actor, type TeamMembership } from '@/lib/auth/actor';
 import { assertMayAct } from '@/lib/auth/may-act';
@@ -10,6 +11,7 @@ import { readBodyText, readFormBody, readJsonBody, type BodyLimit } from './body
 import { consumeRateLimit, type RateLimitName } from './rate-limit';
 import { assertRouteParams } from './route-params';
 import { assertSameOrigin } from './same-origin';
+import { withApiSecurityHeaders } from './security-headers';
 
 export type Access = 'public' | 'signed-in' | Action;
 
@@ -61,10 +63,6 @@ export function errorResponse(error: unknown): Response {
   return json({ error: { code: 'internal', message: 'Something went wrong on the server. Nothing was changed; try again.' } }, 500);
 }
 
-export function clientAddress(request: Request): string | null {
-  return request.headers.get('x-forwarded-for')?.split(',')[0]?.trim() || request.headers.get('x-real-ip') || null;
-}
-
 export function route<Params extends Record<string, string> = Record<string, never>>(
   options: RouteOptions,
   handler: (context: RouteContext<Params>) => Promise<Response>,
@@ -96,9 +94,9 @@ export function route<Params extends Record<string, string> = Record<string, nev
       if (actor?.refreshedCookie && !response.headers.has('set-cookie')) {
         response.headers.append('set-cookie', actor.refreshedCookie.serialize());
       }
-      return response;
+      return withApiSecurityHeaders(response);
     } catch (error) {
-      return errorResponse(error);
+      return withApiSecurityHeaders(errorResponse(error));
     }
   };
   return Object.assign(wrapped, { access: options.access });

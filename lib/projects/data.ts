@@ -2,14 +2,14 @@
 import { auditActorById, recordAudit, type AuditActor } from '@/lib/audit/record';
 import { sequelize } from '@/lib/db';
 import { Project } from '@/models';
-import { notFound } from '@/lib/errors';
+import { AppError, notFound } from '@/lib/errors';
 import { isId } from '@/lib/ids';
 import type { ProjectInput, ProjectUpdate } from './schemas';
 
-export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; updatedAt: string }
+export interface ProjectSummary { id: string; name: string; site: string; archived: boolean; version: number; updatedAt: string }
 
 function toSummary(row: Project): ProjectSummary {
-  return { id: row.id, name: row.name, site: row.site, archived: row.archived, updatedAt: row.updatedAt.toISOString() };
+  return { id: row.id, name: row.name, site: row.site, archived: row.archived, version: row.version, updatedAt: row.updatedAt.toISOString() };
 }
 
 export async function listProjects(teamId: string, options: { includeArchived?: boolean } = {}): Promise<ProjectSummary[]> {
@@ -34,7 +34,7 @@ export async function createProject(teamId: string, userId: string, input: Requi
   });
 }
 
-function describeProjectChanges(before: ProjectSummary, changes: ProjectUpdate): string[] {
+function describeProjectChanges(before: ProjectSummary, changes: Omit<ProjectUpdate, 'version'>): string[] {
   return [
     changes.name !== undefined && changes.name !== before.name ? `renamed from ${before.name}` : null,
     changes.site !== undefined && changes.site !== before.site ? `site now ${changes.site || 'blank'}` : null,
@@ -46,10 +46,15 @@ export async function updateProject(teamId: string, actor: AuditActor, projectId
   if (!isId(projectId)) throw notFound('That project');
   const row = await Project.findOne({ where: { teamId, id: projectId } });
   if (!row) throw notFound('That project');
-  const said = describeProjectChanges(toSummary(row), changes);
+  const { version, ...fields } = changes;
+  const said = describeProjectChanges(toSummary(row), fields);
   return sequelize.transaction(async (transaction) => {
-    await row.update(changes, { transaction });
+    const [updated] = await Project.update({ ...fields, version: version + 1 }, { where: { teamId, id: projectId, version }, transaction });
+    if (updated === 0) {
+      throw new AppError('conflict', `Someone changed this project since you opened it (it is now “${row.name}”, version ${row.version}). Reload to see their change, then make yours again.`, { field: 'version' });
+    }
     if (said.length > 0) await recordAudit({ teamId, actor, action: 'project.changed', subject: `${row.name}: ${said.join(', ')}` }, transaction);
+    await row.reload({ transaction });
     return toSummary(row);
   });
 }

@@ -2,7 +2,9 @@
 // to an existing account once its owner proves it (signed in as that address, or password).
 import type { Transaction } from 'sequelize';
 import { hashPassword, verifyPassword } from '@/lib/auth/password';
-import { assertNotThrottled, clearFailures, recordFailure } from '@/lib/auth/throttle';
+import { NO_CLIENT, type SignInClient } from '@/lib/auth/accounts';
+import { isKnownDevice } from '@/lib/auth/known-devices';
+import { assertMayTrySignIn, recordSignInFailure, recordSignInSuccess } from '@/lib/auth/throttle';
 import { recordAudit } from '@/lib/audit/record';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
@@ -42,32 +44,35 @@ export async function previewInvitation(token: string, now = new Date()): Promis
   return { email: row.email, role: row.role, teamName: row.team?.name ?? '', expiresAt: row.expiresAt.toISOString(), accountExists };
 }
 
-async function provenExistingUser(user: User, input: AcceptInvitationInput, signedInUserId: string | null): Promise<void> {
+// The password is checked like a sign-in, with the same slowing down after failures.
+async function provenExistingUser(user: User, input: AcceptInvitationInput, signedInUserId: string | null, client: SignInClient): Promise<void> {
   if (signedInUserId === user.id) return;
   if (!input.password) throw new AppError('bad_input', `You already have an account as ${user.email}: enter its password to join.`, { field: 'password' });
-  const keys = { email: user.email, ip: null };
-  await assertNotThrottled(keys);
+  const attempt = { email: user.email, address: client.address, knownDevice: await isKnownDevice(user.id, client.deviceToken) };
+  await assertMayTrySignIn(attempt);
   if (!(await verifyPassword(user.passwordHash, input.password))) {
-    await recordFailure(keys);
+    await recordSignInFailure(attempt);
     throw new AppError('wrong_credentials', `That is not the password of ${user.email}. Forgotten it? Reset it from the sign-in page.`, { field: 'password' });
   }
-  await clearFailures(user.email);
+  await recordSignInSuccess(attempt);
 }
 
 export async function acceptInvitation(
-  input: AcceptInvitationInput, signedInUserId: string | null, now = new Date(),
+  input: AcceptInvitationInput, signedInUserId: string | null, client: SignInClient = NO_CLIENT, now = new Date(),
 ): Promise<{ userId: string; teamId: string }> {
   const invitation = await usableInvitation(input.token, now);
   const existing = await User.findOne({ where: { email: invitation.email } });
   let newAccount: { name: string; passwordHash: string } | null = null;
-  if (existing) await provenExistingUser(existing, input, signedInUserId);
+  if (existing) await provenExistingUser(existing, input, signedInUserId, client);
   else {
     const fields = parseWith(acceptAsNewSchema, input);
     newAccount = { name: fields.name, passwordHash: await hashPassword(fields.password) };
   }
   return sequelize.transaction(async (transaction) => {
     const row = await usableInvitation(input.token, now, transaction);
-    const user = existing ?? (await User.create({ email: row.email, ...newAccount! }, { transaction }));
+    // The link came to this address: that confirms it, for a new account and an existing one.
+    const user = existing ?? (await User.create({ email: row.email, ...newAccount!, emailVerifiedAt: now }, { transaction }));
+    if (!user.emailVerifiedAt) await user.update({ emailVerifiedAt: now }, { transaction });
     const already = await Membership.findOne({ where: { userId: user.id, teamId: row.teamId }, transaction });
     if (!already) await Membership.create({ userId: user.id, teamId: row.teamId, role: row.role }, { transaction });
     await row.update({ acceptedAt: now }, { transaction });

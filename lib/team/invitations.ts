@@ -1,15 +1,21 @@
 // Invitations of a team: send, list, send again, withdraw. Seat-changing steps lock the
-// team's billing row so two admins cannot both take the last seat.
-import { Op } from 'sequelize';
+// team's billing row so two admins cannot both take the last seat. Only an account whose own
+// address is confirmed may invite. Each mail counts against the team's budget and the
+// recipient's (from any team), "Send again" waits 10 minutes after each mail of an invitation
+// (lib/http/rate-limit-rules.ts), and the mail goes after the answer (lib/jobs/after-answer.ts).
+import { Op, type Transaction } from 'sequelize';
 import { recordAudit, type AuditActor } from '@/lib/audit/record';
 import { billingRow, standingOf } from '@/lib/billing/standing';
 import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
+import { emailKey, isSpent, spend, throttledError, type RateLimitName } from '@/lib/http/rate-limit';
+import { RATE_LIMIT_RULES } from '@/lib/http/rate-limit-rules';
+import { afterAnswer } from '@/lib/jobs/after-answer';
 import { invitationMail } from '@/lib/mail/messages';
 import { sendMail } from '@/lib/mail/send';
 import { ROLE_LABELS, type Role } from '@/lib/permissions';
 import { appUrl, newLinkToken } from '@/lib/tokens';
-import { Invitation, Membership, Team, User } from '@/models';
+import { Invitation, Membership, User } from '@/models';
 import { assertId } from '@/lib/ids';
 import { seatsFullError, seatUsage } from './seats';
 
@@ -41,22 +47,40 @@ export async function listInvitations(teamId: string): Promise<InvitationSummary
   return rows.map((row) => toSummary(row));
 }
 
-async function mailInvitation(row: Invitation, token: string, inviter: AuditActor): Promise<void> {
-  const team = await Team.findByPk(row.teamId);
-  try {
-    await sendMail(invitationMail({
-      to: row.email, teamName: team?.name ?? 'a team', inviterName: inviter.name, role: row.role,
-      link: appUrl(`/invitation?token=${encodeURIComponent(token)}`), expiresAt: row.expiresAt,
-    }));
-  } catch (error) {
-    console.error('[mail] invitation not sent', error);
-    throw new AppError('conflict', `The invitation to ${row.email} is saved, but its mail could not be sent. Use “Send again” in a moment.`);
+function mailInvitation(row: Invitation, token: string): void {
+  const mail = invitationMail({ to: row.email, role: row.role, link: appUrl(`/invitation?token=${encodeURIComponent(token)}`), expiresAt: row.expiresAt });
+  afterAnswer('invitation mail', () => sendMail(mail));
+}
+
+export const UNCONFIRMED_INVITER =
+  'Confirm your own e-mail address before inviting anyone: use the link in the mail we sent when you signed up.';
+
+async function assertInviterConfirmed(inviter: AuditActor, transaction: Transaction): Promise<void> {
+  const user = await User.findByPk(inviter.id, { attributes: ['emailVerifiedAt'], transaction });
+  if (!user?.emailVerifiedAt) throw new AppError('forbidden', UNCONFIRMED_INVITER);
+}
+
+// The budgets one invitation mail counts against: checked first, all spent only when all allow it.
+async function spendMailBudgets(budgets: { name: RateLimitName; key: string }[]): Promise<void> {
+  for (const { name, key } of budgets) {
+    const state = await isSpent(name, key);
+    if (!state.allowed) throw throttledError(RATE_LIMIT_RULES[name].refusal(state.retryAfterS), state.retryAfterS);
   }
+  for (const { name, key } of budgets) await spend(name, key);
+}
+
+function mailBudgets(teamId: string, email: string, invitationId: string): { name: RateLimitName; key: string }[] {
+  return [
+    { name: 'invitationResend', key: invitationId },
+    { name: 'invitationMailsPerTeam', key: teamId },
+    { name: 'invitationMailsPerRecipient', key: emailKey(email) },
+  ];
 }
 
 export async function createInvitation(teamId: string, inviter: AuditActor, input: { email: string; role: Role }, now = new Date()): Promise<InvitationSummary> {
   const { token, tokenHash } = newLinkToken();
   const row = await sequelize.transaction(async (transaction) => {
+    await assertInviterConfirmed(inviter, transaction);
     const billing = await billingRow(teamId, transaction, true);
     const existingUser = await User.findOne({ where: { email: input.email }, transaction });
     if (existingUser && (await Membership.count({ where: { teamId, userId: existingUser.id }, transaction }))) {
@@ -71,10 +95,11 @@ export async function createInvitation(teamId: string, inviter: AuditActor, inpu
       { teamId, email: input.email, role: input.role, tokenHash, invitedById: inviter.id, expiresAt: new Date(now.getTime() + INVITATION_DAYS * DAY_MS) },
       { transaction },
     );
+    await spendMailBudgets(mailBudgets(teamId, input.email, created.id));
     await recordAudit({ teamId, actor: inviter, action: 'invitation.sent', subject: `${input.email} as ${ROLE_LABELS[input.role]}` }, transaction);
     return created;
   });
-  await mailInvitation(row, token, inviter);
+  mailInvitation(row, token);
   return toSummary(row, now);
 }
 
@@ -90,6 +115,7 @@ export async function resendInvitation(teamId: string, inviter: AuditActor, invi
   assertId(invitationId, 'That invitation');
   const { token, tokenHash } = newLinkToken();
   const row = await sequelize.transaction(async (transaction) => {
+    await assertInviterConfirmed(inviter, transaction);
     const billing = await billingRow(teamId, transaction, true);
     const found = await Invitation.findOne({ where: { id: invitationId, teamId, acceptedAt: null, revokedAt: null }, transaction, lock: transaction.LOCK.UPDATE });
     if (!found) throw notFound('That invitation');
@@ -98,11 +124,12 @@ export async function resendInvitation(teamId: string, inviter: AuditActor, invi
       const usage = await seatUsage(teamId, transaction, now);
       if (usage.used >= seats) throw seatsFullError(seats, usage);
     }
+    await spendMailBudgets(mailBudgets(teamId, found.email, found.id));
     await found.update({ tokenHash, expiresAt: new Date(now.getTime() + INVITATION_DAYS * DAY_MS) }, { transaction });
     await recordAudit({ teamId, actor: inviter, action: 'invitation.resent', subject: found.email }, transaction);
     return found;
   });
-  await mailInvitation(row, token, inviter);
+  mailInvitation(row, token);
   return toSummary(row, now);
 }
 

@@ -73,12 +73,20 @@ export function paymentsApp(store: PaymentsStore, webhooks: WebhookSender) {
       emit(subscription.customer, 'customer.subscription.deleted', subscription);
       return subscription;
     } },
-    // Test controls, by the customer's e-mail: hold and release webhooks, settle an invoice.
+    // Test controls, by the customer's e-mail: hold and release webhooks, make the next deliveries
+    // fail (they are retried on the usual delays), settle an invoice.
     { method: 'POST', pattern: /^\/_fake\/(hold|release)$/, handle: ([, verb], form) => {
       const email = text(form.email);
       if (!email) throw new FakeError(400, 'email is required');
       if (verb === 'hold') { webhooks.hold(email); return { holding: email }; }
       return { released: webhooks.release(email) };
+    } },
+    { method: 'POST', pattern: /^\/_fake\/fail$/, handle: (_, form) => {
+      const email = text(form.email);
+      const count = Number(form.count as unknown); // a JSON number or form text
+      if (!email || !Number.isInteger(count) || count < 0) throw new FakeError(400, 'email and a whole count are required');
+      webhooks.failDeliveries(email, count);
+      return { failing: email, count };
     } },
     { method: 'POST', pattern: /^\/_fake\/invoices$/, handle: (_, form) => {
       const paid = text(form.outcome) !== 'failed';
@@ -128,5 +136,5 @@ export async function startPaymentsFake(profile: FakeProfile): Promise<() => Pro
   const handle = paymentsApp(store, webhooks);
   const server = createServer((request, response) => { void handle(request, response); });
   await new Promise<void>((resolve, reject) => { server.once('error', reject); server.listen(profile.paymentsPort, '127.0.0.1', resolve); });
-  return () => new Promise<void>((resolve) => server.close(() => resolve()));
+  return () => new Promise<void>((resolve) => { webhooks.stop(); server.close(() => resolve()); });
 }

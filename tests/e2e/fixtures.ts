@@ -19,7 +19,7 @@ export async function createTeam(name: string): Promise<Team> {
 export async function createPerson(label: string, memberships: { team: Team; role: Role }[]): Promise<{ email: string; user: User }> {
   hashed ??= hashPassword(PASSWORD);
   const email = uniqueEmail(label);
-  const user = await User.create({ email, name: `E2E ${label}`, passwordHash: await hashed });
+  const user = await User.create({ email, name: `E2E ${label}`, passwordHash: await hashed, emailVerifiedAt: new Date() });
   for (const { team, role } of memberships) await Membership.create({ userId: user.id, teamId: team.id, role });
   return { email, user };
 }

@@ -21,7 +21,7 @@ export async function linkFromMail(address: string, path: string): Promise<strin
   return new URL(link).pathname + new URL(link).search;
 }
 
-export async function paymentFake(control: 'hold' | 'release' | 'invoices', body: Record<string, string>): Promise<void> {
+export async function paymentFake(control: 'hold' | 'release' | 'invoices' | 'fail', body: Record<string, string>): Promise<void> {
   const response = await fetch(`${required('PAYMENTS_FAKE_URL')}/_fake/${control}`, {
     method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body),
   });

@@ -27,7 +27,7 @@ export async function changeEmailAction(input: unknown): Promise<ActionResult<{ 
   return runAction('changeEmail', async () => {
     const actor = await signedIn();
     const { currentPassword, email } = parseWith(emailChangeSchema, input);
-    const changed = await changeEmail(actor.user.id, currentPassword, email);
+    const changed = await changeEmail(actor.user.id, actor.sessionId, currentPassword, email);
     revalidatePath('/account');
     return { email: changed };
   });

@@ -1,15 +1,26 @@
-import { afterAll, describe, expect, it } from 'vitest';
+// Forgotten passwords: the request reveals nothing about which addresses have accounts (OWASP
+// Forgot Password Cheat Sheet: "Return a consistent message for both existent and non-existent
+// accounts" and "Ensure that responses return in a consistent amount of time"); here the answer
+// is given before the address is even looked up, and the mail follows. Budgets (20 requests an
+// hour per address, 5 mails a day per account, one a minute) are product rules.
+import { afterAll, afterEach, describe, expect, it, vi } from 'vitest';
 import { POST as requestReset } from '@/app/api/v1/password-resets/route';
 import { POST as completeReset } from '@/app/api/v1/password-resets/complete/route';
 import { signIn } from '@/lib/auth/accounts';
+import { allAnswered, jobsAfterAnswer, pauseAfterAnswer } from '@/lib/jobs/after-answer';
 import { sequelize } from '@/lib/db';
 import { newLinkToken } from '@/lib/tokens';
 import { PasswordReset, Session } from '@/models';
 import { lastLinkTo, mailsTo } from '../helpers/inbox';
 import { createTestTeam, uniqueEmail } from '../helpers/people';
-import { call } from '../helpers/routes';
+import { call, FILE_PEER, freshPeer } from '../helpers/routes';
 
 afterAll(async () => { await sequelize.close(); });
+afterEach(() => {
+  pauseAfterAnswer(false);
+  vi.useRealTimers();
+});
+
 
 describe('forgotten password', () => {
   it('answers the same whether or not the address has an account', async () => {
@@ -21,16 +32,65 @@ describe('forgotten password', () => {
     expect(unknown.body).toEqual(known.body);
   });
 
+  it('answers before looking the address up: the mail is sent after the answer, for a known address only', async () => {
+    const { members } = await createTestTeam('reset-deferred');
+    const known = members.architect.email;
+    const unknown = uniqueEmail('nobody-deferred');
+    await allAnswered(); // what earlier tests left
+    pauseAfterAnswer(true);
+    const answers = [];
+    for (const email of [known, unknown]) {
+      answers.push(await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email }, headers: freshPeer() }));
+    }
+    // Both answered while nothing was looked up, stored or sent: one waiting job each.
+    expect(jobsAfterAnswer()).toBe(2);
+    expect(await PasswordReset.count({ where: { userId: members.architect.id } })).toBe(0);
+    expect(await mailsTo(known)).toEqual([]);
+    expect(answers.map((answer) => [answer.status, answer.body])).toEqual([[202, answers[0].body], [202, answers[0].body]]);
+
+    pauseAfterAnswer(false);
+    await allAnswered();
+    expect(await mailsTo(known)).toHaveLength(1);
+    expect(await mailsTo(unknown)).toEqual([]);
+  });
+
+  it('one address may ask 20 times an hour; then 429 with when to try again, whatever the e-mail', async () => {
+    const headers = freshPeer();
+    const statuses: number[] = [];
+    for (let index = 0; index < 21; index += 1) {
+      statuses.push((await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email: uniqueEmail(`burst-${index}`) }, headers })).status);
+    }
+    expect(statuses).toEqual([...Array<number>(20).fill(202), 429]);
+    const refused = await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email: uniqueEmail('burst-late') }, headers });
+    expect(refused.headers.get('retry-after')).toMatch(/^\d+$/);
+    expect(refused.body).toMatchObject({ error: { code: 'throttled', message: expect.stringContaining('Too many password-reset requests from your network') } });
+    await allAnswered();
+  });
+
+  it('one account gets at most one reset mail a minute and five a day', async () => {
+    const { members } = await createTestTeam('reset-cap');
+    const email = members.viewer.email;
+    for (let minute = 0; minute < 8; minute += 1) {
+      vi.useFakeTimers({ toFake: ['Date'] });
+      vi.setSystemTime(Date.now() + 61_000);
+      await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email }, headers: freshPeer() });
+      await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email }, headers: freshPeer() }); // the same minute
+      await allAnswered();
+    }
+    expect(await mailsTo(email)).toHaveLength(5);
+  });
+
   it('the mailed link sets a new password once and ends every session', async () => {
     const { members, cookieFor } = await createTestTeam('reset-flow');
     await cookieFor('engineer');
     await call(requestReset, 'POST', '/api/v1/password-resets', { body: { email: members.engineer.email } });
+    await allAnswered();
     expect(await mailsTo(members.engineer.email)).toHaveLength(1);
     const token = await lastLinkTo(members.engineer.email, '/reset-password');
     const done = await call(completeReset, 'POST', '/x', { body: { token, password: 'a brand new password' } });
     expect(done.status).toBe(200);
     expect(await Session.count({ where: { userId: members.engineer.id } })).toBe(0);
-    await expect(signIn(members.engineer.email, 'a brand new password', null)).resolves.toMatchObject({ name: 'antinode_session' });
+    await expect(signIn(members.engineer.email, 'a brand new password', { address: FILE_PEER, deviceToken: null })).resolves.toMatchObject({ session: { name: 'antinode_session' } });
 
     const reused = await call(completeReset, 'POST', '/x', { body: { token, password: 'yet another password' } });
     expect(reused.status).toBe(409);

@@ -44,7 +44,7 @@ function examples(f: Fixtures): Record<string, { body: unknown; params?: Record<
     },
     'PUT /api/v1/me/preferences': { body: { unitSystem: 'imperial' } },
     'POST /api/v1/projects': { body: { name: 'Fuzzed project', site: 'Quay 4' } },
-    'PATCH /api/v1/projects/[projectId]': { body: { name: 'Renamed project', site: 'Quay 5', archived: false }, params: { projectId: f.projectId } },
+    'PATCH /api/v1/projects/[projectId]': { body: { version: 1, name: 'Renamed project', site: 'Quay 5', archived: false }, params: { projectId: f.projectId } },
     'POST /api/v1/projects/[projectId]/plans': { body: { name: 'Fuzzed plan' }, params: { projectId: f.projectId } },
     'PATCH /api/v1/plans/[planId]': { body: { name: 'Renamed plan', archived: false }, params: { planId: f.documentPlan.id } },
     'PUT /api/v1/plans/[planId]/document': {
@@ -67,6 +67,8 @@ function examples(f: Fixtures): Record<string, { body: unknown; params?: Record<
     'POST /api/v1/invitations/accept': { body: { token: 'k'.repeat(43), name: 'Fuzzed Person', password: 'a long enough password' } },
     'POST /api/v1/password-resets': { body: { email: 'nobody-fuzzed@example.test' } },
     'POST /api/v1/password-resets/complete': { body: { token: 'r'.repeat(43), password: 'a long enough password' } },
+    'POST /api/v1/sign-ups': { body: { name: 'Fuzzed Person', email: 'fuzzed-sign-up@example.test', password: 'a long enough password', teamName: 'Fuzzed practice' } },
+    'POST /api/v1/sign-ups/confirm': { body: { token: 's'.repeat(43) } },
   };
 }
 

@@ -8,6 +8,7 @@ import { createPlan } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
 import { storePlanBackground } from '@/lib/uploads/data';
 import { tinyPng } from '../helpers/files';
+import { publicOrigin } from '@/lib/http/same-origin';
 import { newLinkToken } from '@/lib/tokens';
 import { Invitation, Membership } from '@/models';
 import { addMember, createTestTeam, type TestTeam } from '../helpers/people';
@@ -30,6 +31,8 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/invitations/accept': 'public',
   'POST /api/v1/password-resets': 'public',
   'POST /api/v1/password-resets/complete': 'public',
+  'POST /api/v1/sign-ups': 'public',
+  'POST /api/v1/sign-ups/confirm': 'public',
   'GET /api/v1/team/audit': 'audit.read',
   'GET /api/v1/team/audit/export': 'audit.read',
   'GET /api/v1/team/billing': 'billing.manage',
@@ -169,7 +172,7 @@ describe('cross-site writes', () => {
     const answer = await call(POST, 'POST', '/api/v1/projects', {
       cookie: await testTeam.cookieFor('acoustician'),
       body: { name: 'Same origin' },
-      headers: { origin: 'http://localhost' },
+      headers: { origin: publicOrigin() },
     });
     expect(answer.status).toBe(201);
   });

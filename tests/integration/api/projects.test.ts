@@ -31,7 +31,7 @@ describe('projects API', () => {
 
   it('refuses a body that is not JSON or is too large', async () => {
     const cookie = await teamA.cookieFor('acoustician');
-    const request = new Request('http://localhost/api/v1/projects', { method: 'POST', headers: { cookie, host: 'localhost' }, body: '{name:' });
+    const request = new Request('http://localhost/api/v1/projects', { method: 'POST', headers: { cookie, host: 'localhost', 'content-type': 'application/json' }, body: '{name:' });
     const notJson = await POST(request, { params: Promise.resolve({}) });
     expect(notJson.status).toBe(400);
     const huge = await call(POST, 'POST', '/api/v1/projects', { cookie, body: { name: 'x', site: 'y'.repeat(20_000) } });

@@ -14,7 +14,7 @@ export function uniqueEmail(label: string): string {
 
 export async function addMember(teamId: string, role: Role, label: string = role): Promise<User> {
   cachedHash ??= hashPassword(TEST_PASSWORD);
-  const user = await User.create({ email: uniqueEmail(label), name: `Test ${label}`, passwordHash: await cachedHash });
+  const user = await User.create({ email: uniqueEmail(label), name: `Test ${label}`, passwordHash: await cachedHash, emailVerifiedAt: new Date() });
   await Membership.create({ userId: user.id, teamId, role });
   return user;
 }

@@ -1,6 +1,7 @@
 // Finds every route handler under app/api and calls it directly, as Next would.
 import { readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
+import { PEER_HEADER } from '@/lib/http/client-address';
 import type { RouteHandler } from '@/lib/http/route';
 
 export const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
@@ -35,6 +36,17 @@ export async function loadHandlers(route: RouteFile): Promise<Partial<Record<Met
   return handlers;
 }
 
+// The address requests of this test file come from (the server's peer header, as
+// scripts/serve.mjs sets it): one per file, so the per-address budgets one file spends do not
+// hold back another's.
+export const FILE_PEER = `10.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}.${1 + Math.floor(Math.random() * 250)}`;
+
+/** A fresh peer address, for a request that must not meet a per-address budget another spent. */
+export function freshPeer(): Record<string, string> {
+  const part = (from: number, span: number) => from + Math.floor(Math.random() * span);
+  return { [PEER_HEADER]: `100.${part(64, 60)}.${part(0, 250)}.${part(1, 250)}` };
+}
+
 export async function call(
   handler: RouteHandler,
   method: Method,
@@ -42,7 +54,7 @@ export async function call(
   // body is sent as JSON; rawBody (for bodies that may not be JSON at all) exactly as given.
   options: { cookie?: string; body?: unknown; rawBody?: string; params?: Record<string, string>; headers?: Record<string, string> } = {},
 ): Promise<{ status: number; body: unknown; headers: Headers }> {
-  const headers: Record<string, string> = { host: 'localhost', ...options.headers };
+  const headers: Record<string, string> = { host: 'localhost', [PEER_HEADER]: FILE_PEER, ...options.headers };
   if (options.cookie) headers.cookie = options.cookie;
   let body: string | undefined = options.rawBody;
   if (options.body !== undefined) body = JSON.stringify(options.body);

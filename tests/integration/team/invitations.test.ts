@@ -1,15 +1,18 @@
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, describe, expect, it, vi } from 'vitest';
 import { POST as accept } from '@/app/api/v1/invitations/accept/route';
 import { POST as invite } from '@/app/api/v1/team/invitations/route';
+import { POST as resend } from '@/app/api/v1/team/invitations/[invitationId]/resend/route';
 import { DELETE as revoke } from '@/app/api/v1/team/invitations/[invitationId]/route';
 import { sequelize } from '@/lib/db';
+import { allAnswered } from '@/lib/jobs/after-answer';
 import { newLinkToken } from '@/lib/tokens';
-import { AuditEvent, Invitation, Membership, User } from '@/models';
-import { lastLinkTo } from '../helpers/inbox';
+import { AuditEvent, Invitation, Membership, Team, User } from '@/models';
+import { lastLinkTo, mailsTo } from '../helpers/inbox';
 import { addMember, createTestTeam, TEST_PASSWORD, uniqueEmail } from '../helpers/people';
 import { call } from '../helpers/routes';
 
 afterAll(async () => { await sequelize.close(); });
+afterEach(() => { vi.useRealTimers(); });
 
 const DAY_MS = 86_400_000;
 
@@ -27,6 +30,7 @@ describe('invitations', () => {
     const sent = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email, role: 'architect' } });
     expect(sent.status).toBe(201);
     const stored = await Invitation.findOne({ where: { teamId: team.id, email } });
+    await allAnswered();
     const token = await lastLinkTo(email, '/invitation');
     expect(stored!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(stored!.tokenHash).not.toContain(token);
@@ -41,6 +45,85 @@ describe('invitations', () => {
     const again = await call(accept, 'POST', '/api/v1/invitations/accept', { body: { token, name: 'Someone Else', password: 'another long password' } });
     expect(again.status).toBe(409);
     expect(again.body).toMatchObject({ error: { code: 'conflict', message: 'This invitation has already been used. Sign in to reach the team.', field: 'token' } });
+  });
+
+  it('the mail carries no name or text chosen by the team: only our words and the link', async () => {
+    const { team, members, cookieFor } = await createTestTeam('spam-names');
+    await Membership.destroy({ where: { teamId: team.id, role: ['engineer', 'architect', 'viewer'] } });
+    await Team.update({ name: 'WIN A PRIZE at prize.spam.example' }, { where: { id: team.id } });
+    await User.update({ name: 'Call +1 555 0100 now, visit spam.example' }, { where: { id: members.admin.id } });
+    const email = uniqueEmail('spam-invitee');
+    expect((await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email, role: 'viewer' } })).status).toBe(201);
+    await allAnswered();
+    const [mail] = await mailsTo(email);
+    expect(mail.subject).toBe('An invitation to join a team on Antinode');
+    expect(`${mail.subject}\n${mail.text}`).not.toMatch(/spam\.example|555 0100|PRIZE/);
+    expect(mail.text).toMatch(/\/invitation\?token=/);
+  });
+
+  it('“Send again” waits 10 minutes after each mail, and says so', async () => {
+    // Before, 10 presses in 2 s sent 11 mails.
+    const { team, cookieFor } = await createTestTeam('resend');
+    await Membership.destroy({ where: { teamId: team.id, role: ['engineer', 'architect', 'viewer'] } });
+    const admin = await cookieFor('admin');
+    const email = uniqueEmail('resent');
+    await call(invite, 'POST', '/api/v1/team/invitations', { cookie: admin, body: { email, role: 'viewer' } });
+    const invitationId = (await Invitation.findOne({ where: { teamId: team.id, email } }))!.id;
+    const presses = [];
+    for (let press = 0; press < 10; press += 1) presses.push(await call(resend, 'POST', '/x', { cookie: admin, params: { invitationId } }));
+    expect(presses.map((answer) => answer.status)).toEqual(Array<number>(10).fill(429));
+    expect(presses[0].body).toMatchObject({ error: { code: 'throttled', message: expect.stringMatching(/^This invitation was sent less than 10 minutes ago\. Give the mail time to arrive; you can send it again in \d+ (s|minutes)\.$/) } });
+    await allAnswered();
+    expect(await mailsTo(email)).toHaveLength(1);
+
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(Date.now() + 10 * 60_000 + 1000);
+    expect((await call(resend, 'POST', '/x', { cookie: admin, params: { invitationId } })).status).toBe(200);
+    await allAnswered();
+    expect(await mailsTo(email)).toHaveLength(2);
+  });
+
+  it('inviting and withdrawing in a loop sends one address at most 3 mails a day', async () => {
+    const { team, cookieFor } = await createTestTeam('loop');
+    await Membership.destroy({ where: { teamId: team.id, role: ['engineer', 'architect', 'viewer'] } });
+    const admin = await cookieFor('admin');
+    const email = uniqueEmail('looped');
+    const statuses: number[] = [];
+    for (let round = 0; round < 5; round += 1) {
+      const sent = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: admin, body: { email, role: 'viewer' } });
+      statuses.push(sent.status);
+      const open = await Invitation.findOne({ where: { teamId: team.id, email, revokedAt: null } });
+      if (open) await call(revoke, 'DELETE', '/x', { cookie: admin, params: { invitationId: open.id } });
+    }
+    expect(statuses).toEqual([201, 201, 201, 429, 429]);
+    await allAnswered();
+    expect(await mailsTo(email)).toHaveLength(3);
+  });
+
+  it('one team sends at most 30 invitation mails a day', async () => {
+    const { team, cookieFor } = await createTestTeam('team-cap');
+    await Membership.destroy({ where: { teamId: team.id, role: ['engineer', 'architect', 'viewer'] } });
+    const admin = await cookieFor('admin');
+    const statuses: number[] = [];
+    for (let index = 0; index < 31; index += 1) {
+      const sent = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: admin, body: { email: uniqueEmail(`cap-${index}`), role: 'viewer' } });
+      statuses.push(sent.status);
+      const open = await Invitation.findOne({ where: { teamId: team.id, revokedAt: null, acceptedAt: null } });
+      if (open) await call(revoke, 'DELETE', '/x', { cookie: admin, params: { invitationId: open.id } });
+    }
+    expect(statuses).toEqual([...Array<number>(30).fill(201), 429]);
+    await allAnswered();
+  });
+
+  it('an account whose own address is not confirmed cannot invite', async () => {
+    const { team, members, cookieFor } = await createTestTeam('unconfirmed');
+    await Membership.destroy({ where: { teamId: team.id, role: ['engineer', 'architect', 'viewer'] } });
+    await User.update({ emailVerifiedAt: null }, { where: { id: members.admin.id } });
+    const email = uniqueEmail('not-sent');
+    const answer = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email, role: 'viewer' } });
+    expect(answer.status).toBe(403);
+    expect(answer.body).toMatchObject({ error: { code: 'forbidden', message: expect.stringContaining('Confirm your own e-mail address before inviting anyone') } });
+    expect(await Invitation.count({ where: { teamId: team.id } })).toBe(0);
   });
 
   it('refuses an expired link and says to ask for a new one', async () => {

@@ -4,12 +4,16 @@ import { CancelSubscription } from '@/components/team/cancel-subscription';
 import { SeatsForm } from '@/components/team/seats-form';
 import { requireActor } from '@/lib/auth/current';
 import { billingOverview } from '@/lib/billing/overview';
+import { reconcileTeamForPage } from '@/lib/billing/reconcile';
 
 export const metadata: Metadata = { title: 'Seats and billing' };
 
 export default async function TeamBillingPage() {
   const actor = await requireActor();
-  const billing = await billingOverview(actor.team!.teamId); // the layout refuses anyone but an admin
+  // The layout refuses anyone but an admin. The stored seats are first brought in line with the
+  // payment service, so a webhook that never arrived does not leave the team behind.
+  await reconcileTeamForPage(actor.team!.teamId);
+  const billing = await billingOverview(actor.team!.teamId);
   return (
     <div className="space-y-6">
       <section className="panel p-4" aria-labelledby="seats-title">
