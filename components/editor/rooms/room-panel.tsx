@@ -47,7 +47,7 @@ export function RoomPanel({ document, metresPerPixel, room, result, flags, unitS
       </div>
       <details open>
         <summary className="cursor-pointer text-xs font-semibold">Results from the saved plan</summary>
-        <div className="mt-2"><RoomResults result={result} flags={flags} /></div>
+        <div className="mt-2"><RoomResults result={result} flags={flags} unitSystem={unitSystem} /></div>
       </details>
       <fieldset disabled={!editable} className="space-y-3">
         <legend className="mb-1 text-xs font-semibold">Properties</legend>
