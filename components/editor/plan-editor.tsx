@@ -194,7 +194,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
           {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
         </div>
-        <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
+        <aside className={`${openRoom ? 'w-[38rem]' : 'w-[25rem]'} shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4`} aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (
             <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null}
               flags={openRoomFlags} unitSystem={unitSystem} editable={editable}

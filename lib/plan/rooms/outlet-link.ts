@@ -94,11 +94,16 @@ export function outletLink(doc: PlanDocument, room: PlanRoom, metresPerPixel: nu
 
 /** How the room's outlet stands against a duct end at the plan point (none: the room has no end). */
 export function outletLinkTo(room: PlanRoom, endPoint: Point | undefined, metresPerPixel: number): OutletLink {
+  return outletPointLink(room, room.outlet, endPoint, metresPerPixel);
+}
+
+/** How an outlet of the room at the given place stands against a duct end at the plan point (any of its outlets). */
+export function outletPointLink(room: PlanRoom, outlet: { xM: number; yM: number }, endPoint: Point | undefined, metresPerPixel: number): OutletLink {
   if (!endPoint) return { kind: 'unlinked' };
   const end = { x: endPoint.x, y: endPoint.y };
   const placement = outletPlacementAt(room, end, metresPerPixel);
-  const atPlacement = Math.hypot(room.outlet.xM - placement.xM, room.outlet.yM - placement.yM) < OUTLET_AT_END_TOLERANCE_M;
-  if (!atPlacement) return { kind: 'apart', end, apartM: distancePx(roomPointPx(room, room.outlet, metresPerPixel), end) * metresPerPixel };
+  const atPlacement = Math.hypot(outlet.xM - placement.xM, outlet.yM - placement.yM) < OUTLET_AT_END_TOLERANCE_M;
+  if (!atPlacement) return { kind: 'apart', end, apartM: distancePx(roomPointPx(room, outlet, metresPerPixel), end) * metresPerPixel };
   return placement.outsideByM > 0 ? { kind: 'end-outside', end, outsideByM: placement.outsideByM } : { kind: 'at-end', end };
 }
 

@@ -69,7 +69,7 @@ export function roomPlaceProblems(room: PlanRoom, nodeExists: (nodeId: string) =
     if (ids.has(outlet.id)) problems.push({ path: [...outlet.path, 'id'], message: `repeats the id "${outlet.id}"` });
     ids.add(outlet.id);
     if (outlet.nodeId === null) continue;
-    if (!nodeExists(outlet.nodeId)) problems.push({ path: [...outlet.path, 'nodeId'], message: `names node "${outlet.nodeId}", which does not exist (there is no point with id "${outlet.nodeId}")` });
+    if (!nodeExists(outlet.nodeId)) problems.push({ path: [...outlet.path, 'nodeId'], message: `there is no point with id "${outlet.nodeId}" on the plan` });
     const already = ends.get(outlet.nodeId);
     if (already !== undefined) problems.push({ path: [...outlet.path, 'nodeId'], message: `feeds the room already as ${already}; one run end is one outlet` });
     ends.set(outlet.nodeId, outlet.id === FIRST_OUTLET_ID ? 'its first outlet' : 'another outlet');

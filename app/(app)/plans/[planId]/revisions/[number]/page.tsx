@@ -58,7 +58,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
       )}
       <ChangesTable changes={changes} number={revision.number} />
       <TreatmentTable treatments={revision.extras.treatments ?? []} />
-      <RoomPaths rooms={revision.extras.rooms ?? []} />
+      <RoomPaths rooms={revision.extras.rooms ?? []} unitSystem={actor.user.unitSystem} />
       <RevisionWorkspace
         planId={planId} revisionId={revision.id} document={revision.document} metresPerPixel={revision.metresPerPixel} background={background}
         runs={revision.analysis} risks={revision.extras.risks ?? []} canReview={canReview} canComment={can(role, 'comment.write')}
