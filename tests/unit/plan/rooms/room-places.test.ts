@@ -1,7 +1,7 @@
 // A room's further outlets and listeners in the plan document: checked where they are saved and edited,
 // kept with their duct ends, unlinked when the end is deleted; a saved plan without them reads as before.
 import { describe, expect, it } from 'vitest';
-import { initialEditorState, parsePlanDocument, performCommand, roomListeners, roomOutlets, tryCommand, type PlanDocument } from '@/lib/plan';
+import { initialEditorState, parsePlanDocument, performCommand, roomListeners, roomOutlets, tryCommand, type PlanDocument, type PlanRoom } from '@/lib/plan';
 import { demoRecitalPlan, DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL } from '@/lib/plans/demo/recital-plan';
 
 const state = initialEditorState();
@@ -19,7 +19,7 @@ describe('outlets and listeners of a room', () => {
     const saved = { ...doc, rooms: [older] };
     expect(parsePlanDocument(saved).ok).toBe(true);
     expect(roomOutlets(older)).toHaveLength(1);
-    expect(older.roomCorrection ?? 'furnished').toBe('furnished');
+    expect((older as PlanRoom).roomCorrection ?? 'furnished').toBe('furnished');
   });
 
   it('the document schema names a second use of one end, an outlet outside the box, a missing point, a repeated listener name and an unknown correction', () => {
