@@ -3,7 +3,7 @@
 import { memo } from 'react';
 import { Group, Label, Line, Rect, Tag, Text } from 'react-konva';
 import { fedFrom, outletPointLink, roomOutlets, roomPointPx, withOutletAtItsEnd, type OutletLink, type PlanDocument, type PlanRoom, type Point } from '@/lib/plan';
-import { outletWordPlace } from './outlet-label-place';
+import { endWordPlace } from './end-word-place';
 
 /** One outlet of a room as drawn: where it is, how it stands against its duct end, its word. */
 export interface OutletMark {
@@ -62,7 +62,7 @@ export const OutletLinkShape = memo(function OutletLinkShape({ mark, scale }: { 
   const end = link.kind === 'unlinked' ? null : link.end;
   const leader = end !== null && Math.hypot(end.x - outlet.x, end.y - outlet.y) * scale >= LEADER_MIN_SCREEN_PX;
   const text = `${mark.name}${SUFFIX[link.kind]}`;
-  const place = outletWordPlace(outlet, mark.awayRad, text.length, FONT_PX, PADDING_PX, scale);
+  const place = endWordPlace(outlet, mark.awayRad, 'right', text.length, FONT_PX, PADDING_PX, scale);
   return (
     <Group listening={false} name="outlet-link">
       {leader && end && <Line points={[outlet.x, outlet.y, end.x, end.y]} stroke="#3a3e45" strokeWidth={1.5 / scale} dash={[4 / scale, 3 / scale]} />}

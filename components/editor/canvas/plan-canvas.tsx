@@ -16,13 +16,13 @@ import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
 import { DraggedEndOutlets, OutletLinkShape, roomOutletMarks } from './outlet-link-shape';
 import { SegmentLine } from './segment-line';
+import { endNamePlace, END_NAME_FONT_PX } from './end-word-place';
 import { TerminationGlyph } from './termination-glyph';
 import { useRoomDrag } from './use-room-drag';
 import { GRID_AREA_PX, openingArea } from './opening-area';
 import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
 
 /** Screen distance from a run end to its label, px. */
-const END_LABEL_AWAY_PX = 26;
 
 export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
 export interface CanvasPointer { type: 'down' | 'move' | 'dblclick'; point: Point; target: CanvasTarget; shiftKey: boolean; scale: number }
@@ -152,9 +152,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         const endLabel = labels.nodes[nodeId];
         if (endLabel) {
           // beyond the end, along the segment's direction
-          const awayPx = END_LABEL_AWAY_PX / view.scale;
-          glyphs.push(<Text key={`l${nodeId}`} x={node.x + Math.cos(angleRad) * awayPx} y={node.y + Math.sin(angleRad) * awayPx} text={endLabel} fontSize={10 / view.scale}
-            fontFamily="IBM Plex Mono, monospace" fill="#5d626b" offsetX={(endLabel.length * 3) / view.scale} offsetY={5 / view.scale} listening={false} name="end-label" />);
+          const place = endNamePlace(node, angleRad, endLabel.length, view.scale);
+          glyphs.push(<Text key={`l${nodeId}`} x={place.x} y={place.y} text={endLabel} fontSize={END_NAME_FONT_PX / view.scale}
+            fontFamily="IBM Plex Mono, monospace" fill="#5d626b" listening={false} name="end-label" />);
         }
       }
     }
