@@ -9,6 +9,8 @@ const cell = (value: number) => (Math.abs(value) < 0.05 ? 0 : value).toFixed(1);
 
 interface TableProps {
   caption: string;
+  /** The first column's heading. */
+  heading: string;
   rows: readonly PathRow[];
   units: UnitSystem;
   /** The band marked as governing (a listener's table). */
@@ -19,7 +21,7 @@ interface TableProps {
 
 // One table, an element or outlet per row and an octave band per column, compact enough for the room
 // panel: the words column takes what is left, the numbers never wrap.
-function BandTable({ caption, rows, units, governingHz, belowSchroederHz, testId }: TableProps) {
+function BandTable({ caption, heading, rows, units, governingHz, belowSchroederHz, testId }: TableProps) {
   const governing = governingHz === undefined ? -1 : OCTAVE_BANDS_HZ.indexOf(governingHz);
   return (
     <div className="overflow-x-auto">
@@ -27,7 +29,7 @@ function BandTable({ caption, rows, units, governingHz, belowSchroederHz, testId
         <colgroup><col />{BAND_LABELS.map((label) => <col key={label} className="w-[2.6rem]" />)}</colgroup>
         <thead>
           <tr className="border-b border-graphite-100 text-left text-graphite-500">
-            <th scope="col" className="py-1 pr-2 font-medium">{caption}</th>
+            <th scope="col" className="py-1 pr-2 font-medium">{heading}</th>
             {BAND_LABELS.map((label, band) => (
               <th key={label} scope="col" className={`num whitespace-nowrap py-1 pl-1 text-right font-medium ${band === governing ? 'text-risk-ink' : ''}`}
                 title={belowSchroederHz.includes(OCTAVE_BANDS_HZ[band]) ? 'Below the room’s Schroeder frequency' : undefined}>
@@ -74,12 +76,12 @@ export function NoiseTablesView({ tables, units, listenerId }: NoiseTablesViewPr
       {tables.outlets.map((outlet) => (
         <details key={outlet.outletId} open className="space-y-1" data-testid="outlet-path">
           <summary className="cursor-pointer text-xs font-semibold">{outlet.label} <span className="font-normal text-graphite-500">· {outlet.runName}</span></summary>
-          <BandTable caption={`Path to ${outlet.label}`} rows={outlet.rows} units={units} belowSchroederHz={below} testId="outlet-path-table" />
+          <BandTable caption={`Path to ${outlet.label}`} heading="Element" rows={outlet.rows} units={units} belowSchroederHz={below} testId="outlet-path-table" />
         </details>
       ))}
       {listeners.map((listener) => (
         <section key={listener.listenerId} className="space-y-1" data-testid="listener-path">
-          <BandTable caption={`At listener ${listener.name}`} rows={listener.rows} units={units} governingHz={listener.governingHz} belowSchroederHz={below} testId="listener-path-table" />
+          <BandTable caption={`At listener ${listener.name}`} heading={`At listener ${listener.name}`} rows={listener.rows} units={units} governingHz={listener.governingHz} belowSchroederHz={below} testId="listener-path-table" />
           <ListenerRatings table={listener} />
         </section>
       ))}

@@ -95,8 +95,8 @@ function listenerTable(noise: RoomNoise, listener: RoomNoise['listeners'][number
   const several = listener.contributions.length > 1;
   const rows: PathRow[] = listener.contributions.flatMap((part): PathRow[] => {
     const from = labels.get(part.outletId) ?? 'Outlet';
-    const words = (units: UnitSystem) => `room correction, ${CORRECTION_WORDS[noise.correction]}, ${formatLength(part.distanceM, units, 'run')} away (Lp − Lw)`;
-    const correction: PathRow = { role: 'correction', ...twoWays((units) => (several ? `${from}: ${words(units)}` : `Room correction, ${words(units).slice('room correction, '.length)}`)), valuesDb: part.roomCorrectionDb };
+    // the method is stated once above the tables (correctionWords)
+    const correction: PathRow = { role: 'correction', ...twoWays((units) => `${several ? `${from}, ` : 'Outlet '}${formatLength(part.distanceM, units, 'run')} away: room correction (Lp − Lw)`), valuesDb: part.roomCorrectionDb };
     return several ? [correction, { role: 'contribution', label: `${from}: level at ${listener.name}`, valuesDb: part.levelDb }] : [correction];
   });
   rows.push({ role: 'listener', label: `Level at ${listener.name}${several ? ', energy sum of the outlets' : ''} (dB re 20 µPa)`, valuesDb: listener.levelDb, total: true });
