@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import { nextListenerName, randomId, type PlanRoom, type RoomListener } from '@/lib/plan';
 import type { UnitSystem } from '@/models/user';
 import { PointFields } from './point-fields';
@@ -9,11 +9,15 @@ import { PointFields } from './point-fields';
 const SEATED_EAR_HEIGHT_M = 1.2;
 
 function ListenerName({ listener, onCommit }: { listener: RoomListener; onCommit: (name: string) => void }) {
+  const id = useId();
   const [name, setName] = useState(listener.name);
   useEffect(() => setName(listener.name), [listener.name]);
   return (
-    <input aria-label={`Name of listener ${listener.name}`} className="field-input w-32 py-0.5 text-xs" value={name} onChange={(event) => setName(event.target.value)}
-      onBlur={() => { if (name.trim() && name.trim() !== listener.name) onCommit(name.trim()); else setName(listener.name); }} />
+    <div className="flex items-center gap-2">
+      <label htmlFor={id} className="text-xs font-medium text-graphite-700">Listener name</label>
+      <input id={id} className="field-input w-32 py-0.5 text-xs" value={name} onChange={(event) => setName(event.target.value)}
+        onBlur={() => { if (name.trim() && name.trim() !== listener.name) onCommit(name.trim()); else setName(listener.name); }} />
+    </div>
   );
 }
 
