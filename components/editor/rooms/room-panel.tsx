@@ -29,6 +29,8 @@ interface RoomPanelProps {
   onChange: (changes: Partial<Omit<PlanRoom, 'id'>>) => void;
   onDelete: () => void;
   onClose: () => void;
+  /** Opens the room's noise path tables on the sheet over the canvas. */
+  onShowNoiseTables: () => void;
 }
 
 /** The open ends of every run, for choosing the one that feeds the room. */
@@ -38,7 +40,7 @@ function runEnds(doc: PlanDocument): { nodeId: string; label: string }[] {
 }
 
 // The room's form (name, size, finishes, criterion, outlets, listeners, room correction) and its results.
-export function RoomPanel({ document, metresPerPixel, room, result, flags, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
+export function RoomPanel({ document, metresPerPixel, room, result, flags, unitSystem, editable, onChange, onDelete, onClose, onShowNoiseTables }: RoomPanelProps) {
   const [name, setName] = useState(room.name);
   useEffect(() => setName(room.name), [room.name]);
   const side = (key: 'lengthM' | 'widthM' | 'heightM') => (valueM: number | null) => { if (valueM !== null) onChange({ [key]: valueM }); };
@@ -50,7 +52,7 @@ export function RoomPanel({ document, metresPerPixel, room, result, flags, unitS
       </div>
       <details open>
         <summary className="cursor-pointer text-xs font-semibold">Results from the saved plan</summary>
-        <div className="mt-2"><RoomResults result={result} flags={flags} unitSystem={unitSystem} /></div>
+        <div className="mt-2"><RoomResults result={result} flags={flags} onShowNoiseTables={onShowNoiseTables} /></div>
       </details>
       <fieldset disabled={!editable} className="space-y-3">
         <legend className="mb-1 text-xs font-semibold">Properties</legend>

@@ -1,21 +1,19 @@
 'use client';
 
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import { directivityAt, OCTAVE_BANDS_HZ, type RiskFlag } from '@/lib/acoustic';
-import { noiseTables } from '@/lib/plans/noise-path/path-tables';
 import type { RoomResult } from '@/lib/plans/risks';
-import type { UnitSystem } from '@/lib/plan/units';
-import { NoiseTablesView } from '@/components/noise/noise-tables';
 import { ModeChart } from './mode-chart';
 import { ModeList } from './mode-list';
+import { NoiseSummary } from './noise-summary';
 import { Reflectogram } from './reflectogram';
 import { SpectrumChart } from './spectrum-chart';
 
 // The room's results from the saved plan: figures, mode chart with the run's resonances and fan
 // tones, the mode list (with the modes the room's flags cite), the reflectogram at the first listener,
-// the spectrum at a chosen listener against the criterion and the noise from every outlet.
-export function RoomResults({ result, flags, unitSystem }: { result: RoomResult | null; flags: readonly RiskFlag[]; unitSystem: UnitSystem }) {
-  const tables = useMemo(() => (result?.noise ? noiseTables(result.noise) : null), [result?.noise]);
+// the spectrum at a chosen listener against the criterion, and each listener's ratings (the full noise
+// path tables open on a sheet over the canvas).
+export function RoomResults({ result, flags, onShowNoiseTables }: { result: RoomResult | null; flags: readonly RiskFlag[]; onShowNoiseTables: () => void }) {
   const [chosenListenerId, setListenerId] = useState<string | null>(null);
   if (!result) return <p className="text-sm text-graphite-500">Results appear once the room is saved.</p>;
   if (result.problem || !result.analysis) return <p className="text-sm text-graphite-700" role="status">{result.problem ?? 'No results yet.'}</p>;
@@ -53,7 +51,7 @@ export function RoomResults({ result, flags, unitSystem }: { result: RoomResult 
           criterionDb={result.criterionDb} criterionNc={result.criterionNc} levelsNc={listener ? listener.nc : result.levelsNc} />
       </section>
       <section><h3 className="mb-1 text-xs font-semibold">Noise path, fan to listener</h3>
-        {tables && listenerId ? <NoiseTablesView tables={tables} units={unitSystem} listenerId={listenerId} />
+        {noise ? <NoiseSummary noise={noise} onShowTables={onShowNoiseTables} />
           : <p className="text-xs text-graphite-500" data-testid="noise-path-missing">{result.noiseProblem ?? 'Connect the room to the run end that feeds it.'}</p>}</section>
     </div>
   );
