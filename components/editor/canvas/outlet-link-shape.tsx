@@ -14,7 +14,7 @@ export interface OutletMark {
   link: OutletLink;
   /** "outlet", or "outlet 2", "outlet 3" for a room's further outlets. */
   name: string;
-  /** Direction the duct runs out of its end, radians on the plan (null: unknown or not at its end). */
+  /** Direction the duct runs out of its end (at its end) or from the end to the outlet (away from it), radians on the plan; null: unknown. */
   awayRad: number | null;
 }
 
@@ -45,10 +45,11 @@ export function roomOutletMarks(doc: PlanDocument, room: PlanRoom, metresPerPixe
   return roomOutlets(room).map((outlet, index) => {
     const end = outlet.nodeId === null ? undefined : positions.get(outlet.nodeId);
     const link = outletPointLink(room, outlet, end, metresPerPixel);
-    return {
-      key: `${room.id}:${outlet.id}`, nodeId: outlet.nodeId, point: roomPointPx(room, outlet, metresPerPixel), link, name: index === 0 ? 'outlet' : `outlet ${index + 1}`,
-      awayRad: link.kind === 'at-end' ? awayFromSegment(doc, outlet.nodeId, positions) : null,
-    };
+    const point = roomPointPx(room, outlet, metresPerPixel);
+    // at its end the words go by the duct's direction; away from it, by the leader's (so the word never lies on the leader)
+    const awayRad = link.kind === 'at-end' ? awayFromSegment(doc, outlet.nodeId, positions)
+      : link.kind === 'unlinked' || (point.x === link.end.x && point.y === link.end.y) ? null : Math.atan2(point.y - link.end.y, point.x - link.end.x);
+    return { key: `${room.id}:${outlet.id}`, nodeId: outlet.nodeId, point, link, name: index === 0 ? 'outlet' : `outlet ${index + 1}`, awayRad };
   });
 }
 
