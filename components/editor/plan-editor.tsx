@@ -32,6 +32,8 @@ import { usePlanResults } from './use-plan-results';
 import { usePlanRisks } from './use-plan-risks';
 import { RiskDrawer } from './risk/risk-drawer';
 import { RoomPanel } from './rooms/room-panel';
+import { NoiseSheet } from './rooms/noise-sheet';
+import { noiseTables } from '@/lib/plans/noise-path/path-tables';
 import { useRoomActions } from './rooms/use-room-actions';
 import { useEditorKeys } from './use-editor-keys';
 import { useElementSize } from './use-element-size';
@@ -75,6 +77,10 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
 
   const { reloadTheirs, overwriteWithMine } = useAutosave(plan.id, model, dispatch, editable);
   const [openRoomId, setOpenRoomId] = useState<string | null>(null);
+  // The open room's noise path tables, on a sheet over the canvas; closed with the room.
+  const [noiseSheetOpen, setNoiseSheetOpen] = useState(false);
+  useEffect(() => setNoiseSheetOpen(false), [openRoomId]);
+  const closeNoiseSheet = useCallback(() => setNoiseSheetOpen(false), []);
   const tools = useCanvasTools(model, dispatch, tool, setCalibrated, setOpenRoomId);
   const results = usePlanResults(plan.id, model.version);
   const risks = usePlanRisks(plan.id, model.version);
@@ -126,6 +132,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     : null), [plan.background]);
 
   const openRoom = openRoomId ? doc.rooms.find((room) => room.id === openRoomId) ?? null : null;
+  const openRoomResult = risks.data?.rooms.find((room) => room.roomId === openRoomId) ?? null;
+  const openRoomNoise = useMemo(() => (openRoomResult?.noise ? noiseTables(openRoomResult.noise) : null), [openRoomResult?.noise]);
   const openRoomFlags = useMemo(() => (risks.data?.flags ?? []).filter((flag) => flag.roomId === openRoomId), [risks.data, openRoomId]);
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
@@ -197,11 +205,12 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           )}
           {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
           {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
+          {openRoom && noiseSheetOpen && openRoomNoise && <NoiseSheet roomName={openRoom.name} tables={openRoomNoise} unitSystem={unitSystem} onClose={closeNoiseSheet} />}
         </div>
         <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (
             <RoomPanel key={openRoom.id} document={doc} metresPerPixel={model.metresPerPixel} room={openRoom} result={risks.data?.rooms.find((room) => room.roomId === openRoom.id) ?? null}
-              flags={openRoomFlags} unitSystem={unitSystem} editable={editable}
+              flags={openRoomFlags} unitSystem={unitSystem} editable={editable} onShowNoiseTables={() => setNoiseSheetOpen(true)}
               onChange={(changes) => roomActions.updateRoom(openRoom.id, changes)} onDelete={() => roomActions.deleteRoom(openRoom.id)} onClose={() => setOpenRoomId(null)} />
           ) : selectedSegment ? (
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} label={labels.segments[selectedSegment.id] ?? ''} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}

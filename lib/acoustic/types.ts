@@ -106,6 +106,8 @@ export interface RoomBox {
   temperatureC?: number;
   /** Overrides the speed of sound derived from temperatureC. */
   speedOfSoundMps?: number;
+  /** Relative humidity of the room's air, %, for the air's absorption (default 50). */
+  relativeHumidityPercent?: number;
 }
 
 export type RoomModeType = 'axial' | 'tangential' | 'oblique';

@@ -25,14 +25,35 @@ export interface PlanSegment {
   readonly inserts?: readonly PathInsert[];
 }
 
-/** Something put into the duct by hand for the noise path: a silencer from the maker's data, or any loss. */
+/**
+ * Something put into the duct by hand for the noise path: a silencer from the maker's data, any loss, or
+ * a plenum box given by its inside dimensions (Wells' equation in the path).
+ */
 export type PathInsert =
   | { readonly kind: 'silencer'; readonly label: string; readonly insertionLossDb: readonly number[] }
-  | { readonly kind: 'loss'; readonly label: string; readonly lossDb: readonly number[] };
+  | { readonly kind: 'loss'; readonly label: string; readonly lossDb: readonly number[] }
+  | { readonly kind: 'plenum'; readonly label: string; readonly plenum: PlenumBox };
+
+/**
+ * A plenum box, inside dimensions in m: the inlet in one end wall, the outlet in the opposite one, offset
+ * sideways by offsetM (0: straight across); its lining's mean absorption; the outlet's area.
+ */
+export interface PlenumBox {
+  readonly lengthM: number;
+  readonly widthM: number;
+  readonly heightM: number;
+  readonly outletAreaM2: number;
+  readonly offsetM: number;
+  readonly absorption: number;
+}
 
 export interface Fan {
   readonly blades: number;
+  /** The speed its sound power data are given at (and of the blade-pass tone). */
   readonly rpm: number;
+  /** The speed range it runs over (a variable-speed drive's limits); absent: rpm only. */
+  readonly minRpm?: number | null;
+  readonly maxRpm?: number | null;
 }
 
 export interface PlanRun {

@@ -18,3 +18,4 @@ export * from './schedule-csv';
 export * from './rooms';
 export { drawnArea, type PlanArea } from './drawn-area';
 export * from './labels';
+export * from './noise';

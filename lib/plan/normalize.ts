@@ -76,12 +76,20 @@ export function normalizeDocument(input: PlanDocument, newId: IdGenerator): Plan
   return assignLabels({ ...doc, runs, rooms: unlinkMissingOutlets(doc) });
 }
 
-/** A room whose outlet point was deleted keeps its place in the room but feeds from no run. */
+/** A room whose outlet point was deleted keeps that outlet's place in the room but feeds it from no run (every outlet alike). */
 function unlinkMissingOutlets(doc: PlanDocument): PlanDocument['rooms'] {
   const nodeIds = new Set(doc.nodes.map((node) => node.id));
-  const stale = doc.rooms.some((room) => room.outlet.nodeId !== null && !nodeIds.has(room.outlet.nodeId));
+  const missing = (nodeId: string | null) => nodeId !== null && !nodeIds.has(nodeId);
+  const stale = doc.rooms.some((room) => missing(room.outlet.nodeId) || (room.extraOutlets ?? []).some((outlet) => missing(outlet.nodeId)));
   if (!stale) return doc.rooms;
-  return doc.rooms.map((room) => (room.outlet.nodeId !== null && !nodeIds.has(room.outlet.nodeId) ? { ...room, outlet: { ...room.outlet, nodeId: null } } : room));
+  return doc.rooms.map((room) => {
+    const extraOutlets = room.extraOutlets?.map((outlet) => (missing(outlet.nodeId) ? { ...outlet, nodeId: null } : outlet));
+    return {
+      ...room,
+      outlet: missing(room.outlet.nodeId) ? { ...room.outlet, nodeId: null } : room.outlet,
+      ...(extraOutlets ? { extraOutlets } : {}),
+    };
+  });
 }
 
 /** Drops selected ids that no longer exist and an active run that is gone. */

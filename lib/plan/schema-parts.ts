@@ -88,6 +88,12 @@ export const temperatureCSchema = finite('temperature')
 export const fanSchema = z.object({
   blades: z.number().int('must be a whole number').min(1, 'must be at least 1').max(MAX_FAN_BLADES, `must be at most ${MAX_FAN_BLADES}`),
   rpm: positiveAtMost('speed', MAX_FAN_RPM, 'rpm'),
+  minRpm: positiveAtMost('lowest speed', MAX_FAN_RPM, 'rpm').nullable().optional(),
+  maxRpm: positiveAtMost('highest speed', MAX_FAN_RPM, 'rpm').nullable().optional(),
+}).superRefine((fan, context) => {
+  if (fan.minRpm != null && fan.maxRpm != null && fan.minRpm > fan.maxRpm) {
+    context.addIssue({ code: 'custom', path: ['maxRpm'], message: `must be at least the lowest speed (${fan.minRpm} rpm)` });
+  }
 });
 
 /** A length typed for one segment (an override, a treatment's length). */

@@ -4,6 +4,7 @@ import { text } from '@/lib/text';
 import type { PlanDocument } from './document';
 import { planTreatmentSchema, roomSchema, soundPowerBandsSchema } from './rooms/room-schema';
 import { pathInsertSchema } from './noise/insert-schema';
+import { roomPlaceProblems } from './rooms/room-places';
 import {
   fanSchema, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, MAX_PLAN_NODES, MAX_PLAN_ROOMS, MAX_PLAN_RUNS, MAX_PLAN_SEGMENTS,
   planCoordinateSchema, planList, runLetterSchema, sectionSchema, segmentNumberSchema, temperatureCSchema, terminationSchema,
@@ -83,21 +84,14 @@ function checkReferences(doc: DocumentShape, context: z.RefinementCtx): void {
   checkRooms(doc, nodeIds, context);
 }
 
-/** Room ids unique, the outlet's node exists, outlet and listener inside the box. */
+/** Room ids unique; every outlet's node exists and feeds the room once; outlets and listeners inside the box. */
 function checkRooms(doc: DocumentShape, nodeIds: ReadonlySet<string>, context: z.RefinementCtx): void {
   const roomIds = new Set<string>();
   doc.rooms.forEach((room, index) => {
     if (roomIds.has(room.id)) context.addIssue({ code: 'custom', path: ['rooms', index, 'id'], message: `repeats the id "${room.id}"` });
     roomIds.add(room.id);
-    if (room.outlet.nodeId !== null && !nodeIds.has(room.outlet.nodeId)) {
-      context.addIssue({ code: 'custom', path: ['rooms', index, 'outlet', 'nodeId'], message: `names node "${room.outlet.nodeId}", which does not exist` });
-    }
-    for (const place of ['outlet', 'listener'] as const) {
-      const point = room[place];
-      const limits = [['xM', room.lengthM, 'length'], ['yM', room.widthM, 'width'], ['zM', room.heightM, 'height']] as const;
-      for (const [axis, sizeM, side] of limits) {
-        if (point[axis] > sizeM) context.addIssue({ code: 'custom', path: ['rooms', index, place, axis], message: `must be inside the room (at most its ${side}, ${sizeM} m)` });
-      }
+    for (const problem of roomPlaceProblems(room, (nodeId) => nodeIds.has(nodeId))) {
+      context.addIssue({ code: 'custom', path: ['rooms', index, ...problem.path], message: problem.message });
     }
   });
 }

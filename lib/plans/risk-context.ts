@@ -40,9 +40,13 @@ export function fanInput(run: PlanRun): FanInput | undefined {
   return run.fan ? { blades: run.fan.blades, rpm: run.fan.rpm } : undefined;
 }
 
-/** The run that feeds a room. Throws PlanError. */
+/** The run that feeds a room through its first outlet. Throws PlanError. */
 export function feedingRun(doc: PlanDocument, room: PlanRoom): { run: PlanRun; outletNodeId: string } {
-  const nodeId = room.outlet.nodeId;
+  return runFeedingOutlet(doc, room, room.outlet.nodeId);
+}
+
+/** The run whose open end nodeId is an outlet of the room. Throws PlanError saying what is wrong. */
+export function runFeedingOutlet(doc: PlanDocument, room: PlanRoom, nodeId: string | null): { run: PlanRun; outletNodeId: string } {
   if (nodeId === null) throw new PlanError(`${room.name}: no run feeds it yet; choose the run end that is its outlet.`, { roomId: room.id });
   const run = runOfNode(doc, nodeId);
   if (!run) throw new PlanError(`${room.name}: its outlet point is not part of a run.`, { roomId: room.id });

@@ -5,7 +5,8 @@ import {
   type OutletLevelBand, type RiskFlag, type RoomAnalysis, type RunAnalysis,
 } from '@/lib/acoustic';
 import { PlanError } from '@/lib/plan/errors';
-import { pathLevelFlags, roomNoisePath, type RoomNoisePath } from './noise-path/room-path';
+import { pathLevelFlags } from './noise-path/room-path';
+import { roomNoise, type RoomNoise } from './noise-path/room-noise';
 import type { PlanDocument } from '@/lib/plan/document';
 import { analysePlan, type RunResult } from './results';
 import { RISK_OPTIONS, riskContext, type RiskContext } from './risk-context';
@@ -35,10 +36,10 @@ export interface RoomResult {
   /** Predicted levels at the listener (when the outlet sound power is given) and their NC rating. */
   levels: OutletLevelBand[] | null;
   levelsNc: number | null;
-  /** The noise path from the fan to the listener, when the feeding run has its fan's sound power. */
-  noisePath: RoomNoisePath | null;
-  /** Why there is no noise path (in words), when the room is fed but the path cannot be built. */
-  noisePathProblem: string | null;
+  /** The noise from every outlet that feeds the room at every listener, when the feeding runs have their fans' sound power. */
+  noise: RoomNoise | null;
+  /** Why there is no noise result (in words), when the room is fed but a path cannot be built. */
+  noiseProblem: string | null;
 }
 
 export interface PlanRisks {
@@ -83,7 +84,7 @@ function levelsAt(context: RiskContext, runAnalysis: RunAnalysis): { flags: Risk
 }
 
 function roomResult(doc: PlanDocument, metresPerPixel: number, runs: ReadonlyMap<string, RunResult>, room: PlanDocument['rooms'][number]): { result: RoomResult; flags: PlacedFlag[] } {
-  const empty: RoomResult = { roomId: room.id, name: room.name, runId: null, problem: null, analysis: null, resonancesHz: [], fanTonesHz: [], criterionNc: room.criterionNc, criterionDb: ncCriterionCurveDb(room.criterionNc), levels: null, levelsNc: null, noisePath: null, noisePathProblem: null };
+  const empty: RoomResult = { roomId: room.id, name: room.name, runId: null, problem: null, analysis: null, resonancesHz: [], fanTonesHz: [], criterionNc: room.criterionNc, criterionDb: ncCriterionCurveDb(room.criterionNc), levels: null, levelsNc: null, noise: null, noiseProblem: null };
   try {
     const context = riskContext(doc, metresPerPixel, { roomId: room.id });
     const runAnalysis = analysisOf(runs, context.run.id);
@@ -91,9 +92,9 @@ function roomResult(doc: PlanDocument, metresPerPixel: number, runs: ReadonlyMap
     // modes to twice the Schroeder frequency (the engine's default): above it they overlap
     const analysis = analyzeRoom(roomInput);
     const resonanceFlags = assessRisks(context.input, runAnalysis).filter((flag) => isDistinctMode(flag, analysis.schroederHz));
-    const path = pathOf(doc, metresPerPixel, room);
-    // the noise path from the fan, when there is one, takes the place of an outlet sound power typed in
-    const { flags: levelFlags, levels } = path.noisePath ? { flags: pathLevelFlags(room, path.noisePath), levels: null } : levelsAt(context, runAnalysis);
+    const noise = noiseOf(doc, metresPerPixel, room);
+    // the noise from the fans, when there is one, takes the place of an outlet sound power typed in
+    const { flags: levelFlags, levels } = noise.noise ? { flags: pathLevelFlags(room, noise.noise), levels: null } : levelsAt(context, runAnalysis);
     const fan = context.input.fan;
     return {
       result: {
@@ -104,7 +105,7 @@ function roomResult(doc: PlanDocument, metresPerPixel: number, runs: ReadonlyMap
         fanTonesHz: fan ? bladePassHarmonicsHz(fan.blades, fan.rpm, CHART_HARMONICS) : [],
         levels,
         levelsNc: levels ? ncRating(levels.map((band) => band.levelDb)) : null,
-        ...path,
+        ...noise,
       },
       flags: place([...resonanceFlags, ...levelFlags], context),
     };
@@ -113,11 +114,11 @@ function roomResult(doc: PlanDocument, metresPerPixel: number, runs: ReadonlyMap
   }
 }
 
-function pathOf(doc: PlanDocument, metresPerPixel: number, room: PlanDocument['rooms'][number]): Pick<RoomResult, 'noisePath' | 'noisePathProblem'> {
+function noiseOf(doc: PlanDocument, metresPerPixel: number, room: PlanDocument['rooms'][number]): Pick<RoomResult, 'noise' | 'noiseProblem'> {
   try {
-    return { noisePath: roomNoisePath(doc, metresPerPixel, room), noisePathProblem: null };
+    return { noise: roomNoise(doc, metresPerPixel, room), noiseProblem: null };
   } catch (error) {
-    return { noisePath: null, noisePathProblem: problemOf(error) };
+    return { noise: null, noiseProblem: problemOf(error) };
   }
 }
 

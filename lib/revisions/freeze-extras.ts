@@ -3,7 +3,8 @@
 import type { FlaggedQuantity } from '@/lib/acoustic';
 import type { PlanDocument } from '@/lib/plan/document';
 import type { PlanAnalysis } from '@/lib/plans/analysis/types';
-import type { RoomNoisePath } from '@/lib/plans/noise-path/room-path';
+import { noiseTables } from '@/lib/plans/noise-path/path-tables';
+import type { RoomNoise } from '@/lib/plans/noise-path/room-noise';
 import type { RevisionExtras, RoomRow } from './types';
 
 const KIND_WORDS: Record<string, string> = {
@@ -24,8 +25,8 @@ export function freezeExtras(document: PlanDocument, analysis: PlanAnalysis): Re
     const risks = analysis.risks;
     if (risks.rooms.length > 0) {
       extras.rooms = risks.rooms.map((room): RoomRow => ({
-        id: room.roomId, name: room.name, problem: room.problem, path: room.noisePath ? pathRows(room.noisePath) : null,
-        summary: room.analysis ? `Schroeder frequency ${room.analysis.schroederHz.toFixed(0)} Hz${room.noisePath ? `, NC ${room.noisePath.result.nc.toFixed(0)} at the listener by the noise path against NC ${room.criterionNc}` : room.levelsNc !== null ? `, predicted NC ${room.levelsNc.toFixed(0)} against NC ${room.criterionNc}` : `, criterion NC ${room.criterionNc}`}` : '',
+        id: room.roomId, name: room.name, problem: room.problem, noise: room.noise ? noiseTables(room.noise) : null,
+        summary: room.analysis ? `Schroeder frequency ${room.analysis.schroederHz.toFixed(0)} Hz${room.noise ? `, ${noiseSummary(room.noise)} against NC ${room.criterionNc}` : room.levelsNc !== null ? `, predicted NC ${room.levelsNc.toFixed(0)} against NC ${room.criterionNc}` : `, criterion NC ${room.criterionNc}`}` : '',
       }));
     }
     if (risks.flags.length > 0) {
@@ -52,18 +53,10 @@ export function freezeExtras(document: PlanDocument, analysis: PlanAnalysis): Re
 }
 
 
-/** The noise path's table as plain rows for the review and the schedule. */
-function pathRows(path: RoomNoisePath): NonNullable<RoomRow['path']> {
-  const { result } = path;
-  return {
-    rows: [
-      { label: 'Fan sound power', valuesDb: path.fanSoundPowerDb, total: true },
-      ...result.steps.map((step, index) => ({ label: `${path.sources[index]?.label ?? step.kind} (loss)`, valuesDb: step.lossDb.map((loss) => -loss) })),
-      { label: 'Room correction (Schultz)', valuesDb: result.roomCorrectionDb },
-      { label: 'Level at the listener', valuesDb: result.listenerDb, total: true },
-      { label: 'Criterion curve', valuesDb: path.criterionDb },
-      { label: 'Margin (negative: above)', valuesDb: path.marginDb, total: true },
-    ],
-    nc: result.nc, nr: result.nr, dba: result.dba, governingHz: path.governingHz,
-  };
+/** "NC 24 at L1 (the worst of 2 listeners) by the noise paths of 2 outlets". */
+function noiseSummary(noise: RoomNoise): string {
+  const worst = noise.listeners.find((listener) => listener.listenerId === noise.worstListenerId) ?? noise.listeners[0];
+  const listeners = noise.listeners.length > 1 ? ` (the worst of ${noise.listeners.length} listeners)` : '';
+  const outlets = noise.outlets.length > 1 ? `the noise paths of ${noise.outlets.length} outlets` : 'the noise path';
+  return `NC ${worst.nc.toFixed(0)} at ${worst.name}${listeners} by ${outlets}`;
 }

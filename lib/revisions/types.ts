@@ -1,4 +1,5 @@
 // What a frozen revision holds, as read back by pages, routes and the schedule.
+import type { NoiseTables } from '@/lib/plans/noise-path/path-tables';
 import type { PlanDocument } from '@/lib/plan/document';
 import type { PlanLabels } from '@/lib/plan/labels';
 import type { TreatmentStanding } from '@/lib/plans/analysis/types';
@@ -21,8 +22,10 @@ export interface RiskRow { id: string; runId: string | null; label: string; deta
 export interface TreatmentRow { id: string; riskId: string | null; kind: string; label: string; before: string; after: string; clears: boolean; standing?: TreatmentStanding; standingText?: string }
 export interface RoomRow {
   id: string; name: string; problem: string | null; summary: string;
-  /** The noise path to the room's listener as frozen: one row per element and the totals, 8 octave bands each. */
+  /** Revisions frozen before rooms had several outlets and listeners: the one path's table, 8 octave bands each row. */
   path?: { rows: { label: string; valuesDb: number[]; total?: boolean }[]; nc: number; nr: number; dba: number; governingHz: number } | null;
+  /** The room's noise as frozen: a table per outlet path and per listener. */
+  noise?: NoiseTables | null;
 }
 
 export interface RevisionSummary {

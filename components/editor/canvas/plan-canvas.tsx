@@ -6,7 +6,7 @@ import { Circle, Image as KonvaImage, Layer, Line, Rect, Stage, Text } from 'rea
 import type { Resonance } from '@/lib/acoustic';
 import { nodePositions, type PlanDocument } from '@/lib/plan/document';
 import { planLabels } from '@/lib/plan/labels';
-import { outletLink, withOutletAtItsEnd } from '@/lib/plan/rooms/outlet-link';
+import { withOutletAtItsEnd } from '@/lib/plan/rooms/outlet-link';
 import type { Selection } from '@/lib/plan/editor-state';
 import type { Point } from '@/lib/plan/geometry';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
@@ -14,15 +14,15 @@ import { GridShape } from './grid-shape';
 import { ModeOverlay } from './mode-overlay';
 import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
-import { DraggedEndOutlets, OutletLinkShape } from './outlet-link-shape';
+import { DraggedEndOutlets, OutletLinkShape, roomOutletMarks } from './outlet-link-shape';
 import { SegmentLine } from './segment-line';
+import { endNamePlace, END_NAME_FONT_PX } from './end-word-place';
 import { TerminationGlyph } from './termination-glyph';
 import { useRoomDrag } from './use-room-drag';
 import { GRID_AREA_PX, openingArea } from './opening-area';
 import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
 
 /** Screen distance from a run end to its label, px. */
-const END_LABEL_AWAY_PX = 26;
 
 export interface CanvasTarget { nodeId?: string; segmentId?: string; roomId?: string }
 export interface CanvasPointer { type: 'down' | 'move' | 'dblclick'; point: Point; target: CanvasTarget; shiftKey: boolean; scale: number }
@@ -116,7 +116,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   useEffect(() => { onViewChange?.(view); }, [view, onViewChange]);
 
   const positions = useMemo(() => nodePositions(doc), [doc]);
-  const outletLinks = useMemo(() => new Map(doc.rooms.map((room) => [room.id, outletLink(doc, room, props.metresPerPixel)])), [doc, props.metresPerPixel]);
+  const outletMarks = useMemo(() => new Map(doc.rooms.map((room) => [room.id, roomOutletMarks(doc, room, props.metresPerPixel, positions)])), [doc, props.metresPerPixel, positions]);
   const dragNodeId = drag?.nodeId ?? null;
   const activeSegmentIds = useMemo(() => new Set(dragNodeId ? doc.segments.filter((segment) => segment.from === dragNodeId || segment.to === dragNodeId).map((segment) => segment.id) : []), [doc.segments, dragNodeId]);
   const selectedNodes = useMemo(() => new Set(selection.nodeIds), [selection.nodeIds]);
@@ -152,9 +152,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         const endLabel = labels.nodes[nodeId];
         if (endLabel) {
           // beyond the end, along the segment's direction
-          const awayPx = END_LABEL_AWAY_PX / view.scale;
-          glyphs.push(<Text key={`l${nodeId}`} x={node.x + Math.cos(angleRad) * awayPx} y={node.y + Math.sin(angleRad) * awayPx} text={endLabel} fontSize={10 / view.scale}
-            fontFamily="IBM Plex Mono, monospace" fill="#5d626b" offsetX={(endLabel.length * 3) / view.scale} offsetY={5 / view.scale} listening={false} name="end-label" />);
+          const place = endNamePlace(node, angleRad, endLabel.length, view.scale);
+          glyphs.push(<Text key={`l${nodeId}`} x={place.x} y={place.y} text={endLabel} fontSize={END_NAME_FONT_PX / view.scale}
+            fontFamily="IBM Plex Mono, monospace" fill="#5d626b" listening={false} name="end-label" />);
         }
       }
     }
@@ -259,7 +259,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (
           <Fragment key={room.id}>
             <RoomShape room={room} metresPerPixel={props.metresPerPixel} selected={props.selectedRoomId === room.id} flagged={props.flaggedRoomIds?.has(room.id) ?? false} scale={view.scale} />
-            {(dragNodeId === null || room.outlet.nodeId !== dragNodeId) && <OutletLinkShape room={room} link={outletLinks.get(room.id) ?? { kind: 'unlinked' }} metresPerPixel={props.metresPerPixel} scale={view.scale} />}
+            {(outletMarks.get(room.id) ?? []).filter((mark) => dragNodeId === null || mark.nodeId !== dragNodeId).map((mark) => <OutletLinkShape key={mark.key} mark={mark} scale={view.scale} />)}
           </Fragment>
         )))}
       </Layer>
@@ -268,11 +268,11 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         {movedRoom && (
           <>
             <RoomShape room={movedRoom} metresPerPixel={props.metresPerPixel} selected flagged={props.flaggedRoomIds?.has(movedRoom.id) ?? false} scale={view.scale} />
-            <OutletLinkShape room={movedRoom} link={outletLink(doc, movedRoom, props.metresPerPixel)} metresPerPixel={props.metresPerPixel} scale={view.scale} />
+            {roomOutletMarks(doc, movedRoom, props.metresPerPixel, positions).map((mark) => <OutletLinkShape key={mark.key} mark={mark} scale={view.scale} />)}
           </>
         )}
         {drag && doc.segments.filter((segment) => activeSegmentIds.has(segment.id)).map((segment) => segmentLine(segment, dragPositions))}
-        {drag && <DraggedEndOutlets rooms={doc.rooms.filter((room) => room.outlet.nodeId === drag.nodeId && room.id !== draggedRoomId)} end={drag} metresPerPixel={props.metresPerPixel} scale={view.scale} />}
+        {drag && <DraggedEndOutlets doc={{ ...doc, rooms: doc.rooms.filter((room) => room.id !== draggedRoomId) }} end={drag} nodeId={drag.nodeId} metresPerPixel={props.metresPerPixel} scale={view.scale} />}
         {drag && <NodeDot id={drag.nodeId} x={drag.x} y={drag.y} selected isStart={startNodes.has(drag.nodeId)} scale={view.scale} />}
         {props.mode && !drag && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}
         {props.preview && (

@@ -2,6 +2,7 @@
 
 import { Group, Line, Rect, Text } from 'react-konva';
 import type { Termination } from '@/lib/acoustic';
+import { endWordPlace } from './end-word-place';
 
 export const TERMINATION_LABELS: Record<string, string> = {
   closed: 'closed',
@@ -15,12 +16,19 @@ export function terminationKey(termination: Termination): string {
   return termination.kind === 'open' ? `open-${termination.flange}` : termination.kind;
 }
 
-// A shape per end type (never colour alone) drawn at a leaf node, pointing along the duct.
+const WORD_FONT_PX = 10;
+
+// A shape per end type (never colour alone) drawn at a leaf node, pointing along the duct, and its word on
+// the duct's left-hand side, clear of the duct, the end's name and a room outlet's word (end-word-place.ts).
 export function TerminationGlyph({ x, y, angleRad, termination, scale }: { x: number; y: number; angleRad: number; termination: Termination; scale: number }) {
   const size = 9 / scale;
   const key = terminationKey(termination);
   const rotation = (angleRad * 180) / Math.PI;
+  const word = TERMINATION_LABELS[key];
+  const place = endWordPlace({ x, y }, angleRad, 'left', word.length, WORD_FONT_PX, 0, scale);
   return (
+    <>
+    <Text text={word} x={place.x} y={place.y} fontSize={WORD_FONT_PX / scale} fill="#3a3e45" listening={false} />
     <Group x={x} y={y} rotation={rotation} listening={false}>
       {key === 'closed' && <Line points={[0, -size, 0, size]} stroke="#25282d" strokeWidth={3 / scale} />}
       {key === 'open-unflanged' && <Line points={[size, -size, 0, 0, size, size]} stroke="#25282d" strokeWidth={1.5 / scale} />}
@@ -32,7 +40,7 @@ export function TerminationGlyph({ x, y, angleRad, termination, scale }: { x: nu
       )}
       {key === 'lined' && <Rect x={-size / 2} y={-size} width={size} height={size * 2} stroke="#25282d" strokeWidth={1.5 / scale} dash={[2 / scale, 2 / scale]} />}
       {key === 'anechoic' && <Line points={[0, -size, size * 1.5, 0, 0, size]} closed stroke="#25282d" strokeWidth={1.5 / scale} />}
-      <Text text={TERMINATION_LABELS[key]} x={-size} y={size * 1.4} fontSize={10 / scale} fill="#3a3e45" rotation={-rotation} />
     </Group>
+    </>
   );
 }

@@ -1,14 +1,15 @@
 'use client';
 
 import { useEffect, useState } from 'react';
-import type { PlanRun } from '@/lib/plan';
+import type { Fan, PlanRun } from '@/lib/plan';
 import { NumberInput } from './number-input';
 import { SoundPowerField } from '../rooms/sound-power-field';
+import { FanNoiseFields } from './fan-noise-fields';
 
 interface RunPanelProps {
   run: PlanRun;
   editable: boolean;
-  onChange: (changes: { name?: string; temperatureC?: number; fan?: { blades: number; rpm: number } | null; fanSoundPowerDb?: number[] | null }) => void;
+  onChange: (changes: { name?: string; temperatureC?: number; fan?: Fan | null; fanSoundPowerDb?: number[] | null }) => void;
   /** Numbers the run's segments 1, 2, … from the start again (labels elsewhere keep theirs until then). */
   onRenumber?: () => void;
 }
@@ -28,9 +29,9 @@ export function RunPanel({ run, editable, onChange, onRenumber }: RunPanelProps)
       <NumberInput label="Air temperature" unit="°C" value={run.temperatureC} min={-40} max={60} onCommit={(value) => value !== null && onChange({ temperatureC: value })} />
       <div className="grid grid-cols-2 gap-2">
         <NumberInput label="Fan blades" value={run.fan?.blades ?? null} min={1} max={100} integer allowEmpty
-          onCommit={(blades) => onChange({ fan: blades === null ? null : { blades, rpm: run.fan?.rpm ?? 1200 } })} />
+          onCommit={(blades) => onChange({ fan: blades === null ? null : { ...run.fan, blades, rpm: run.fan?.rpm ?? 1200 } })} />
         <NumberInput label="Fan speed" unit="rpm" value={run.fan?.rpm ?? null} min={1} max={100000} allowEmpty
-          onCommit={(rpm) => onChange({ fan: rpm === null ? null : { blades: run.fan?.blades ?? 12, rpm } })} />
+          onCommit={(rpm) => onChange({ fan: rpm === null ? null : { ...run.fan, blades: run.fan?.blades ?? 12, rpm } })} />
       </div>
       {onRenumber && (
         <div className="flex items-center gap-2">
@@ -39,6 +40,7 @@ export function RunPanel({ run, editable, onChange, onRenumber }: RunPanelProps)
         </div>
       )}
       <SoundPowerField label="Fan sound power into this run" value={run.fanSoundPowerDb ?? null} onCommit={(bandsDb) => onChange({ fanSoundPowerDb: bandsDb })} />
+      <FanNoiseFields fan={run.fan} editable={editable} onFan={(fan) => onChange({ fan })} onSpectrum={(bandsDb) => onChange({ fanSoundPowerDb: bandsDb })} />
       {run.fan && <p className="num text-xs text-graphite-500">Blade-pass tone {((run.fan.blades * run.fan.rpm) / 60).toFixed(1)} Hz (blades × rpm / 60) and its harmonics.</p>}
     </fieldset>
   );

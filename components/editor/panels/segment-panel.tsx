@@ -76,7 +76,7 @@ export function SegmentPanel({ document: doc, segment, label, metresPerPixel, un
           </div>
         )}
       </div>
-      {onInserts && <InsertsField inserts={segment.inserts ?? []} editable={editable} onChange={onInserts} />}
+      {onInserts && <InsertsField inserts={segment.inserts ?? []} editable={editable} unitSystem={unitSystem} onChange={onInserts} />}
     </fieldset>
   );
 }

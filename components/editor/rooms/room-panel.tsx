@@ -9,7 +9,10 @@ import type { UnitSystem } from '@/models/user';
 import { LengthInput } from '../panels/length-input';
 import { NumberInput } from '../panels/number-input';
 import { OutletLinkStatus } from './outlet-link-status';
+import { ExtraOutletsField } from './extra-outlets-field';
+import { ListenersField } from './listeners-field';
 import { PointFields } from './point-fields';
+import { RoomCorrectionField } from './room-correction-field';
 import { RoomResults } from './room-results';
 import { SoundPowerField } from './sound-power-field';
 import { SurfaceFinishes } from './surface-finishes';
@@ -26,6 +29,8 @@ interface RoomPanelProps {
   onChange: (changes: Partial<Omit<PlanRoom, 'id'>>) => void;
   onDelete: () => void;
   onClose: () => void;
+  /** Opens the room's noise path tables on the sheet over the canvas. */
+  onShowNoiseTables: () => void;
 }
 
 /** The open ends of every run, for choosing the one that feeds the room. */
@@ -34,8 +39,8 @@ function runEnds(doc: PlanDocument): { nodeId: string; label: string }[] {
   return doc.runs.flatMap((run) => runLeaves(doc, run.id).filter((nodeId) => nodeId !== run.startNodeId).map((nodeId) => ({ nodeId, label: `${labels.nodes[nodeId] ?? 'an end'} (${run.name})` })));
 }
 
-// The room's form (name, size, finishes, criterion, outlet and listener) and its results.
-export function RoomPanel({ document, metresPerPixel, room, result, flags, unitSystem, editable, onChange, onDelete, onClose }: RoomPanelProps) {
+// The room's form (name, size, finishes, criterion, outlets, listeners, room correction) and its results.
+export function RoomPanel({ document, metresPerPixel, room, result, flags, unitSystem, editable, onChange, onDelete, onClose, onShowNoiseTables }: RoomPanelProps) {
   const [name, setName] = useState(room.name);
   useEffect(() => setName(room.name), [room.name]);
   const side = (key: 'lengthM' | 'widthM' | 'heightM') => (valueM: number | null) => { if (valueM !== null) onChange({ [key]: valueM }); };
@@ -47,7 +52,7 @@ export function RoomPanel({ document, metresPerPixel, room, result, flags, unitS
       </div>
       <details open>
         <summary className="cursor-pointer text-xs font-semibold">Results from the saved plan</summary>
-        <div className="mt-2"><RoomResults result={result} flags={flags} /></div>
+        <div className="mt-2"><RoomResults result={result} flags={flags} onShowNoiseTables={onShowNoiseTables} /></div>
       </details>
       <fieldset disabled={!editable} className="space-y-3">
         <legend className="mb-1 text-xs font-semibold">Properties</legend>
@@ -77,7 +82,9 @@ export function RoomPanel({ document, metresPerPixel, room, result, flags, unitS
         {/* An outlet placed here takes its duct end along; any other room change puts the outlet back at its end. */}
         <OutletLinkStatus link={outletLink(document, room, metresPerPixel)} unitSystem={unitSystem} editable={editable} onJoin={() => onChange({})} />
         <PointFields label="Outlet" point={room.outlet} unitSystem={unitSystem} onCommit={(point) => onChange({ outlet: { ...room.outlet, ...point } })} />
-        <PointFields label="Listener" point={room.listener} unitSystem={unitSystem} onCommit={(listener) => onChange({ listener })} />
+        <ExtraOutletsField room={room} ends={runEnds(document)} unitSystem={unitSystem} onChange={(extraOutlets) => onChange({ extraOutlets })} />
+        <ListenersField room={room} unitSystem={unitSystem} onListener={(listener) => onChange({ listener })} onChange={(extraListeners) => onChange({ extraListeners })} />
+        <RoomCorrectionField value={room.roomCorrection} onChange={(roomCorrection) => onChange({ roomCorrection })} />
         <SoundPowerField value={room.outletSoundPowerDb} onCommit={(outletSoundPowerDb) => onChange({ outletSoundPowerDb })} />
         <SurfaceFinishes room={room} onChange={(surfaces) => onChange({ surfaces })} />
         {editable && <button type="button" className="btn-quiet text-xs" onClick={onDelete}>Delete {room.name}</button>}

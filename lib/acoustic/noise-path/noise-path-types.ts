@@ -26,8 +26,11 @@ export interface NoisePathInput {
   soundPowerDb: number[];
   /** In order from the fan to the room. */
   elements: PathElement[];
-  /** Schultz room correction at the listener. */
-  room: { volumeM3: number; distanceM: number };
+  /**
+   * Schultz room correction at the listener; or, with correctionDb, the room's Lp - Lw per band worked
+   * out by another model (roomEquationCorrectionDb for a bare room) in its place.
+   */
+  room: { volumeM3: number; distanceM: number; correctionDb?: number[] };
   /** Air temperature for the rigid-wall losses and the end reflection loss, default 20 °C. */
   temperatureC?: number;
 }
@@ -51,8 +54,10 @@ export interface NoisePathResult {
   nc: number;
   nr: number;
   dba: number;
-  /** Schultz's Lp - Lw per band, dB. */
+  /** The room's Lp - Lw per band, dB: Schultz's, or the one given in room.correctionDb. */
   roomCorrectionDb: number[];
+  /** Which room correction was used: Schultz's relation, or the one given. */
+  roomCorrection: 'schultz' | 'given';
   /** Where a figure was limited or extrapolated, in words. */
   warnings: string[];
 }

@@ -1,5 +1,6 @@
 // The octave-band noise path from a fan to a listener: the fan's sound power, less each element's loss
-// in turn, into the room by Schultz's correction, rated as NC, NR and dB(A).
+// in turn, into the room by Schultz's correction (or one the caller gives, such as the room equation of a
+// bare room), rated as NC, NR and dB(A).
 import { DEFAULT_TEMPERATURE_C, OCTAVE_BANDS_HZ, ZERO_CELSIUS_K } from '../constants';
 import { inputError, requireAbove, requireFinite } from '../input-error';
 import { ncRating } from '../nc-rating';
@@ -45,9 +46,13 @@ export function noisePath(input: NoisePathInput): NoisePathResult {
     return step;
   });
 
-  const roomCorrectionDb = bandsHz.map((hz) => schultzRoomCorrectionDb(input.room.volumeM3, input.room.distanceM, hz, 'room'));
+  const given = input.room.correctionDb;
+  if (given !== undefined && (!Array.isArray(given) || given.length !== bandsHz.length)) throw inputError('room.correctionDb', `must have ${bandsHz.length} octave-band values`);
+  const roomCorrectionDb = given
+    ? given.map((correctionDb, band) => requireFinite(correctionDb, `room.correctionDb[${band}]`))
+    : bandsHz.map((hz) => schultzRoomCorrectionDb(input.room.volumeM3, input.room.distanceM, hz, 'room'));
   const listenerDb = powerDb.map((levelDb, band) => levelDb + roomCorrectionDb[band]);
   const nc = ncRating(listenerDb);
   warnings.push(...ncWarning(nc));
-  return { bandsHz, steps, listenerDb, nc, nr: nrRating(listenerDb), dba: aWeightedLevelDb(listenerDb), roomCorrectionDb, warnings };
+  return { bandsHz, steps, listenerDb, nc, nr: nrRating(listenerDb), dba: aWeightedLevelDb(listenerDb), roomCorrectionDb, roomCorrection: given ? 'given' : 'schultz', warnings };
 }

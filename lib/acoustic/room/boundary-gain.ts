@@ -3,8 +3,9 @@
 // distance to each image (Waterhouse (1955), JASA 27, 247). Used as the directivity factor Q in the
 // room equation, it tends to 2, 4 and 8 on one, two and three planes at low frequency (Long,
 // Architectural Acoustics, 2nd ed., ch. 2) and falls smoothly to 1 above: one plane gives
-// 1 + sin(2kd)/(2kd), already 1 (0 dB) at d = lambda / 4. Only the nearest plane on each axis counts:
-// the three mutually perpendicular planes of the nearest corner, whose images are those of a corner.
+// 1 + sin(2kd)/(2kd), already 1 (0 dB) at d = lambda / 4: a smooth curve, never a step at a quarter
+// wavelength. Only the nearest plane on each axis counts: the three mutually perpendicular planes of the
+// nearest corner, whose images are those of a corner.
 import { BOUNDARY_HALF_CONTRIBUTION_KD } from '../constants';
 import type { RoomBox } from '../types';
 import type { Point3, SurfaceName } from './room-input';
@@ -20,8 +21,6 @@ export interface NearPlane {
 export interface BoundaryGain {
   /** Nearest plane on each axis, nearest first. */
   planes: NearPlane[];
-  /** Q's low-frequency values 8, 4, 2 and the frequency below which each holds at least half its share (the farthest plane's first). */
-  steps: { q: number; belowHz: number }[];
   speedOfSoundMps: number;
 }
 
@@ -37,8 +36,7 @@ export function boundaryGain(room: RoomBox, point: Point3): BoundaryGain {
     nearest('wallYMin', 'wallYMax', point.yM, room.widthM),
     nearest('floor', 'ceiling', point.zM, room.heightM),
   ].sort((first, second) => first.distanceM - second.distanceM);
-  const steps = [3, 2, 1].map((count) => ({ q: 2 ** count, belowHz: planes[count - 1].belowHz }));
-  return { planes, steps, speedOfSoundMps: speedMps };
+  return { planes, speedOfSoundMps: speedMps };
 }
 
 /** sin(x)/x, 1 at 0. */

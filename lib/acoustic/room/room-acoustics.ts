@@ -1,9 +1,11 @@
-// Statistical room acoustics of a rectangular room: Sabine reverberation, Schroeder frequency,
-// modal density and room constant, per octave band from the surfaces' absorption.
+// Statistical room acoustics of a rectangular room: Sabine and Eyring reverberation with the air's own
+// absorption, Schroeder frequency, modal density and room constant, per octave band from the surfaces'
+// absorption.
 import { speedOfSound } from '../air';
 import { DEFAULT_TEMPERATURE_C, SABINE_CONSTANT_S_PER_M, SCHROEDER_COEFFICIENT } from '../constants';
 import { requireAbove, requireBetween } from '../input-error';
 import type { RoomBox } from '../types';
+import { airAttenuationBandDbPerM, DEFAULT_ROOM_RELATIVE_HUMIDITY_PERCENT, energyAttenuationPerM } from './air-absorption';
 import { SURFACE_NAMES, type RoomSurfaces, type SurfaceName } from './room-input';
 
 /** Schroeder frequency, Hz: f_s = 2000 sqrt(T60 / V) (Schroeder & Kuttruff (1962), JASA 34, 76, from memory; Kuttruff, Room Acoustics, ch. 3). */
@@ -13,11 +15,30 @@ export function schroederFrequencyHz(reverberationTimeS: number, volumeM3: numbe
   return SCHROEDER_COEFFICIENT * Math.sqrt(reverberationTimeS / volumeM3);
 }
 
-/** Sabine reverberation time, s: T60 = 0.161 V / A, A the absorption area in m² (W. C. Sabine, 1900; Kuttruff, Room Acoustics, ch. 5). */
-export function sabineReverberationTimeS(volumeM3: number, absorptionAreaM2: number): number {
+/**
+ * Sabine reverberation time, s: T60 = 0.161 V / (A + 4 m V), A the surfaces' absorption area in m², m
+ * the air's energy attenuation per metre (W. C. Sabine, 1900; the air's term as in Kuttruff, Room
+ * Acoustics, ch. 5). Without airPerM the air is left out.
+ */
+export function sabineReverberationTimeS(volumeM3: number, absorptionAreaM2: number, airPerM = 0): number {
   requireAbove(volumeM3, 0, 'volumeM3');
-  requireAbove(absorptionAreaM2, 0, 'absorptionAreaM2');
-  return (SABINE_CONSTANT_S_PER_M * volumeM3) / absorptionAreaM2;
+  requireAbove(absorptionAreaM2 + 4 * airPerM * volumeM3, 0, 'absorptionAreaM2');
+  // Sabine: T60 = 0.161 V / (A + 4 m V)
+  return (SABINE_CONSTANT_S_PER_M * volumeM3) / (absorptionAreaM2 + 4 * airPerM * volumeM3);
+}
+
+/**
+ * Eyring reverberation time, s: T60 = 0.161 V / (-S ln(1 - a) + 4 m V), a the surfaces' mean absorption
+ * (Eyring (1930), JASA 1, 217; the air's term as in Kuttruff, Room Acoustics, ch. 5). Shorter than
+ * Sabine's in a well-damped room, the same as a tends to 0.
+ */
+export function eyringReverberationTimeS(volumeM3: number, surfaceM2: number, meanAbsorption: number, airPerM = 0): number {
+  requireAbove(volumeM3, 0, 'volumeM3');
+  requireAbove(surfaceM2, 0, 'surfaceM2');
+  requireBetween(meanAbsorption, 0, 1, 'meanAbsorption');
+  const absorption = meanAbsorption >= 1 ? Infinity : -surfaceM2 * Math.log(1 - meanAbsorption) + 4 * airPerM * volumeM3;
+  // Eyring: T60 = 0.161 V / (-S ln(1 - a) + 4 m V)
+  return absorption > 0 ? (SABINE_CONSTANT_S_PER_M * volumeM3) / absorption : Infinity;
 }
 
 /**
@@ -66,26 +87,43 @@ export function surfaceAreasM2(room: RoomBox): Record<SurfaceName, number> {
 
 export interface RoomBand {
   hz: number;
-  /** Absorption area A = sum S_i alpha_i, m². */
+  /** The surfaces' absorption area A = sum S_i alpha_i, m². */
   absorptionAreaM2: number;
+  /** The surfaces' mean absorption A / S. */
   meanAbsorption: number;
+  /** The air's attenuation in this band, dB/m (ISO 9613-1 at the room's temperature and humidity). */
+  airAttenuationDbPerM: number;
+  /** The air's absorption area 4 m V, m². */
+  airAbsorptionAreaM2: number;
+  /** R = S a / (1 - a) with a = (A + 4 m V) / S: the surfaces and the air. */
   roomConstantM2: number;
+  /** Sabine's T60 with the air's absorption, s. */
   reverberationTimeS: number;
+  /** Eyring's T60 with the air's absorption, s. */
+  eyringReverberationTimeS: number;
 }
 
-/** Absorption, room constant and Sabine T60 in each octave band. */
+/** Absorption (surfaces and air), room constant and T60 (Sabine and Eyring) in each octave band. */
 export function roomBands(room: RoomBox, surfaces: RoomSurfaces, bandsHz: readonly number[]): RoomBand[] {
   const areas = surfaceAreasM2(room);
   const { volumeM3, surfaceM2 } = roomGeometry(room);
+  const air = { temperatureC: room.temperatureC ?? DEFAULT_TEMPERATURE_C, relativeHumidityPercent: room.relativeHumidityPercent ?? DEFAULT_ROOM_RELATIVE_HUMIDITY_PERCENT };
   return bandsHz.map((hz, band) => {
     const absorptionAreaM2 = SURFACE_NAMES.reduce((sum, name) => sum + areas[name] * surfaces[name][band], 0);
     const meanAbsorption = absorptionAreaM2 / surfaceM2;
+    const airAttenuationDbPerM = airAttenuationBandDbPerM(hz, air);
+    const airPerM = energyAttenuationPerM(airAttenuationDbPerM);
+    const airAbsorptionAreaM2 = 4 * airPerM * volumeM3;
+    const totalAbsorption = Math.min(1, (absorptionAreaM2 + airAbsorptionAreaM2) / surfaceM2);
     return {
       hz,
       absorptionAreaM2,
       meanAbsorption,
-      roomConstantM2: meanAbsorption < 1 ? roomConstantM2(surfaceM2, meanAbsorption) : Infinity,
-      reverberationTimeS: absorptionAreaM2 > 0 ? sabineReverberationTimeS(volumeM3, absorptionAreaM2) : Infinity,
+      airAttenuationDbPerM,
+      airAbsorptionAreaM2,
+      roomConstantM2: totalAbsorption < 1 ? roomConstantM2(surfaceM2, totalAbsorption) : Infinity,
+      reverberationTimeS: absorptionAreaM2 + airAbsorptionAreaM2 > 0 ? sabineReverberationTimeS(volumeM3, absorptionAreaM2, airPerM) : Infinity,
+      eyringReverberationTimeS: eyringReverberationTimeS(volumeM3, surfaceM2, Math.min(1, meanAbsorption), airPerM),
     };
   });
 }

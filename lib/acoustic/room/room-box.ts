@@ -17,6 +17,7 @@ export function validateRoomBox(box: unknown, prefix: string): RoomBox {
   requireAboveAtMost(room.heightM, 0, MAX_ROOM_HEIGHT_M, `${prefix}heightM`);
   if (room.temperatureC !== undefined) requireBetween(room.temperatureC, MIN_AIR_TEMPERATURE_C, MAX_AIR_TEMPERATURE_C, `${prefix}temperatureC`);
   if (room.speedOfSoundMps !== undefined) requireAbove(room.speedOfSoundMps, 0, `${prefix}speedOfSoundMps`);
+  if (room.relativeHumidityPercent !== undefined) requireBetween(room.relativeHumidityPercent, 0, 100, `${prefix}relativeHumidityPercent`);
   return room;
 }
 

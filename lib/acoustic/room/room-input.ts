@@ -31,7 +31,8 @@ export interface RoomInput {
   outletMounting?: Mounting;
 }
 
-function validatePoint(point: unknown, box: RoomBox, path: string): void {
+/** Checks a point lies inside the box, naming the field. */
+export function validatePoint(point: unknown, box: RoomBox, path: string): void {
   if (typeof point !== 'object' || point === null) throw inputError(path, 'must be an object');
   const { xM, yM, zM } = point as Record<string, unknown>;
   requireBetween(xM, 0, box.lengthM, `${path}.xM`);
@@ -39,19 +40,25 @@ function validatePoint(point: unknown, box: RoomBox, path: string): void {
   requireBetween(zM, 0, box.heightM, `${path}.zM`);
 }
 
+/** Checks the six surfaces' absorption, 8 bands each between 0 and 1, naming the field. */
+export function validateSurfaces(surfaces: unknown, path: string): RoomSurfaces {
+  if (typeof surfaces !== 'object' || surfaces === null) throw inputError(path, 'must be an object');
+  for (const name of SURFACE_NAMES) {
+    const bands = (surfaces as Record<string, unknown>)[name];
+    if (!Array.isArray(bands) || bands.length !== OCTAVE_BANDS_HZ.length) {
+      throw inputError(`${path}.${name}`, `must have ${OCTAVE_BANDS_HZ.length} octave-band absorption values`);
+    }
+    bands.forEach((value, band) => requireBetween(value, 0, 1, `${path}.${name}[${band}]`));
+  }
+  return surfaces as RoomSurfaces;
+}
+
 export function validateRoomInput(room: unknown, path = 'room'): RoomInput {
   if (typeof room !== 'object' || room === null) throw inputError(path, 'must be an object');
   const candidate = room as RoomInput;
   if (typeof candidate.box !== 'object' || candidate.box === null) throw inputError(`${path}.box`, 'must be an object');
   validateRoomBox(candidate.box, `${path}.box.`);
-  if (typeof candidate.surfaces !== 'object' || candidate.surfaces === null) throw inputError(`${path}.surfaces`, 'must be an object');
-  for (const name of SURFACE_NAMES) {
-    const bands = candidate.surfaces[name];
-    if (!Array.isArray(bands) || bands.length !== OCTAVE_BANDS_HZ.length) {
-      throw inputError(`${path}.surfaces.${name}`, `must have ${OCTAVE_BANDS_HZ.length} octave-band absorption values`);
-    }
-    bands.forEach((value, band) => requireBetween(value, 0, 1, `${path}.surfaces.${name}[${band}]`));
-  }
+  validateSurfaces(candidate.surfaces, `${path}.surfaces`);
   // The published curves run from NC 15 to NC 70 (ANSI S12.2); between them the criterion is interpolated.
   requireBetween(candidate.criterionNc, NC_CURVES[0].rating, NC_CURVES[NC_CURVES.length - 1].rating, `${path}.criterionNc`);
   validatePoint(candidate.outlet, candidate.box, `${path}.outlet`);

@@ -4,8 +4,9 @@
 import { findNode, findRoom, type PlanDocument } from '../document';
 import { PlanError } from '../errors';
 import type { Point } from '../geometry/point';
-import { checkedScale, moveEndToOutlet, withOutletAtItsEnd } from '../rooms/outlet-link';
+import { checkedScale, moveEndToOutlet, withExtraOutletsAtTheirEnds, withOutletAtItsEnd } from '../rooms/outlet-link';
 import { newRoom, type NewRoomShape } from '../rooms/room-input';
+import { roomPlaceProblems } from '../rooms/room-places';
 import { roomSchema } from '../rooms/room-schema';
 import type { PlanRoom } from '../rooms/room-types';
 import { checked, defineCommand } from './define';
@@ -31,20 +32,24 @@ export interface DeleteRoomArgs {
   readonly roomId: string;
 }
 
-const AXES = [['xM', 'lengthM', 'length'], ['yM', 'widthM', 'width'], ['zM', 'heightM', 'height']] as const;
-
 /** The schema's checks plus: outlet and listener inside the box, the outlet's point on the plan. */
 function checkedRoom(doc: PlanDocument, candidate: unknown): PlanRoom {
   return checkedPlaces(doc, checked(roomSchema, candidate, 'Room'));
 }
 
+/** The place's words in a message: "Room outlet x", "Room outlet 2 end", "Room listener L2 z". */
+function placeWords(room: PlanRoom, path: readonly (string | number)[]): string {
+  const [where, index, field] = path;
+  const axis = (name: unknown) => (name === 'nodeId' ? 'end' : typeof name === 'string' && /^[xyz]M$/.test(name) ? name.slice(0, 1) : String(name ?? ''));
+  if (where === 'outlet' || where === 'listener') return `Room ${where} ${axis(index)}`.trim();
+  if (where === 'extraOutlets') return `Room outlet ${Number(index) + 2} ${axis(field)}`.trim();
+  const listener = room.extraListeners?.[Number(index)];
+  return `Room listener ${listener?.name ?? Number(index) + 2} ${axis(field)}`.trim();
+}
+
 function checkedPlaces(doc: PlanDocument, room: PlanRoom): PlanRoom {
-  for (const place of ['outlet', 'listener'] as const) {
-    for (const [axis, side, word] of AXES) {
-      if (room[place][axis] > room[side]) throw new PlanError(`Room ${place} ${axis.slice(0, 1)}: must be inside the room (at most its ${word}, ${room[side]} m).`, { roomId: room.id });
-    }
-  }
-  if (room.outlet.nodeId !== null && !findNode(doc, room.outlet.nodeId)) throw new PlanError(`Room outlet: there is no point with id "${room.outlet.nodeId}".`, { roomId: room.id });
+  const [problem] = roomPlaceProblems(room, (nodeId) => findNode(doc, nodeId) !== undefined);
+  if (problem) throw new PlanError(`${placeWords(room, problem.path)}: ${problem.message}.`, { roomId: room.id });
   return room;
 }
 
@@ -73,13 +78,13 @@ function withChangedRoom(doc: PlanDocument, before: PlanRoom, candidate: unknown
   const scale = checkedScale(metresPerPixel);
   const after = checked(roomSchema, candidate, 'Room');
   if (outletPlacedByHand(before, after)) {
-    const room = checkedPlaces(doc, after);
+    const room = checkedPlaces(doc, withExtraOutletsAtTheirEnds(doc, after, scale));
     return moveEndToOutlet(replaceRoom(doc, room), room, scale);
   }
   return replaceRoom(doc, checkedPlaces(doc, withOutletAtItsEnd(doc, after, scale)));
 }
 
-export const updateRoom = defineCommand('update-room', "Change a room's size, place, finishes, criterion, outlet or listener (an outlet placed here takes its duct end along).", (doc, state, args: UpdateRoomArgs) => {
+export const updateRoom = defineCommand('update-room', "Change a room's size, place, finishes, criterion, room correction, outlets or listeners (the first outlet placed here takes its duct end along).", (doc, state, args: UpdateRoomArgs) => {
   const room = targetRoom(doc, args.roomId);
   return { doc: withChangedRoom(doc, room, { ...room, ...args.changes, id: room.id }, args.metresPerPixel), state };
 });

@@ -56,15 +56,33 @@ export function withOutletAt(room: PlanRoom, end: Point, metresPerPixel: number)
   return { ...room, outlet: { ...room.outlet, xM, yM } };
 }
 
-/** The room with its outlet placed at its duct end, when it has one on the plan; otherwise the room as it is. */
-export function withOutletAtItsEnd(doc: PlanDocument, room: PlanRoom, metresPerPixel: number): PlanRoom {
-  const end = outletEnd(doc, room);
-  return end ? withOutletAt(room, end, metresPerPixel) : room;
+/** The room with its further outlets placed at their duct ends (an outlet without an end on the plan stays). */
+export function withExtraOutletsAtTheirEnds(doc: PlanDocument, room: PlanRoom, metresPerPixel: number): PlanRoom {
+  if (!room.extraOutlets || room.extraOutlets.length === 0) return room;
+  const extraOutlets = room.extraOutlets.map((outlet) => {
+    const end = outlet.nodeId === null ? undefined : findNode(doc, outlet.nodeId);
+    if (!end) return outlet;
+    const { xM, yM } = outletPlacementAt(room, end, metresPerPixel);
+    return xM === outlet.xM && yM === outlet.yM ? outlet : { ...outlet, xM, yM };
+  });
+  return { ...room, extraOutlets };
 }
 
-/** Every room fed from the given end (or from any end, without one) with its outlet placed at that end. */
+/** The room with every outlet placed at its duct end, when it has one on the plan. */
+export function withOutletAtItsEnd(doc: PlanDocument, room: PlanRoom, metresPerPixel: number): PlanRoom {
+  const end = outletEnd(doc, room);
+  return withExtraOutletsAtTheirEnds(doc, end ? withOutletAt(room, end, metresPerPixel) : room, metresPerPixel);
+}
+
+/** Whether any outlet of the room is fed from the end (from any end, without one). */
+export function fedFrom(room: PlanRoom, nodeId?: string): boolean {
+  const fed = (candidate: string | null) => candidate !== null && (nodeId === undefined || candidate === nodeId);
+  return fed(room.outlet.nodeId) || (room.extraOutlets ?? []).some((outlet) => fed(outlet.nodeId));
+}
+
+/** Every room fed from the given end (or from any end, without one) with its outlets placed at their ends. */
 export function placeOutletsAtEnds(doc: PlanDocument, metresPerPixel: number, nodeId?: string): PlanDocument {
-  const follows = (room: PlanRoom) => room.outlet.nodeId !== null && (nodeId === undefined || room.outlet.nodeId === nodeId);
+  const follows = (room: PlanRoom) => fedFrom(room, nodeId);
   if (!doc.rooms.some(follows)) return doc;
   return { ...doc, rooms: doc.rooms.map((room) => (follows(room) ? withOutletAtItsEnd(doc, room, metresPerPixel) : room)) };
 }
@@ -76,11 +94,16 @@ export function outletLink(doc: PlanDocument, room: PlanRoom, metresPerPixel: nu
 
 /** How the room's outlet stands against a duct end at the plan point (none: the room has no end). */
 export function outletLinkTo(room: PlanRoom, endPoint: Point | undefined, metresPerPixel: number): OutletLink {
+  return outletPointLink(room, room.outlet, endPoint, metresPerPixel);
+}
+
+/** How an outlet of the room at the given place stands against a duct end at the plan point (any of its outlets). */
+export function outletPointLink(room: PlanRoom, outlet: { xM: number; yM: number }, endPoint: Point | undefined, metresPerPixel: number): OutletLink {
   if (!endPoint) return { kind: 'unlinked' };
   const end = { x: endPoint.x, y: endPoint.y };
   const placement = outletPlacementAt(room, end, metresPerPixel);
-  const atPlacement = Math.hypot(room.outlet.xM - placement.xM, room.outlet.yM - placement.yM) < OUTLET_AT_END_TOLERANCE_M;
-  if (!atPlacement) return { kind: 'apart', end, apartM: distancePx(roomPointPx(room, room.outlet, metresPerPixel), end) * metresPerPixel };
+  const atPlacement = Math.hypot(outlet.xM - placement.xM, outlet.yM - placement.yM) < OUTLET_AT_END_TOLERANCE_M;
+  if (!atPlacement) return { kind: 'apart', end, apartM: distancePx(roomPointPx(room, outlet, metresPerPixel), end) * metresPerPixel };
   return placement.outsideByM > 0 ? { kind: 'end-outside', end, outsideByM: placement.outsideByM } : { kind: 'at-end', end };
 }
 

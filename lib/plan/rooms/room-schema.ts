@@ -36,6 +36,15 @@ export const soundPowerBandsSchema = z
   .array(finite('sound power').min(-20, 'must be at least -20 dB').max(160, 'must be at most 160 dB'))
   .length(OCTAVE_BAND_COUNT, `needs ${OCTAVE_BAND_COUNT} octave bands, 63 Hz to 8 kHz`);
 
+/** At most this many further outlets and listeners in one room (product rule: a room's diffusers and seats worth checking). */
+export const MAX_EXTRA_OUTLETS = 16;
+export const MAX_EXTRA_LISTENERS = 16;
+const listenerNameSchema = text({ error: 'must be text' }).trim().min(1, 'give the listener a name').max(40, 'must be at most 40 characters');
+
+export const extraOutletSchema = roomPointSchema.extend({ id, nodeId: id.nullable() });
+export const roomListenerSchema = roomPointSchema.extend({ id, name: listenerNameSchema });
+export const roomCorrectionSchema = z.enum(['furnished', 'bare'], { error: "must be 'furnished' (Schultz) or 'bare' (the room equation)" });
+
 /** A room as stored; positions inside the box are checked in the document's refinement. */
 export const roomSchema = z.object({
   id,
@@ -50,6 +59,9 @@ export const roomSchema = z.object({
   outlet: roomPointSchema.extend({ nodeId: id.nullable() }),
   listener: roomPointSchema,
   outletSoundPowerDb: soundPowerBandsSchema.nullable(),
+  extraOutlets: z.array(extraOutletSchema).max(MAX_EXTRA_OUTLETS, `at most ${MAX_EXTRA_OUTLETS} further outlets in one room`).optional(),
+  extraListeners: z.array(roomListenerSchema).max(MAX_EXTRA_LISTENERS, `at most ${MAX_EXTRA_LISTENERS} further listeners in one room`).optional(),
+  roomCorrection: roomCorrectionSchema.optional(),
 });
 
 const segmentIndex = z.number().int('must be a whole number').min(0, 'must be at least 0');

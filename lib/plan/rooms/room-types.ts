@@ -22,6 +22,24 @@ export interface RoomOutlet extends RoomPoint {
   readonly nodeId: string | null;
 }
 
+/** A further outlet into the room, fed from its own run end (the room's first outlet is `outlet`). */
+export interface ExtraOutlet extends RoomOutlet {
+  readonly id: string;
+}
+
+/** A further listener position in the room (the room's first listener, "L1", is `listener`). */
+export interface RoomListener extends RoomPoint {
+  readonly id: string;
+  /** Short name shown in the tables and on the plan, e.g. "L2" or "Front row". */
+  readonly name: string;
+}
+
+/**
+ * How the level at a listener follows from the sound power into the room: Schultz's empirical relation
+ * for furnished rooms, or the room equation with the room's own absorption for bare rooms.
+ */
+export type RoomCorrectionChoice = 'furnished' | 'bare';
+
 /**
  * A rectangular room, drawn as an axis-aligned rectangle whose top-left corner sits at (x, y) in
  * plan pixels and whose size on the plan follows the plan scale (lengthM along x, widthM along y).
@@ -41,6 +59,12 @@ export interface PlanRoom {
   readonly listener: RoomPoint;
   /** Sound power arriving at the outlet, octave bands 63 Hz to 8 kHz, dB re 1 pW; null: no level prediction. */
   readonly outletSoundPowerDb: readonly number[] | null;
+  /** Further outlets, each fed from its own run end (absent in documents saved before there could be more than one). */
+  readonly extraOutlets?: readonly ExtraOutlet[];
+  /** Further listener positions (absent likewise). */
+  readonly extraListeners?: readonly RoomListener[];
+  /** Furnished (Schultz, the default: absent in documents saved before the choice existed) or bare (the room equation). */
+  readonly roomCorrection?: RoomCorrectionChoice;
 }
 
 /** What choosing a treatment changed on the plan (null in PlanTreatment when it changes nothing drawn). */

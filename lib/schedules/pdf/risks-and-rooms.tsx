@@ -2,6 +2,7 @@
 // saying so plainly when the revision has none.
 import { Text, View } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
+import { RoomNoiseTables } from './room-noise-tables';
 import { Table } from './table';
 import { styles } from './styles';
 
@@ -35,7 +36,8 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
       {content.rooms.length === 0
         ? <Text style={styles.paragraph}>No rooms are drawn on this plan, so no room results are given.</Text>
         : <Table columns={[{ title: 'Room', width: 0.3 }, { title: 'Result', width: 0.7 }]} rows={content.rooms.map((room) => [room.name, room.problem ?? room.summary])} />}
-      {content.rooms.filter((room) => room.path).map((room) => (
+      {content.rooms.filter((room) => room.noise).map((room) => <RoomNoiseTables key={room.id} name={room.name} tables={room.noise!} />)}
+      {content.rooms.filter((room) => !room.noise && room.path).map((room) => (
         <View key={room.id} wrap={false}>
           <Text style={styles.h3}>Noise path to the listener: {room.name}</Text>
           <Table

@@ -118,7 +118,9 @@ describe('room and fan limits', () => {
     const surfaces = Object.fromEntries(['floor', 'ceiling', 'wallXMin', 'wallXMax', 'wallYMin', 'wallYMax'].map((name) => [name, Array(8).fill(0.001)]));
     const input = { box: hall, surfaces: surfaces as never, criterionNc: 30, outlet: { xM: 1, yM: 1, zM: 1 }, listener: { xM: 10, yM: 10, zM: 1.2 } };
     const analysis = analyzeRoom(input);
-    expect(analysis.schroederHz * 2).toBeGreaterThan(analysis.modes.at(-1)?.frequencyHz ?? 0);
+    // the default list goes to twice the Schroeder frequency, at least 100 Hz (with the air's absorption even this
+    // nearly bare hall has f_s near 10 Hz); here the cap on index combinations stops it first
+    expect(Math.max(100, analysis.schroederHz * 2)).toBeGreaterThan(analysis.modes.at(-1)?.frequencyHz ?? 0);
     expect(() => analyzeRoom(input, { maxModeHz: 1000 })).toThrow(/^maxModeHz must be <= /);
     expect(() => imageSources(hall, input.surfaces, input.outlet, input.listener, 11)).toThrow(new RangeError('maxOrder must be <= 10'));
   });

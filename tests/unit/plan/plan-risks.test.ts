@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { performCommand, initialEditorState, sequentialIds } from '@/lib/plan';
 import { planRisks } from '@/lib/plans/risks';
 import { treatmentOptions } from '@/lib/plans/treatment-options';
-import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
+import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan, demoRecitalPlanFirstOutletOnly } from '@/lib/plans/demo/recital-plan';
 import { ROOM_PLAN_METRES_PER_PIXEL as mpp, roomPlanDocument } from './room-plan-fixture';
 
 describe('risks across the plan (server, from the document)', () => {
@@ -61,10 +61,10 @@ describe('risks across the plan (server, from the document)', () => {
   });
 
   it('a candidate that clears its own flag but lands another resonance on the 2nd blade-pass harmonic says so', () => {
-    // The demo plan (invented): 10 blades at 605 rpm, blade-pass 100.8 Hz and its 2nd harmonic 201.7 Hz
-    // (f = n B rpm / 60, common practice, no source). Retuning for the 100.8 Hz tone moves a higher
-    // resonance onto 201.7 Hz: a high tone flag on the treated model that was not there before.
-    const doc = demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
+    // The demo plan's run to its first outlet (invented): 10 blades at 605 rpm, blade-pass 100.8 Hz and its
+    // 2nd harmonic 201.7 Hz (f = n B rpm / 60, common practice, no source). Retuning for the 100.8 Hz tone
+    // moves a higher resonance onto 201.7 Hz: a high tone flag on the treated model that was not there before.
+    const doc = demoRecitalPlanFirstOutletOnly({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
     const high = planRisks(doc, DEMO_METRES_PER_PIXEL).flags.find((flag) => flag.severity === 'high' && flag.subject === 'tone:h1')!;
     const { options } = treatmentOptions(doc, DEMO_METRES_PER_PIXEL, { roomId: high.roomId ?? '' }, high.id);
     const retune = options.find((option) => option.treatment.kind === 'retune-length')!;

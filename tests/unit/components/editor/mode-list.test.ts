@@ -1,16 +1,16 @@
 // The room panel's mode list holds every mode the room analysis computed and marks each mode a flag
-// cites, in words and a shape. Numbers come from the demo plan's own analysis (405 modes to about
-// 151 Hz for its 14 m × 10 m × 6 m recital room; flags on modes (3,0,0), (4,0,0) and (5,0,0)).
+// cites, in words and a shape. Numbers come from the analysis of the demo plan's run to its first outlet
+// (405 modes to about 151 Hz for its 14 m × 10 m × 6 m recital room; flags on modes (3,0,0), (4,0,0) and (5,0,0)).
 import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import type { RiskFlag } from '@/lib/acoustic';
 import { ModeList } from '@/components/editor/rooms/mode-list';
 import { modeRows, modeSubject } from '@/components/editor/rooms/mode-rows';
-import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlan } from '@/lib/plans/demo/recital-plan';
+import { DEMO_FAN_BLADES, DEMO_FAN_SPEEDS_RPM, DEMO_METRES_PER_PIXEL, demoRecitalPlanFirstOutletOnly } from '@/lib/plans/demo/recital-plan';
 import { planRisks } from '@/lib/plans/risks';
 
-const risks = planRisks(demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high }), DEMO_METRES_PER_PIXEL);
+const risks = planRisks(demoRecitalPlanFirstOutletOnly({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high }), DEMO_METRES_PER_PIXEL);
 const modes = risks.rooms[0].analysis?.modes ?? [];
 const roomFlags = risks.flags.filter((flag) => flag.roomId === 'recital-room');
 const modeFlags = roomFlags.filter((flag) => flag.kind === 'resonance-near-room-mode');

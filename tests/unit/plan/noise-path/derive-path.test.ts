@@ -13,22 +13,24 @@ import { expectClose } from '../../acoustic/tolerance';
 const bands = [...OCTAVE_BANDS_HZ];
 
 describe('noise path read off the plan', () => {
-  it('the demo run: ducts, an elbow at each bend, the flush outlet; the listener level is the fan power less each loss plus the room correction', () => {
+  it('the demo run to its first outlet: ducts, an elbow at the bend, the tee to the second outlet as a split, the flush outlet; the listener level is the fan power less each loss plus the room correction', () => {
     const doc = demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
     const room = doc.rooms[0];
     const derived = derivePath(doc, DEMO_METRES_PER_PIXEL, room);
-    expect(derived.input.elements.map((element) => element.kind)).toEqual(['duct', 'elbow', 'duct', 'elbow', 'duct', 'outlet']);
-    expect(derived.sources.map((source) => source.label.split(',')[0])).toEqual(['A1', 'A1/A2 elbow', 'A2', 'A2/A3 elbow', 'A3', 'Outlet A3 end']);
-    // riser 300 px, corridor 400 px, drop 90 px at 20 mm per pixel
-    const ducts = doc.segments.map((segment, index) => ({ section: segment.section, lengthM: [6, 8, 1.8][index] }));
+    expect(derived.input.elements.map((element) => element.kind)).toEqual(['duct', 'elbow', 'duct', 'split', 'duct', 'outlet']);
+    expect(derived.sources.map((source) => source.label.split(',')[0])).toEqual(['A1', 'A1/A2 elbow', 'A2', 'A2 tee: to A3', 'A3', 'Outlet A3 end']);
+    // riser 300 px, corridor 400 px, drop 90 px at 20 mm per pixel; at the tee the drop (Ø 315) and the onward corridor (400 × 250) leave
+    const [riser, corridor, drop, onward] = ['riser', 'corridor-main', 'recital-drop', 'corridor-on'].map((id) => doc.segments.find((segment) => segment.id === id)!.section);
+    const dropM2 = sectionArea(drop);
     const losses = [
-      unlinedDuctAttenuationDbPerM(ducts[0].section, bands).map((perM) => perM * ducts[0].lengthM),
-      elbowAttenuationDb({ section: ducts[0].section }, bands),
-      unlinedDuctAttenuationDbPerM(ducts[1].section, bands).map((perM) => perM * ducts[1].lengthM),
-      elbowAttenuationDb({ section: ducts[1].section }, bands),
-      unlinedDuctAttenuationDbPerM(ducts[2].section, bands).map((perM) => perM * ducts[2].lengthM),
+      unlinedDuctAttenuationDbPerM(riser, bands).map((perM) => perM * 6),
+      elbowAttenuationDb({ section: riser }, bands),
+      unlinedDuctAttenuationDbPerM(corridor, bands).map((perM) => perM * 8),
+      // ASHRAE Handbook, HVAC Applications, noise chapter: 10 log(total area / branch area)
+      bands.map(() => 10 * Math.log10((dropM2 + sectionArea(onward)) / dropM2)),
+      unlinedDuctAttenuationDbPerM(drop, bands).map((perM) => perM * 1.8),
       // flanged at the ceiling: flush mounting (ASHRAE RP-1314 form)
-      endReflectionLoss(2 * equivalentRadiusM(ducts[2].section), 'flush', bands, 16),
+      endReflectionLoss(2 * equivalentRadiusM(drop), 'flush', bands, 16),
     ];
     const distanceM = Math.hypot(room.outlet.xM - room.listener.xM, room.outlet.yM - room.listener.yM, room.outlet.zM - room.listener.zM);
     const volumeM3 = room.lengthM * room.widthM * room.heightM;

@@ -61,7 +61,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
       {!canReview && !isReviewOutcome(revision.state) && <ReviewTallyText tally={tally} />}
       <ChangesTable changes={changes.runs} planChanges={changes.plan} number={revision.number} />
       <TreatmentTable treatments={revision.extras.treatments ?? []} />
-      <RoomPaths rooms={revision.extras.rooms ?? []} />
+      <RoomPaths rooms={revision.extras.rooms ?? []} unitSystem={actor.user.unitSystem} />
       <RevisionWorkspace
         planId={planId} revisionId={revision.id} document={revision.document} metresPerPixel={revision.metresPerPixel} background={background}
         labels={revision.extras.labels ?? null} unitSystem={units}
