@@ -15,6 +15,8 @@ export class Plan extends Model<InferAttributes<Plan>, InferCreationAttributes<P
   declare backgroundUploadId: ForeignKey<Upload['id']> | null;
   declare metresPerPixel: CreationOptional<number>;
   declare version: CreationOptional<number>;
+  /** Version of the name and archive state (renames and archiving carry it). */
+  declare detailsVersion: CreationOptional<number>;
   declare document: unknown;
   declare archived: CreationOptional<boolean>;
   declare updatedById: ForeignKey<User['id']> | null;
@@ -28,6 +30,7 @@ Plan.init(
     name: { type: DataTypes.STRING(160), allowNull: false },
     metresPerPixel: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0.01 },
     version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+    detailsVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
     document: { type: DataTypes.JSONB, allowNull: false },
     archived: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,

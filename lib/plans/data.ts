@@ -14,12 +14,14 @@ import type { SavePlanInput } from './schemas';
 /** Seconds after a save before the job worker analyses the new version ahead. */
 const ANALYSE_AHEAD_DELAY_S = 5;
 
-export interface PlanSummary { id: string; name: string; archived: boolean; version: number; updatedAt: string; hasBackground: boolean }
+export interface PlanSummary { id: string; name: string; archived: boolean; version: number; detailsVersion: number; updatedAt: string; hasBackground: boolean }
 
 export interface PlanView {
   id: string;
   name: string;
   archived: boolean;
+  /** Version of the name and archive state (a rename or archive carries it). */
+  detailsVersion: number;
   version: number;
   metresPerPixel: number;
   document: PlanDocument;
@@ -49,7 +51,7 @@ async function planRowInTeam(teamId: string, planId: string): Promise<Plan & { p
 }
 
 function toSummary(row: Plan): PlanSummary {
-  return { id: row.id, name: row.name, archived: row.archived, version: row.version, updatedAt: row.updatedAt.toISOString(), hasBackground: row.backgroundUploadId !== null };
+  return { id: row.id, name: row.name, archived: row.archived, version: row.version, detailsVersion: row.detailsVersion, updatedAt: row.updatedAt.toISOString(), hasBackground: row.backgroundUploadId !== null };
 }
 
 export async function listPlans(teamId: string, projectId: string, options: { includeArchived?: boolean } = {}): Promise<PlanSummary[]> {
@@ -78,6 +80,7 @@ export async function getPlan(teamId: string, planId: string): Promise<PlanView>
     id: row.id,
     name: row.name,
     archived: row.archived,
+    detailsVersion: row.detailsVersion,
     version: row.version,
     metresPerPixel: row.metresPerPixel,
     document: readSavedDocument(() => planDocumentSchema.parse(row.document)),
@@ -87,14 +90,19 @@ export async function getPlan(teamId: string, planId: string): Promise<PlanView>
   };
 }
 
-export async function updatePlanMeta(teamId: string, actor: AuditActor, planId: string, changes: { name?: string; archived?: boolean }): Promise<PlanSummary> {
+export async function updatePlanMeta(teamId: string, actor: AuditActor, planId: string, changes: { detailsVersion: number; name?: string; archived?: boolean }): Promise<PlanSummary> {
   const row = await planRowInTeam(teamId, planId);
+  const { detailsVersion, ...fields } = changes;
   const before = { name: row.name, archived: row.archived };
   return sequelize.transaction(async (transaction) => {
-    await row.update(changes, { transaction });
+    const [updated] = await Plan.update({ ...fields, detailsVersion: detailsVersion + 1 }, { where: { id: planId, detailsVersion }, transaction });
+    if (updated === 0) {
+      throw new AppError('conflict', `Someone renamed or archived this plan since you opened it (it is now “${row.name}”${row.archived ? ', archived' : ''}, details version ${row.detailsVersion}). Reload to see their change, then make yours again.`, { field: 'detailsVersion' });
+    }
+    await row.reload({ transaction });
     const said = [
-      changes.name !== undefined && changes.name !== before.name ? `renamed from ${before.name}` : null,
-      changes.archived !== undefined && changes.archived !== before.archived ? (changes.archived ? 'archived' : 'taken out of the archive') : null,
+      fields.name !== undefined && fields.name !== before.name ? `renamed from ${before.name}` : null,
+      fields.archived !== undefined && fields.archived !== before.archived ? (fields.archived ? 'archived' : 'taken out of the archive') : null,
     ].filter(Boolean);
     if (said.length > 0) await recordAudit({ teamId, actor, action: 'plan.changed', subject: `${row.name}: ${said.join(', ')}` }, transaction);
     return toSummary(row);

@@ -8,8 +8,13 @@ export const planNameSchema = text({ error: 'Give the plan a name.' }).trim().mi
 export const newPlanSchema = z.object({ name: planNameSchema });
 export type NewPlanInput = z.input<typeof newPlanSchema>;
 
+// A rename or archive carries the details version it was made from (409 when someone changed them since).
 export const planMetaSchema = z
-  .object({ name: planNameSchema.optional(), archived: z.boolean({ error: 'archived must be true or false' }).optional() })
+  .object({
+    detailsVersion: z.number({ error: 'detailsVersion must be the version of the plan’s name and archive state the change is based on' }).int().min(1).max(2_147_483_647),
+    name: planNameSchema.optional(),
+    archived: z.boolean({ error: 'archived must be true or false' }).optional(),
+  })
   .refine((value) => value.name !== undefined || value.archived !== undefined, 'Send a name or archived.');
 
 export const savePlanSchema = z.object({

@@ -46,7 +46,7 @@ function examples(f: Fixtures): Record<string, { body: unknown; params?: Record<
     'POST /api/v1/projects': { body: { name: 'Fuzzed project', site: 'Quay 4' } },
     'PATCH /api/v1/projects/[projectId]': { body: { version: 1, name: 'Renamed project', site: 'Quay 5', archived: false }, params: { projectId: f.projectId } },
     'POST /api/v1/projects/[projectId]/plans': { body: { name: 'Fuzzed plan' }, params: { projectId: f.projectId } },
-    'PATCH /api/v1/plans/[planId]': { body: { name: 'Renamed plan', archived: false }, params: { planId: f.documentPlan.id } },
+    'PATCH /api/v1/plans/[planId]': { body: { detailsVersion: 1, name: 'Renamed plan', archived: false }, params: { planId: f.documentPlan.id } },
     'PUT /api/v1/plans/[planId]/document': {
       body: { version: f.documentPlan.version, metresPerPixel: f.documentPlan.metresPerPixel, document: f.documentPlan.document },
       params: { planId: f.documentPlan.id },

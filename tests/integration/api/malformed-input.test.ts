@@ -95,7 +95,7 @@ describe('text with a NUL character or a lone surrogate', () => {
     const project = await call(patchProject, 'PATCH', `/api/v1/projects/${projectId}`, { cookie: admin, params: { projectId }, body: { version: 1, site: `Quay${NUL}` } });
     expect(project.body).toMatchObject({ error: { field: 'site' } });
     expect((await getProject(team.team.id, projectId))?.site).toBe('Quay 4');
-    const plan = await call(patchPlan, 'PATCH', `/api/v1/plans/${planId}`, { cookie: admin, params: { planId }, body: { name: `Level 1${LONE_HIGH}` } });
+    const plan = await call(patchPlan, 'PATCH', `/api/v1/plans/${planId}`, { cookie: admin, params: { planId }, body: { detailsVersion: 1, name: `Level 1${LONE_HIGH}` } });
     expect(plan.body).toMatchObject({ error: { field: 'name' } });
     expect((await getPlan(team.team.id, planId)).name).toBe('Malformed plan');
   });

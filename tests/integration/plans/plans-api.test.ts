@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST as createPlanRoute } from '@/app/api/v1/projects/[projectId]/plans/route';
-import { GET as getPlanRoute } from '@/app/api/v1/plans/[planId]/route';
+import { GET as getPlanRoute, PATCH as patchPlan } from '@/app/api/v1/plans/[planId]/route';
 import { PUT as saveDocument } from '@/app/api/v1/plans/[planId]/document/route';
 import { GET as getResults } from '@/app/api/v1/plans/[planId]/results/route';
 import { sequelize } from '@/lib/db';
@@ -28,6 +28,26 @@ async function newPlan(name: string): Promise<string> {
   expect(created.status).toBe(201);
   return (created.body as { plan: { id: string } }).plan.id;
 }
+
+describe('plan names and archive state', () => {
+  // Optimistic concurrency: a change carries the version it was made from (common practice, no source).
+  it('take a rename made from an older copy as a 409 and keep the newer name; a rename never makes the drawing’s next save a conflict', async () => {
+    const planId = await newPlan('Level 4 supply');
+    const cookie = await team.cookieFor('acoustician');
+    const mine = await call(patchPlan, 'PATCH', `/api/v1/plans/${planId}`, { cookie, params: { planId }, body: { detailsVersion: 1, name: 'Level 4 supply, east' } });
+    expect(mine.status).toBe(200);
+    expect(mine.body).toMatchObject({ plan: { name: 'Level 4 supply, east', detailsVersion: 2, version: 1 } });
+    const theirs = await call(patchPlan, 'PATCH', `/api/v1/plans/${planId}`, { cookie, params: { planId }, body: { detailsVersion: 1, name: 'Level 4 supply, west' } });
+    expect(theirs.status).toBe(409);
+    expect(theirs.body).toMatchObject({ error: { code: 'conflict', field: 'detailsVersion' } });
+    expect((theirs.body as { error: { message: string } }).error.message).toContain('it is now “Level 4 supply, east”');
+    const read = await call(getPlanRoute, 'GET', `/api/v1/plans/${planId}`, { cookie, params: { planId } });
+    expect(read.body).toMatchObject({ plan: { name: 'Level 4 supply, east', detailsVersion: 2 } });
+    // the editor opened at drawing version 1 still saves after the rename
+    const saved = await call(saveDocument, 'PUT', `/api/v1/plans/${planId}/document`, { cookie, params: { planId }, body: { version: 1, metresPerPixel: 0.01, document: straightRun() } });
+    expect(saved.status).toBe(200);
+  });
+});
 
 describe('plan documents', () => {
   it('saves with the loaded version and refuses a stale one with 409, keeping the newer save', async () => {

@@ -61,7 +61,7 @@ describe('audit log of the team’s work', () => {
     expect(signedIn.status).toBe(201);
     const project = await createProject(team.id, acoustician.id, { name: 'Audit hall', site: '' });
     const planId = await recitalPlan(t, project.id, 'Audit supply');
-    await call(patchPlan, 'PATCH', '/x', { cookie: await t.cookieFor('acoustician'), params: { planId }, body: { name: 'Audit supply, level 1' } });
+    await call(patchPlan, 'PATCH', '/x', { cookie: await t.cookieFor('acoustician'), params: { planId }, body: { detailsVersion: 1, name: 'Audit supply, level 1' } });
     const upload = await storePlanBackground(team.id, acoustician.id, 'level-1.png', tinyPng(40, 30));
     await setPlanBackground(team.id, acoustician, planId, upload.id);
     const plan = await getPlan(team.id, planId);
