@@ -6,7 +6,7 @@ import type { ChangeContext, DocumentChange, PlanSide } from './types';
 import { NONE } from './types';
 import { bandsWords, otherFields, same } from './words';
 
-const DESCRIBED: readonly (keyof PlanRoom)[] = ['id', 'name', 'x', 'y', 'lengthM', 'widthM', 'heightM', 'surfaces', 'criterionNc', 'outlet', 'listener', 'outletSoundPowerDb'];
+const DESCRIBED: readonly (keyof PlanRoom)[] = ['id', 'name', 'x', 'y', 'lengthM', 'widthM', 'heightM', 'surfaces', 'criterionNc', 'outlet', 'listener', 'outletSoundPowerDb', 'extraOutlets', 'extraListeners', 'roomCorrection'];
 
 const SURFACE_WORDS: Record<SurfaceName, string> = {
   floor: 'floor', ceiling: 'ceiling', wallXMin: 'left wall', wallXMax: 'right wall', wallYMin: 'top wall on the plan', wallYMax: 'bottom wall on the plan',
@@ -36,6 +36,20 @@ function feedWords(side: PlanSide, nodeId: string | null): string {
   return nodeId === null ? 'not connected' : side.labels.nodes[nodeId] ?? 'a point no longer on the plan';
 }
 
+function correctionWords(room: PlanRoom): string {
+  return room.roomCorrection === 'bare' ? 'bare room (room equation)' : 'furnished (Schultz)';
+}
+
+function extraOutletWords(room: PlanRoom, side: PlanSide, context: ChangeContext): string {
+  const outlets = room.extraOutlets ?? [];
+  return outlets.length === 0 ? 'none' : outlets.map((outlet) => `fed from ${feedWords(side, outlet.nodeId)} at ${pointWords(outlet, context)}`).join('; ');
+}
+
+function extraListenerWords(room: PlanRoom, context: ChangeContext): string {
+  const listeners = room.extraListeners ?? [];
+  return listeners.length === 0 ? 'none' : listeners.map((listener) => `${listener.name} at ${pointWords(listener, context)}`).join('; ');
+}
+
 function keptRoomChanges(context: ChangeContext, before: PlanRoom, after: PlanRoom): DocumentChange[] {
   const subject = after.name;
   const lines: DocumentChange[] = [];
@@ -53,6 +67,11 @@ function keptRoomChanges(context: ChangeContext, before: PlanRoom, after: PlanRo
   if (before.outlet.xM !== after.outlet.xM || before.outlet.yM !== after.outlet.yM || before.outlet.zM !== after.outlet.zM) add('Outlet position', pointWords(before.outlet, context), pointWords(after.outlet, context));
   if (!same(before.listener, after.listener)) add('Listener position', pointWords(before.listener, context), pointWords(after.listener, context));
   if (!same(before.outletSoundPowerDb, after.outletSoundPowerDb)) add('Outlet sound power', bandsWords(before.outletSoundPowerDb, 'dB'), bandsWords(after.outletSoundPowerDb, 'dB'));
+  const extraOutlets = [extraOutletWords(before, context.before, context), extraOutletWords(after, context.after, context)];
+  if (extraOutlets[0] !== extraOutlets[1]) add('Further outlets', extraOutlets[0], extraOutlets[1]);
+  const extraListeners = [extraListenerWords(before, context), extraListenerWords(after, context)];
+  if (extraListeners[0] !== extraListeners[1]) add('Further listeners', extraListeners[0], extraListeners[1]);
+  if (correctionWords(before) !== correctionWords(after)) add('Room correction', correctionWords(before), correctionWords(after));
   for (const other of otherFields(before, after, DESCRIBED)) add(other.field, other.before, other.after);
   return lines;
 }

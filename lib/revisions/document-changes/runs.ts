@@ -26,7 +26,9 @@ function fanChanges(subject: string, before: PlanRun['fan'], after: PlanRun['fan
   const lines: DocumentChange[] = [];
   if (before.blades !== after.blades) lines.push({ area: 'fan', subject, what: 'Fan blades', before: String(before.blades), after: String(after.blades) });
   if (before.rpm !== after.rpm) lines.push({ area: 'fan', subject, what: 'Fan speed', before: `${before.rpm} rpm`, after: `${after.rpm} rpm` });
-  for (const other of otherFields(before, after, ['blades', 'rpm'])) lines.push({ area: 'fan', subject, what: `Fan ${other.field}`, before: other.before, after: other.after });
+  const range = (fan: NonNullable<PlanRun['fan']>) => (fan.minRpm == null && fan.maxRpm == null ? 'not given' : `${fan.minRpm ?? '?'}–${fan.maxRpm ?? '?'} rpm`);
+  if (range(before) !== range(after)) lines.push({ area: 'fan', subject, what: 'Fan speed range', before: range(before), after: range(after) });
+  for (const other of otherFields(before, after, ['blades', 'rpm', 'minRpm', 'maxRpm'])) lines.push({ area: 'fan', subject, what: `Fan ${other.field}`, before: other.before, after: other.after });
   return lines;
 }
 

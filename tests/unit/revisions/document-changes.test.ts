@@ -31,7 +31,7 @@ const editTreatment = (patch: Partial<PlanTreatment>): PlanDocument => ({ ...wit
 
 describe('documentChanges', () => {
   it('says a fan went from 10 to 11 blades and from 605 to 450 rpm', () => {
-    const lines = changed(editRun({ fan: { blades: 11, rpm: 450 } }));
+    const lines = changed(editRun({ fan: { ...withTreatment.runs[0].fan!, blades: 11, rpm: 450 } }));
     const run = `Run ${labels.runs['recital-supply']} (Rooftop air handler to recital room)`;
     expect(lines).toEqual([
       { area: 'fan', subject: run, what: 'Fan blades', before: '10', after: '11' },
@@ -64,7 +64,7 @@ describe('documentChanges', () => {
     // the riser is drawn 300 px long: 6.00 m at 20 mm a pixel, 7.50 m at 25 mm
     expect(lines).toContainEqual({ area: 'segment', subject: labels.segments.riser, what: 'Length', before: '6.00 m (drawn)', after: '7.50 m (drawn)' });
     expect(lines.filter((line) => line.what === 'Moved' || line.what === 'Place on the plan')).toEqual([]);
-    expect(lines).toHaveLength(4); // the scale and the three drawn lengths
+    expect(lines).toHaveLength(6); // the scale and the five drawn lengths
   });
 
   // One change per field of the schema's runs, segments, rooms, treatments and the document itself.
@@ -113,6 +113,9 @@ describe('documentChanges', () => {
       outlet: () => editRoom({ outlet: { ...withTreatment.rooms[0].outlet, zM: 5 } }),
       listener: () => editRoom({ listener: { ...withTreatment.rooms[0].listener, xM: 7 } }),
       outletSoundPowerDb: () => editRoom({ outletSoundPowerDb: null }),
+      extraOutlets: () => editRoom({ extraOutlets: [] }),
+      extraListeners: () => editRoom({ extraListeners: [] }),
+      roomCorrection: () => editRoom({ roomCorrection: 'bare' }),
     },
     treatments: {},
   };
