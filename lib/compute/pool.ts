@@ -91,17 +91,22 @@ type Stop = 'time' | 'wall';
 
 /**
  * Stops the job when its own thread has used more processor time than the limit (read from /proc,
- * so waiting behind other work does not count), or after the limit on the wall clock where the
- * thread's time cannot be read; in any case after WALL_LIMIT_FACTOR times the limit.
+ * so waiting behind other work does not count), or after the limit on the wall clock from when the
+ * job started in its thread where the thread's time cannot be read. Time before the job starts in
+ * its thread (a new thread loading) never counts; in any case the job is stopped after
+ * WALL_LIMIT_FACTOR times the limit.
  */
 function watchJob(clockCell: Int32Array, timeLimitMs: number, stop: (why: Stop) => void): () => void {
-  const startedMs = performance.now();
+  const askedMs = performance.now();
+  let startedMs: number | null = null;
   const timer = setInterval(() => {
-    const wallMs = performance.now() - startedMs;
-    if (wallMs > timeLimitMs * WALL_LIMIT_FACTOR) return stop('wall');
+    const nowMs = performance.now();
+    if (nowMs - askedMs > timeLimitMs * WALL_LIMIT_FACTOR) return stop('wall');
     const threadId = Atomics.load(clockCell, 0);
+    if (threadId === 0) return; // not started in its thread yet
+    startedMs ??= nowMs;
     const cpuMs = threadId > 0 ? threadCpuMs(threadId) : null;
-    const usedMs = cpuMs === null ? wallMs : cpuMs - Atomics.load(clockCell, 1);
+    const usedMs = cpuMs === null ? nowMs - startedMs : cpuMs - Atomics.load(clockCell, 1);
     if (usedMs > timeLimitMs) stop('time');
   }, CLOCK_POLL_MS);
   return () => clearInterval(timer);

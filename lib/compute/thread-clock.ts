@@ -30,3 +30,6 @@ export function threadCpuMs(threadId: number): number | null {
     return null;
   }
 }
+
+/** What a compute worker writes into its job's clock cell when it cannot read its thread's processor time. */
+export const CLOCK_UNKNOWN = -1;
