@@ -28,7 +28,7 @@ describe('what changed since the previous revision', () => {
     const plan = await getPlan(t.team.id, planId);
     const edited = {
       ...plan.document,
-      runs: plan.document.runs.map((run) => ({ ...run, fan: { blades: 11, rpm: 550 } })),
+      runs: plan.document.runs.map((run) => ({ ...run, fan: { ...run.fan!, blades: 11, rpm: 550 } })),
       rooms: plan.document.rooms.map((room) => ({ ...room, criterionNc: 25 })),
     };
     await savePlanDocument(t.team.id, t.members.acoustician.id, planId, { version: plan.version, metresPerPixel: plan.metresPerPixel, document: edited });
