@@ -141,6 +141,7 @@ export async function savePlanDocument(teamId: string, userId: string, planId: s
     await recordDocumentAudit(teamId, () => auditActorById(userId), before.name, { document: before.document, metresPerPixel: before.metresPerPixel }, input);
   }
   // The job worker analyses the new version ahead (after a moment: the editor asks for it at once).
-  await askForAnalysisAhead(planId, teamId, ANALYSE_AHEAD_DELAY_S);
+  // Not awaited: autosave answers without waiting for the queue (a failure only costs the head start).
+  void askForAnalysisAhead(planId, teamId, ANALYSE_AHEAD_DELAY_S);
   return { version: saved.version, updatedAt: new Date(saved.updated_at).toISOString() };
 }
