@@ -146,7 +146,7 @@ export function runAcousticBench(): void {
   const air = oracleAir(20);
   const oracleFrequencies = 10;
   const oracleMs = timeMs(() => {
-    for (let index = 0; index < oracleFrequencies; index++) chainAdmittance(run.segments, run.end, complex(frequencies[index * 100], 0), air, true);
+    for (let index = 0; index < oracleFrequencies; index++) chainAdmittance(run.segments, run.end, complex(frequencies[index * 100], 0), air, { kirchhoff: true, wallDbPerM: 0 });
   }, 3);
   const oracleNs = (oracleMs * 1e6) / (sweeper.segmentCount * oracleFrequencies);
   const sweepNs = first.engineNs;

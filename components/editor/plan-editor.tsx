@@ -21,6 +21,7 @@ import { EndPanel } from './panels/end-panel';
 import { ResultsPanel } from './panels/results-panel';
 import { RunPanel } from './panels/run-panel';
 import { SegmentPanel } from './panels/segment-panel';
+import { wallWords } from './panels/walls-field';
 import { SaveStatusLabel } from './save-status';
 import { ScheduleCsvControls } from './schedule-csv-controls';
 import { ToolStrip } from './tool-strip';
@@ -216,6 +217,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             <SegmentPanel key={selectedSegment.id} document={doc} segment={selectedSegment} label={labels.segments[selectedSegment.id] ?? ''} metresPerPixel={model.metresPerPixel} unitSystem={unitSystem} editable={editable}
               onSection={(section) => runCommand(model, dispatch, 'set-section', { section })}
               onLining={(lining) => runCommand(model, dispatch, 'set-lining', { lining })}
+              onWall={(wall) => runCommand(model, dispatch, 'set-wall', { wall })}
+              runWallsWords={wallWords(runOfSegment(doc, selectedSegment.id)?.walls ?? null)}
               onLengthOverride={(lengthM) => runCommand(model, dispatch, 'set-length-override', { lengthM })}
               onInserts={(inserts) => runCommand(model, dispatch, 'set-inserts', { inserts })} />
           ) : selectedNode && nodeRun && nodeTermination ? (

@@ -8,6 +8,8 @@ import { discontinuityReflections } from './reflections';
 import { modeShape } from './resonances/mode-shape';
 import { attachLazyEnvelope } from './resonances/lazy-envelope';
 import { findNaturalFrequencies } from './resonances/natural-frequencies';
+import { broadbandFlags, broadbandRangesHz } from './resonances/broadband';
+import { flankingWarnings, runAssumptions } from './run-assumptions';
 import { lowestCutoffHz } from './run-cutoff';
 import type { Resonance, RunAnalysis, RunInput } from './types';
 import { validateRun } from './validate-run';
@@ -38,7 +40,7 @@ export function analyzeRun(input: RunInput): RunAnalysis {
   const runCutoffHz = lowestCutoffHz(input.segments, speedOfSoundMps);
   const minHz = input.minHz ?? DEFAULT_MIN_HZ;
   const maxHz = input.maxHz ?? Math.min(DEFAULT_MAX_HZ, runCutoffHz);
-  const warnings: string[] = [];
+  const warnings: string[] = flankingWarnings(network);
   if (maxHz > runCutoffHz) {
     warnings.push(
       `maxHz (${formatHz(maxHz)}) is above the plane-wave cut-off (${formatHz(runCutoffHz)}): ` +
@@ -65,7 +67,12 @@ export function analyzeRun(input: RunInput): RunAnalysis {
         antinodesM: shape.antinodesM,
         nodesM: shape.nodesM,
         dampingHz: zero.dampingHz,
+        broadband: false,
       }, evaluator);
+    });
+    const broadband = broadbandFlags(resonances);
+    resonances.forEach((resonance, index) => {
+      resonance.broadband = broadband[index];
     });
   } else {
     warnings.push(`no frequency range to analyse: maxHz (${formatHz(maxHz)}) is not above minHz (${formatHz(minHz)})`);
@@ -87,6 +94,8 @@ export function analyzeRun(input: RunInput): RunAnalysis {
     resonances,
     echoes,
     warnings,
+    assumptions: runAssumptions(input),
+    broadbandRangesHz: broadbandRangesHz(resonances, resonances.map((resonance) => resonance.broadband)),
     minHz,
     maxHz,
   };

@@ -79,8 +79,19 @@ export const BOUNDARY_HALF_CONTRIBUTION_KD = 1.895494267033981;
 /** A-weighting at the octave bands 63 Hz to 8 kHz, dB: IEC 61672-1 (2013), Table 3. */
 export const A_WEIGHTING_OCTAVE_DB: readonly number[] = [-26.2, -16.1, -8.6, -3.2, 0, 1.2, 1.0, -1.1];
 
-/** Default window of a coincidence, percent of the tone's frequency (product rule, shown in the UI). */
-export const DEFAULT_COINCIDENCE_PERCENT = 3;
+/** The supply air's temperature swings this much either side of the run's temperature, °C, unless stated (product rule). */
+export const DEFAULT_TEMPERATURE_SWING_C = 5;
+/** A belt-driven fan with no speed range entered runs this much either side of its speed, percent (belt slip; common practice, no source). */
+export const DEFAULT_SPEED_SLIP_PERCENT = 2;
+/** Flag severity by the dB a run adds at a tone over its smooth response: low, medium, high (product rule). */
+export const GAIN_LOW_DB = 3;
+export const GAIN_MEDIUM_DB = 6;
+export const GAIN_HIGH_DB = 10;
+/**
+ * A resonance with Q below this, or whose bandwidth reaches its neighbour, is not a resonance to dodge:
+ * the run responds broadly there (product rule).
+ */
+export const BROADBAND_Q = 5;
 
 /**
  * A point is near an axial mode's pressure maximum within this fraction of the mode's wavelength:

@@ -1,4 +1,7 @@
 // Public types of the acoustic engine (engine contract). SI units; unit names in field names.
+import type { Wall } from './walls/wall-types';
+
+export type { Wall };
 
 export type Section =
   | { shape: 'round'; diameterM: number }
@@ -12,7 +15,11 @@ export type Termination =
 
 export interface Lining {
   thicknessM: number;
-  absorption: number;
+  /**
+   * One absorption coefficient for every band (the user's figure); without it, the per-band absorption
+   * of fibrous duct liner of that thickness applies (lining/fibrous-liner-absorption.ts).
+   */
+  absorption?: number;
 }
 
 export interface Segment {
@@ -20,6 +27,8 @@ export interface Segment {
   section: Section;
   /** Lined inside; the section given is the free airway inside the lining. */
   lining?: Lining;
+  /** The duct's wall, overriding the run's walls for this segment. */
+  wall?: Wall;
   /** Tees at this segment's far end. */
   branches?: Branch[];
 }
@@ -36,7 +45,9 @@ export interface RunInput {
   end: Termination;
   minHz?: number;
   maxHz?: number;
-  /** Kirchhoff visco-thermal wall losses in the segments (default true). */
+  /** The walls of every segment that does not name its own (default: sheet metal). */
+  walls?: Wall;
+  /** false: ideal walls that lose nothing at all (no air boundary layer, no wall attenuation); default true. */
   wallLosses?: boolean;
   /** Echo train: stop after this many arrivals (default 40). */
   maxEchoes?: number;
@@ -53,6 +64,11 @@ export interface Resonance {
   nodesM: number[];
   /** Imaginary part of the complex natural frequency (decay rate / 2π), Hz. */
   dampingHz: number;
+  /**
+   * Q below 5, or a bandwidth that reaches the next resonance: the run responds broadly here; this is
+   * not a resonance to dodge (flags skip it).
+   */
+  broadband: boolean;
   /**
    * |p(x)| / max |p| along the main path (positionM from the start end), from the closed-form standing
    * wave in each segment: every segment boundary plus 8 samples per half wavelength. Computed when first read.
@@ -94,6 +110,10 @@ export interface RunAnalysis {
   resonances: Resonance[];
   echoes: Echo[];
   warnings: string[];
+  /** What the results assume, in words: walls, lining, air, ends. */
+  assumptions: string[];
+  /** Ranges where the resonances are broadband (merged), Hz. */
+  broadbandRangesHz: [number, number][];
   /** Frequency range analysed, after defaults. */
   minHz: number;
   maxHz: number;

@@ -7,6 +7,7 @@ import {
 } from './input-limits';
 import type { RunInput } from './types';
 import { validateAnalysisRange } from './validate-range';
+import { validateWall } from './walls/wall-attenuation';
 
 function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
@@ -74,8 +75,9 @@ function validateSegments(segments: unknown, path: string, depth: number, tally:
       const lining = segment.lining;
       if (!isRecord(lining)) throw inputError(`${segmentPath}.lining`, 'must be an object');
       requireAboveAtMost(lining.thicknessM, 0, MAX_LINING_THICKNESS_M, `${segmentPath}.lining.thicknessM`);
-      requireBetween(lining.absorption, 0, 1, `${segmentPath}.lining.absorption`);
+      if (lining.absorption !== undefined) requireBetween(lining.absorption, 0, 1, `${segmentPath}.lining.absorption`);
     }
+    if (segment.wall !== undefined) validateWall(segment.wall, `${segmentPath}.wall`);
     if (segment.branches !== undefined) {
       if (!Array.isArray(segment.branches)) throw inputError(`${segmentPath}.branches`, 'must be an array');
       if (segment.branches.length > 0 && depth >= MAX_BRANCH_DEPTH) {
@@ -108,6 +110,7 @@ export function validateRun(input: unknown): RunInput {
   if (input.minHz !== undefined && input.maxHz !== undefined && !((input.maxHz as number) > (input.minHz as number))) {
     throw inputError('maxHz', 'must be > minHz');
   }
+  if (input.walls !== undefined) validateWall(input.walls, 'walls');
   if (input.wallLosses !== undefined && typeof input.wallLosses !== 'boolean') throw inputError('wallLosses', 'must be a boolean');
   if (input.maxEchoes !== undefined) requireBetween(input.maxEchoes, 0, MAX_ECHOES, 'maxEchoes');
   if (input.echoThreshold !== undefined) requireBetween(input.echoThreshold, 1e-12, 1, 'echoThreshold');

@@ -1,8 +1,8 @@
 // The plan document: plain readonly data. Changed only by pure functions that return a new document.
-import type { Lining, Section, Termination } from '@/lib/acoustic';
+import type { Lining, Section, Termination, Wall } from '@/lib/acoustic';
 import type { PlanRoom, PlanTreatment } from './rooms/room-types';
 
-export type { Lining, Section, Termination };
+export type { Lining, Section, Termination, Wall };
 
 export interface PlanNode {
   readonly id: string;
@@ -17,6 +17,8 @@ export interface PlanSegment {
   readonly to: string;
   readonly section: Section;
   readonly lining?: Lining | null;
+  /** Walls of its own; absent or null: the run's walls. */
+  readonly wall?: Wall | null;
   /** When set, the segment's length instead of the drawn one (schematic drawings). */
   readonly lengthOverrideM?: number | null;
   /** Stable number within its run, shown as the run letter and this number ("A3"); set by normalize. */
@@ -65,6 +67,8 @@ export interface PlanRun {
   /** The leaf chosen as the run's end for results; null: the farthest leaf from the start. */
   readonly endNodeId: string | null;
   readonly temperatureC: number;
+  /** The walls of its segments (absent or null: sheet metal), unless a segment has its own. */
+  readonly walls?: Wall | null;
   readonly fan: Fan | null;
   /** The fan's sound power into this run, octave bands 63 Hz to 8 kHz, dB re 1 pW (the noise path starts from it). */
   readonly fanSoundPowerDb?: readonly number[] | null;

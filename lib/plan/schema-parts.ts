@@ -68,7 +68,26 @@ export const positiveAtMost = (what: string, most: number, unit: string) =>
 
 export const liningThicknessMSchema = positiveAtMost('lining thickness', MAX_LINING_THICKNESS_M, 'm');
 
-export const liningSchema = z.object({ thicknessM: liningThicknessMSchema, absorption: absorptionSchema });
+/** Without absorption, fibrous liner of that thickness absorbs by band. */
+export const liningSchema = z.object({ thicknessM: liningThicknessMSchema, absorption: absorptionSchema.optional() });
+
+/** A measured wall's attenuation may not exceed this, dB/m (a lined duct's Sabine figure for a 100 mm duct is about 40; product rule). */
+export const MAX_WALL_DB_PER_M = 50;
+
+export const wallSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('rigid') }),
+    z.object({ kind: z.literal('sheet-metal') }),
+    z.object({
+      kind: z.literal('measured'),
+      attenuationDbPerM: z
+        .array(finite('attenuation').min(0, 'must be at least 0 dB/m').max(MAX_WALL_DB_PER_M, `must be at most ${MAX_WALL_DB_PER_M} dB/m`))
+        .length(8, 'give eight octave bands, 63 Hz to 8 kHz'),
+    }),
+  ],
+  { error: "kind must be 'rigid', 'sheet-metal' or 'measured'" },
+);
 
 export const terminationSchema = z.discriminatedUnion(
   'kind',

@@ -6,7 +6,7 @@ import { planTreatmentSchema, roomSchema, soundPowerBandsSchema } from './rooms/
 import { pathInsertSchema } from './noise/insert-schema';
 import { roomPlaceProblems } from './rooms/room-places';
 import {
-  fanSchema, idSchema, lengthOverrideMSchema, liningSchema, MAX_ITEMS, MAX_PLAN_NODES, MAX_PLAN_ROOMS, MAX_PLAN_RUNS, MAX_PLAN_SEGMENTS,
+  fanSchema, idSchema, lengthOverrideMSchema, liningSchema, wallSchema, MAX_ITEMS, MAX_PLAN_NODES, MAX_PLAN_ROOMS, MAX_PLAN_RUNS, MAX_PLAN_SEGMENTS,
   planCoordinateSchema, planList, runLetterSchema, sectionSchema, segmentNumberSchema, temperatureCSchema, terminationSchema,
 } from './schema-parts';
 
@@ -20,6 +20,7 @@ const segmentSchema = z.object({
   to: idSchema,
   section: sectionSchema,
   lining: liningSchema.nullable().optional(),
+  wall: wallSchema.nullable().optional(),
   lengthOverrideM: lengthOverrideMSchema.nullable().optional(),
   number: segmentNumberSchema.optional(),
   inserts: z.array(pathInsertSchema).max(8, 'at most 8 inserts on one segment').optional(),
@@ -34,6 +35,7 @@ const runSchema = z.object({
   startNodeId: idSchema,
   endNodeId: idSchema.nullable(),
   temperatureC: temperatureCSchema,
+  walls: wallSchema.nullable().optional(),
   fan: fanSchema.nullable(),
   fanSoundPowerDb: soundPowerBandsSchema.nullable().optional(),
   terminations: z.record(idSchema, terminationSchema),

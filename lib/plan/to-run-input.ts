@@ -23,11 +23,12 @@ function terminationAt(run: PlanRun, nodeId: string): Termination {
 }
 
 function engineSegment(link: ChildLink, branches: Branch[]): Segment {
-  const { section, lining } = link.segment;
+  const { section, lining, wall } = link.segment;
   return {
     lengthM: link.lengthM,
     section: { ...section },
-    ...(lining ? { lining: { thicknessM: lining.thicknessM, absorption: lining.absorption } } : {}),
+    ...(lining ? { lining: { thicknessM: lining.thicknessM, ...(lining.absorption === undefined ? {} : { absorption: lining.absorption }) } } : {}),
+    ...(wall ? { wall } : {}),
     ...(branches.length > 0 ? { branches } : {}),
   };
 }
@@ -70,6 +71,7 @@ export function toRunInputWithMap(doc: PlanDocument, runId: string, metresPerPix
   const segments = links.map((link, index) => engineSegment(link, index === lastIndex ? [] : sideBranches(tree, link.childNodeId, links[index + 1].segment.id)));
   const input: RunInput = {
     temperatureC: tree.run.temperatureC,
+    ...(tree.run.walls ? { walls: tree.run.walls } : {}),
     segments,
     start: terminationAt(tree.run, tree.run.startNodeId),
     end: terminationAt(tree.run, pieces[lastIndex].toNodeId),

@@ -13,11 +13,11 @@ import { nodeDegree, runOfNode } from '@/lib/plan/topology';
 import { withoutTreatmentChanges } from './analysis/baseline';
 
 /**
- * The coincidence rules the plan's flags use, stated in the risk list: a resonance within the wider of
- * its half bandwidth and this percentage of a tone or mode; a point within this fraction of a
- * wavelength of a mode's pressure maximum (the engine's own defaults, passed explicitly).
+ * The rules the plan's flags use, stated in the risk list: the supply air's swing either side of the
+ * run's temperature, °C; the fan's belt slip when no speed range is entered, percent; a point within this
+ * fraction of a wavelength of a mode's pressure maximum (the engine's own defaults, passed explicitly).
  */
-export const RISK_OPTIONS = { coincidencePercent: 3, nearMaximumWavelengths: 1 / 8 } as const;
+export const RISK_OPTIONS = { temperatureSwingC: 5, speedSlipPercent: 2, nearMaximumWavelengths: 1 / 8 } as const;
 
 export interface LevelContext {
   /** The run ending at the room's outlet, the room, the outlet sound power and the baseline run it was given for. */
@@ -37,7 +37,7 @@ export interface RiskContext {
 }
 
 export function fanInput(run: PlanRun): FanInput | undefined {
-  return run.fan ? { blades: run.fan.blades, rpm: run.fan.rpm } : undefined;
+  return run.fan ? { blades: run.fan.blades, rpm: run.fan.rpm, minRpm: run.fan.minRpm ?? null, maxRpm: run.fan.maxRpm ?? null } : undefined;
 }
 
 /** The run that feeds a room through its first outlet. Throws PlanError. */

@@ -46,7 +46,8 @@ export interface PlanRisks {
   rooms: RoomResult[];
   flags: PlacedFlag[];
   /** The rules behind the flags, for the risk list to state. */
-  coincidencePercent: number;
+  temperatureSwingC: number;
+  speedSlipPercent: number;
   nearMaximumWavelengths: number;
 }
 

@@ -2,7 +2,7 @@
 // change each would make to the drawing when chosen, described with the plan's stable labels. Only
 // treatments that change something drawn on the flag's own path and improve the flagged quantity
 // are offered.
-import { candidateTreatments, describeTreatment, type FlaggedQuantity, type RiskFlag, type Treatment, type TreatmentNames, type TreatmentResult } from '@/lib/acoustic';
+import { candidateTreatments, describeTreatment, lowersQuantity, type RiskFlag, type Treatment, type TreatmentNames, type TreatmentResult } from '@/lib/acoustic';
 import { AppError } from '@/lib/errors';
 import type { PlanDocument } from '@/lib/plan/document';
 import { PlanError } from '@/lib/plan/errors';
@@ -37,7 +37,8 @@ export function planChangeFor(treatment: Treatment, path: readonly MainPathPiece
     case 'line-segment': {
       const piece = path[treatment.segmentIndex];
       const whole = treatment.lengthM === undefined || treatment.lengthM >= segmentLengthsM[treatment.segmentIndex];
-      return piece && whole ? { kind: 'lining', segmentId: piece.segmentId, lining: { thicknessM: treatment.thicknessM, absorption: treatment.absorption } } : null;
+      const lining = { thicknessM: treatment.thicknessM, ...(treatment.absorption === undefined ? {} : { absorption: treatment.absorption }) };
+      return piece && whole ? { kind: 'lining', segmentId: piece.segmentId, lining } : null;
     }
     case 'change-termination': {
       const nodeId = treatment.end === 'start' ? startNodeId : path.at(-1)?.toNodeId;
@@ -55,12 +56,6 @@ function namesFor(labels: PlanLabels, path: readonly MainPathPiece[], startNodeI
   };
 }
 
-/** Whether the treated quantity is better than before: a lower level, or a resonance further from its target. */
-function improves(before: FlaggedQuantity, after: FlaggedQuantity, clears: boolean): boolean {
-  if (before.levelDb !== undefined) return after.levelDb !== undefined && after.levelDb < before.levelDb - 0.05;
-  if (clears) return true;
-  return before.distanceHz !== undefined && after.distanceHz !== undefined && after.distanceHz > before.distanceHz + 0.005;
-}
 
 function optionsFor(context: RiskContext, labels: PlanLabels, flag: RiskFlag): TreatmentOption[] {
   const { input, path } = contextFor(context, flag.kind);
@@ -68,7 +63,7 @@ function optionsFor(context: RiskContext, labels: PlanLabels, flag: RiskFlag): T
   const names = namesFor(labels, path, context.run.startNodeId);
   return candidateTreatments(input, flag)
     .map((result) => ({ ...result, description: describeTreatment(result.treatment, names), planChange: planChangeFor(result.treatment, path, lengthsM, context.run.startNodeId) }))
-    .filter((option) => (option.planChange !== null || option.treatment.kind === 'side-branch-resonator') && improves(option.before, option.after, option.clears));
+    .filter((option) => (option.planChange !== null || option.treatment.kind === 'side-branch-resonator') && lowersQuantity(option.before, option.after, option.clears));
 }
 
 /** The flag as the stored analysis has it, for this target. */

@@ -144,7 +144,7 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
       const segment = segments.get(piece.segmentId);
       return {
         index: index + 1, label: labels.segments[piece.segmentId] ?? String(index + 1), lengthM: piece.endM - piece.startM, section: segment ? describeSection(segment.section) : '—',
-        lining: segment?.lining ? `${(segment.lining.thicknessM * 1000).toFixed(0)} mm, absorption ${segment.lining.absorption.toFixed(2)}` : 'none',
+        lining: segment?.lining ? `${(segment.lining.thicknessM * 1000).toFixed(0)} mm, ${segment.lining.absorption === undefined ? 'fibrous liner by band' : `absorption ${segment.lining.absorption.toFixed(2)}`}` : 'none',
       };
     }),
     terminations,

@@ -1,15 +1,16 @@
 'use client';
 
 import { useEffect, useState } from 'react';
-import type { Fan, PlanRun } from '@/lib/plan';
+import type { Fan, PlanRun, Wall } from '@/lib/plan';
 import { NumberInput } from './number-input';
 import { SoundPowerField } from '../rooms/sound-power-field';
 import { FanNoiseFields } from './fan-noise-fields';
+import { WallsField } from './walls-field';
 
 interface RunPanelProps {
   run: PlanRun;
   editable: boolean;
-  onChange: (changes: { name?: string; temperatureC?: number; fan?: Fan | null; fanSoundPowerDb?: number[] | null }) => void;
+  onChange: (changes: { name?: string; temperatureC?: number; walls?: Wall | null; fan?: Fan | null; fanSoundPowerDb?: number[] | null }) => void;
   /** Numbers the run's segments 1, 2, … from the start again (labels elsewhere keep theirs until then). */
   onRenumber?: () => void;
 }
@@ -27,6 +28,8 @@ export function RunPanel({ run, editable, onChange, onRenumber }: RunPanelProps)
           onBlur={() => { if (name.trim() && name !== run.name) onChange({ name: name.trim() }); }} />
       </div>
       <NumberInput label="Air temperature" unit="°C" value={run.temperatureC} min={-40} max={60} onCommit={(value) => value !== null && onChange({ temperatureC: value })} />
+      <p className="text-xs text-graphite-500">Flags allow for the supply air swinging ±5 °C about this, and the fan&apos;s speed range (±2 % belt slip when none is entered).</p>
+      <WallsField label="Walls of its segments" wall={run.walls ?? null} inheritedWords="Sheet metal (the default)" onChange={(walls) => onChange({ walls })} />
       <div className="grid grid-cols-2 gap-2">
         <NumberInput label="Fan blades" value={run.fan?.blades ?? null} min={1} max={100} integer allowEmpty
           onCommit={(blades) => onChange({ fan: blades === null ? null : { ...run.fan, blades, rpm: run.fan?.rpm ?? 1200 } })} />

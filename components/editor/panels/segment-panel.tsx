@@ -1,11 +1,12 @@
 'use client';
 
-import { segmentLengthM, type PathInsert, type PlanDocument, type PlanSegment, type Section } from '@/lib/plan';
+import { segmentLengthM, type Lining, type PathInsert, type PlanDocument, type PlanSegment, type Section, type Wall } from '@/lib/plan';
 import { InsertsField } from './inserts-field';
 import { formatLength } from '@/lib/plan/units';
 import type { UnitSystem } from '@/models/user';
 import { LengthInput } from './length-input';
 import { NumberInput } from './number-input';
+import { WallsField } from './walls-field';
 
 interface SegmentPanelProps {
   document: PlanDocument;
@@ -16,13 +17,16 @@ interface SegmentPanelProps {
   unitSystem: UnitSystem;
   editable: boolean;
   onSection: (section: Section) => void;
-  onLining: (lining: { thicknessM: number; absorption: number } | null) => void;
+  onLining: (lining: Lining | null) => void;
+  onWall: (wall: Wall | null) => void;
+  /** The run's walls in words, for the inherited choice. */
+  runWallsWords: string;
   onLengthOverride: (lengthM: number | null) => void;
   onInserts?: (inserts: PathInsert[]) => void;
 }
 
 // The selected segment: section, lining and length (drawn, or typed when drawn schematically).
-export function SegmentPanel({ document: doc, segment, label, metresPerPixel, unitSystem, editable, onSection, onLining, onLengthOverride, onInserts }: SegmentPanelProps) {
+export function SegmentPanel({ document: doc, segment, label, metresPerPixel, unitSystem, editable, onSection, onLining, onWall, runWallsWords, onLengthOverride, onInserts }: SegmentPanelProps) {
   const from = doc.nodes.find((node) => node.id === segment.from)!;
   const to = doc.nodes.find((node) => node.id === segment.to)!;
   const drawnM = segmentLengthM(from, to, metresPerPixel);
@@ -66,16 +70,25 @@ export function SegmentPanel({ document: doc, segment, label, metresPerPixel, un
       </div>
       <div className="space-y-2">
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={Boolean(segment.lining)} onChange={(event) => onLining(event.target.checked ? { thicknessM: 0.025, absorption: 0.6 } : null)} />
+          <input type="checkbox" checked={Boolean(segment.lining)} onChange={(event) => onLining(event.target.checked ? { thicknessM: 0.025 } : null)} />
           Lined inside
         </label>
         {segment.lining && (
           <div className="grid grid-cols-2 gap-2">
             <LengthInput label="Lining thickness" kind="section" unitSystem={unitSystem} valueM={segment.lining.thicknessM} onCommit={(value) => value && onLining({ ...segment.lining!, thicknessM: value })} />
-            <NumberInput label="Absorption α" value={segment.lining.absorption} min={0} max={1} onCommit={(value) => value !== null && onLining({ ...segment.lining!, absorption: value })} />
+            <NumberInput label="Absorption α (blank: by band)" value={segment.lining.absorption ?? null} min={0} max={1} allowEmpty
+              onCommit={(value) => {
+                const { absorption: _old, ...rest } = segment.lining!;
+                void _old;
+                onLining(value === null ? rest : { ...rest, absorption: value });
+              }} />
           </div>
         )}
+        {segment.lining && segment.lining.absorption === undefined && (
+          <p className="text-xs text-graphite-500">Fibrous liner absorbing by band for its thickness; walls and lining take at most 40 dB over the segment (flanking).</p>
+        )}
       </div>
+      <WallsField label="Walls" wall={segment.wall ?? null} inheritedWords={`As the run (${runWallsWords})`} onChange={onWall} />
       {onInserts && <InsertsField inserts={segment.inserts ?? []} editable={editable} unitSystem={unitSystem} onChange={onInserts} />}
     </fieldset>
   );

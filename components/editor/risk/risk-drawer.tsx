@@ -16,7 +16,7 @@ interface RiskDrawerProps {
   planId: string;
   version: number;
   flags: PlacedFlag[] | null;
-  rules: { coincidencePercent: number; nearMaximumWavelengths: number } | null;
+  rules: { temperatureSwingC: number; speedSlipPercent: number; nearMaximumWavelengths: number } | null;
   roomResults: RoomResult[];
   rooms: readonly PlanRoom[];
   treatments: readonly PlanTreatment[];

@@ -7,7 +7,7 @@ import { SeverityBadge } from './severity-badge';
 interface RiskListProps {
   flags: PlacedFlag[];
   /** The rules behind the flags (null while loading). */
-  rules: { coincidencePercent: number; nearMaximumWavelengths: number } | null;
+  rules: { temperatureSwingC: number; speedSlipPercent: number; nearMaximumWavelengths: number } | null;
   canEvaluate: boolean;
   openFlagId: string | null;
   onOpen: (flag: PlacedFlag) => void;
@@ -17,8 +17,9 @@ interface RiskListProps {
 export function RiskList({ flags, rules, canEvaluate, openFlagId, onOpen }: RiskListProps) {
   const ruleText = rules && (
     <p className="text-xs text-graphite-500" data-testid="risk-rules">
-      A duct resonance is flagged when it lies within its half bandwidth or {rules.coincidencePercent} % of a fan tone or room mode, whichever is wider;
-      a room mode counts below the room&apos;s Schroeder frequency when the outlet or listener is within {(rules.nearMaximumWavelengths * 100).toFixed(1)} % of a wavelength of its pressure maximum.
+      A duct resonance is flagged when its band meets a fan tone or room mode anywhere over the operating envelope (the fan&apos;s speed range, or ±{rules.speedSlipPercent} % belt slip
+      without one; the supply air ±{rules.temperatureSwingC} °C) and the run adds at least 3 dB there over its smooth response (low from 3 dB, medium from 6, high from 10);
+      broad resonances (Q under 5, or overlapping their neighbours) are not flagged. A room mode counts below the room&apos;s Schroeder frequency when the outlet or listener is within {(rules.nearMaximumWavelengths * 100).toFixed(1)} % of a wavelength of its pressure maximum.
     </p>
   );
   if (flags.length === 0) {

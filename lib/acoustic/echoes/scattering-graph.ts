@@ -3,15 +3,22 @@
 // a plain junction of areas: its branch mouth's mass, tee-junction.ts, only acts as frequency rises).
 import { airProperties } from '../air';
 import { DEFAULT_TEMPERATURE_C } from '../constants';
-import { sabineLinedDuctNpPerM } from '../lining-attenuation';
-import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
+import { equivalentRadiusM, sectionArea } from '../section';
 import { lowFrequencyEndCorrectionM, terminationReflection } from '../terminations';
-import type { RunInput, Segment, Termination } from '../types';
+import type { RunInput, Segment, Termination, Wall } from '../types';
+import { segmentAttenuation } from '../walls/segment-attenuation';
+
+/**
+ * The echo lattice is broadband; its arrivals are attenuated by the walls and lining as in this
+ * octave band (250 Hz: the middle of the range where the plane waves that carry the echoes dominate;
+ * product rule).
+ */
+const ECHO_BAND_INDEX = 2;
 
 export interface GraphEdge {
   lengthM: number;
   areaM2: number;
-  /** Amplitude factor of one traversal (lining attenuation). */
+  /** Amplitude factor of one traversal (walls and lining in the 250 Hz band). */
   transmission: number;
   nodes: [number, number];
 }
@@ -32,6 +39,11 @@ export interface ScatteringGraph {
 }
 
 const AREA_MATCH = 1e-12;
+
+interface WallsOfRun {
+  walls: Wall | undefined;
+  wallLosses: boolean;
+}
 
 function addNode(graph: ScatteringGraph, label: string): number {
   graph.nodes.push({ label, edges: [], terminationArea: 0, reflectionDelayS: 0 });
@@ -54,7 +66,7 @@ function linkEdge(graph: ScatteringGraph, from: number, to: number, lengthM: num
 }
 
 /** Adds a chain of segments from node `from`; consecutive segments of equal area without tees merge into one edge. */
-function addChain(graph: ScatteringGraph, from: number, segments: Segment[], end: Termination, prefix: string): void {
+function addChain(graph: ScatteringGraph, from: number, segments: Segment[], end: Termination, prefix: string, walls: WallsOfRun): void {
   let startNode = from;
   let runLengthM = 0;
   let runAttenuationNp = 0;
@@ -63,9 +75,7 @@ function addChain(graph: ScatteringGraph, from: number, segments: Segment[], end
     const areaM2 = sectionArea(segment.section);
     runLengthM += segment.lengthM;
     positionM += segment.lengthM;
-    if (segment.lining) {
-      runAttenuationNp += sabineLinedDuctNpPerM(segment.lining.absorption, sectionPerimeter(segment.section), areaM2) * segment.lengthM;
-    }
+    runAttenuationNp += segmentAttenuation(segment, walls.walls, walls.wallLosses).npPerM[ECHO_BAND_INDEX] * segment.lengthM;
     const isLast = index === segments.length - 1;
     const branches = segment.branches ?? [];
     const nextArea = isLast ? areaM2 : sectionArea(segments[index + 1].section);
@@ -75,7 +85,7 @@ function addChain(graph: ScatteringGraph, from: number, segments: Segment[], end
     const node = addNode(graph, label);
     linkEdge(graph, startNode, node, runLengthM, areaM2, runAttenuationNp);
     if (isLast) attachTermination(graph, node, end, segment);
-    branches.forEach((branch) => addChain(graph, node, branch.segments, branch.end, `${prefix}branch${where}: `));
+    branches.forEach((branch) => addChain(graph, node, branch.segments, branch.end, `${prefix}branch${where}: `, walls));
     startNode = node;
     runLengthM = 0;
     runAttenuationNp = 0;
@@ -87,7 +97,7 @@ export function buildScatteringGraph(input: RunInput): ScatteringGraph {
   const graph: ScatteringGraph = { nodes: [], edges: [], speedOfSoundMps: air.speedOfSoundMps };
   const start = addNode(graph, 'start');
   attachTermination(graph, start, input.start, input.segments[0]);
-  addChain(graph, start, input.segments, input.end, '');
+  addChain(graph, start, input.segments, input.end, '', { walls: input.walls, wallLosses: input.wallLosses ?? true });
   return graph;
 }
 

@@ -4,10 +4,11 @@ import { airProperties, type AirProperties } from '../air';
 import { DEFAULT_TEMPERATURE_C } from '../constants';
 import { lowFrequencyEndCorrectionM, terminationReflection } from '../terminations';
 import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
-import { sabineLinedDuctNpPerM } from '../lining-attenuation';
 import { branchMouthCorrectionM } from '../tee-junction';
 import { kirchhoffAttenuationPerSqrtHz } from '../wall-losses';
-import type { RunInput, Segment, Termination } from '../types';
+import { segmentAttenuation } from '../walls/segment-attenuation';
+import type { RunInput, Segment, Termination, Wall } from '../types';
+import { BAND_COUNT, bandCurveSlopes } from './band-curve';
 import { mergeMainStretches, sameUniformDuct, type MainStretch } from './uniform-stretches';
 
 export type { MainStretch } from './uniform-stretches';
@@ -46,8 +47,14 @@ export interface CompiledNetwork {
   segmentAreaM2: Float64Array;
   segmentImpedance: Float64Array;
   segmentKirchhoffPerSqrtHz: Float64Array;
-  segmentLiningNpPerM: Float64Array;
-  segmentLiningDbPerM: Float64Array;
+  /**
+   * Walls and lining: each segment's attenuation in the octave bands 63 Hz to 8 kHz, Np/m (BAND_COUNT
+   * values per segment), and the slopes of its curve through them in ln f (band-curve.ts).
+   */
+  segmentBandNpPerM: Float64Array;
+  segmentBandSlopes: Float64Array;
+  /** Per segment: the bands (Hz) whose wall and lining attenuation the flanking cap limited. */
+  segmentCappedBandsHz: number[][];
   terminations: CompiledTermination[];
   /** Inertance rho t_i / S_b of each branch mouth, kg/m^4 (tee-junction.ts). */
   mouthInertance: Float64Array;
@@ -55,7 +62,9 @@ export interface CompiledNetwork {
   opLengthM: Float64Array;
   opImpedance: Float64Array;
   opKirchhoffPerSqrtHz: Float64Array;
-  opLiningNpPerM: Float64Array;
+  /** Band attenuation and slopes by op position (BAND_COUNT values each), as segmentBandNpPerM. */
+  opBandNpPerM: Float64Array;
+  opBandSlopes: Float64Array;
   /** For a segment op at position op / 2: the op index just past its run of consecutive segment ops. */
   opSegmentRunEnd: Int32Array;
   /** Pairs (opcode, operand), post-order: evaluates the main path from its end back to the start. */
@@ -93,8 +102,12 @@ interface Builder {
   areas: number[];
   impedances: number[];
   kirchhoff: number[];
-  liningNp: number[];
-  liningDb: number[];
+  /** Per segment, BAND_COUNT values each. */
+  bandNp: number[][];
+  bandSlopes: number[][];
+  cappedBandsHz: number[][];
+  walls: Wall | undefined;
+  wallLosses: boolean;
   mouthInertances: number[];
 }
 
@@ -111,17 +124,18 @@ function addTermination(builder: Builder, termination: Termination, lastSegment:
   return builder.network.terminations.length - 1;
 }
 
-function addSegment(builder: Builder, segment: Segment, wallLosses: boolean): number {
+function addSegment(builder: Builder, segment: Segment): number {
   const air = builder.network.air;
   const areaM2 = sectionArea(segment.section);
   const perimeterM = sectionPerimeter(segment.section);
   builder.lengths.push(segment.lengthM);
   builder.areas.push(areaM2);
   builder.impedances.push((air.densityKgM3 * air.speedOfSoundMps) / areaM2);
-  builder.kirchhoff.push(wallLosses ? kirchhoffAttenuationPerSqrtHz(perimeterM, areaM2, air) : 0);
-  const liningNp = segment.lining ? sabineLinedDuctNpPerM(segment.lining.absorption, perimeterM, areaM2) : 0;
-  builder.liningNp.push(liningNp);
-  builder.liningDb.push(liningNp * (20 / Math.LN10));
+  builder.kirchhoff.push(builder.wallLosses ? kirchhoffAttenuationPerSqrtHz(perimeterM, areaM2, air) : 0);
+  const attenuation = segmentAttenuation(segment, builder.walls, builder.wallLosses);
+  builder.bandNp.push(attenuation.npPerM);
+  builder.bandSlopes.push(bandCurveSlopes(attenuation.npPerM));
+  builder.cappedBandsHz.push(attenuation.cappedBandsHz);
   builder.network.totalLengthM += segment.lengthM;
   return builder.lengths.length - 1;
 }
@@ -157,8 +171,8 @@ function pushSegmentOp(builder: Builder, segment: number): void {
 }
 
 /** Emits the program of one chain (main path or branch), outermost end first. */
-function compileChain(builder: Builder, segments: Segment[], end: Termination, wallLosses: boolean): CompiledChain {
-  const indices = segments.map((segment) => addSegment(builder, segment, wallLosses));
+function compileChain(builder: Builder, segments: Segment[], end: Termination): CompiledChain {
+  const indices = segments.map((segment) => addSegment(builder, segment));
   const endTermination = addTermination(builder, end, segments[segments.length - 1]);
   const branchLists: CompiledBranch[][] = segments.map(() => []);
   pushOp(builder, OP_TERMINATION, endTermination);
@@ -166,7 +180,7 @@ function compileChain(builder: Builder, segments: Segment[], end: Termination, w
   for (let position = segments.length - 1; position >= 0; position--) {
     for (const branch of segments[position].branches ?? []) {
       const programStart = builder.ops.length;
-      const chain = compileChain(builder, branch.segments, branch.end, wallLosses);
+      const chain = compileChain(builder, branch.segments, branch.end);
       pushOp(builder, OP_MOUTH, addMouth(builder, branch.segments[0], segments[position]));
       chain.segments.forEach((segmentIndex, nestedPosition) =>
         builder.network.branchesAtSegment.set(segmentIndex, chain.branches[nestedPosition]),
@@ -206,15 +220,17 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
     segmentAreaM2: new Float64Array(0),
     segmentImpedance: new Float64Array(0),
     segmentKirchhoffPerSqrtHz: new Float64Array(0),
-    segmentLiningNpPerM: new Float64Array(0),
-    segmentLiningDbPerM: new Float64Array(0),
+    segmentBandNpPerM: new Float64Array(0),
+    segmentBandSlopes: new Float64Array(0),
+    segmentCappedBandsHz: [],
     terminations: [],
     mouthInertance: new Float64Array(0),
     program: new Int32Array(0),
     opLengthM: new Float64Array(0),
     opImpedance: new Float64Array(0),
     opKirchhoffPerSqrtHz: new Float64Array(0),
-    opLiningNpPerM: new Float64Array(0),
+    opBandNpPerM: new Float64Array(0),
+    opBandSlopes: new Float64Array(0),
     opSegmentRunEnd: new Int32Array(0),
     stackDepth: 0,
     startTermination: 0,
@@ -226,10 +242,9 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
     mainLengthM: 0,
     totalLengthM: 0,
   };
-  const builder: Builder = { network, ops: [], opLengths: [], mergeUniform: options.mergeUniformStretches ?? true, lengths: [], areas: [], impedances: [], kirchhoff: [], liningNp: [], liningDb: [], mouthInertances: [] };
+  const builder: Builder = { network, ops: [], opLengths: [], mergeUniform: options.mergeUniformStretches ?? true, lengths: [], areas: [], impedances: [], kirchhoff: [], bandNp: [], bandSlopes: [], cappedBandsHz: [], walls: input.walls, wallLosses: input.wallLosses ?? true, mouthInertances: [] };
   network.startTermination = addTermination(builder, input.start, input.segments[0]);
-  const wallLosses = input.wallLosses ?? true;
-  const mainChain = compileChain(builder, input.segments, input.end, wallLosses);
+  const mainChain = compileChain(builder, input.segments, input.end);
   network.stackDepth = mainChain.depth;
   network.mainSegments = mainChain.segments;
   network.mainBranches = mainChain.branches;
@@ -243,8 +258,9 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
   network.segmentAreaM2 = Float64Array.from(builder.areas);
   network.segmentImpedance = Float64Array.from(builder.impedances);
   network.segmentKirchhoffPerSqrtHz = Float64Array.from(builder.kirchhoff);
-  network.segmentLiningNpPerM = Float64Array.from(builder.liningNp);
-  network.segmentLiningDbPerM = Float64Array.from(builder.liningDb);
+  network.segmentBandNpPerM = Float64Array.from(builder.bandNp.flat());
+  network.segmentBandSlopes = Float64Array.from(builder.bandSlopes.flat());
+  network.segmentCappedBandsHz = builder.cappedBandsHz;
   const byOp = (values: Float64Array): Float64Array =>
     Float64Array.from({ length: builder.ops.length / 2 }, (_, position) =>
       builder.ops[2 * position] === OP_SEGMENT ? values[builder.ops[2 * position + 1]] : 0,
@@ -252,7 +268,15 @@ export function compileNetwork(input: RunInput, options: CompileOptions = {}): C
   network.opLengthM = Float64Array.from(builder.opLengths);
   network.opImpedance = byOp(network.segmentImpedance);
   network.opKirchhoffPerSqrtHz = byOp(network.segmentKirchhoffPerSqrtHz);
-  network.opLiningNpPerM = byOp(network.segmentLiningNpPerM);
+  const bandsByOp = (perSegment: number[][]): Float64Array => {
+    const out = new Float64Array((builder.ops.length / 2) * BAND_COUNT);
+    for (let position = 0; position < builder.ops.length / 2; position++) {
+      if (builder.ops[2 * position] === OP_SEGMENT) out.set(perSegment[builder.ops[2 * position + 1]], position * BAND_COUNT);
+    }
+    return out;
+  };
+  network.opBandNpPerM = bandsByOp(builder.bandNp);
+  network.opBandSlopes = bandsByOp(builder.bandSlopes);
   network.opSegmentRunEnd = segmentRunEnds(builder.ops);
   network.mainLengthM = input.segments.reduce((sum, segment) => sum + segment.lengthM, 0);
   return network;

@@ -10,6 +10,7 @@
 //   D(f) = p (1 - Rs) + Zc (1 + Rs) U
 // vanishes exactly at the natural frequencies of the whole network (complex f, time convention exp(+j omega t)).
 import { openEndReflectionInto } from '../terminations';
+import { BandCurveWeights } from './band-curve';
 import { OP_MOUTH, OP_SEGMENT, OP_SHUNT, OP_TERMINATION, type CompiledNetwork } from './compile';
 import { propagateSegments, propagateSegmentsWithDerivative, type WaveFactors } from './propagate-segments';
 
@@ -105,7 +106,11 @@ export class NetworkEvaluator {
 
   // Per-frequency quantities shared by all segments: k0 = 2 pi f / c, the boundary-layer factor
   // (1 - j) sqrt(f) and its derivative (1 - j) / (2 sqrt(f)).
-  private readonly wave: WaveFactors = { freeRe: 0, freeIm: 0, layerRe: 0, layerIm: 0, layerSlopeRe: 0, layerSlopeIm: 0 };
+  private readonly bandWeights = new BandCurveWeights();
+  private readonly wave: WaveFactors = {
+    freeRe: 0, freeIm: 0, layerRe: 0, layerIm: 0, layerSlopeRe: 0, layerSlopeIm: 0,
+    band: 0, weights: this.bandWeights.value, weightSlopes: this.bandWeights.slope,
+  };
 
   private prepareFrequency(frequencyRe: number, frequencyIm: number): void {
     const wavenumberPerHz = (2 * Math.PI) / this.network.speedOfSoundMps;
@@ -123,6 +128,8 @@ export class NetworkEvaluator {
     const halfInvIm = -sqrtIm / sqrtNorm;
     wave.layerSlopeRe = halfInvRe + halfInvIm;
     wave.layerSlopeIm = halfInvIm - halfInvRe;
+    this.bandWeights.prepare(frequencyRe, frequencyIm);
+    wave.band = this.bandWeights.band;
   }
 
   private pushTermination(index: number, top: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): void {
@@ -190,6 +197,34 @@ export class NetworkEvaluator {
   /** Reads a state component at a slot offset returned by run(). */
   state(slot: number, component: number): number {
     return this.stack[slot + component];
+  }
+
+  /** After startReflections(): the reflection looking into the run from its start, and the start end's own. */
+  inputReflectionRe = 0;
+  inputReflectionIm = 0;
+  startReflectionRe = 0;
+  startReflectionIm = 0;
+
+  /**
+   * At a real frequency: the reflection coefficient looking from the start plane into the run,
+   * Gamma_in = (p - Zc U) / (p + Zc U) (every reflection downstream folded in; a ratio, so the
+   * evaluator's scaling of the state cancels), and the start termination's reflection Rs.
+   */
+  startReflections(frequencyHz: number): void {
+    const network = this.network;
+    const slot = this.run(0, network.program.length, frequencyHz, 0, false);
+    const stack = this.stack;
+    const impedance = network.terminations[network.startTermination].characteristicImpedance;
+    const pRe = stack[slot], pIm = stack[slot + 1];
+    const zuRe = impedance * stack[slot + 2], zuIm = impedance * stack[slot + 3];
+    const numRe = pRe - zuRe, numIm = pIm - zuIm;
+    const denRe = pRe + zuRe, denIm = pIm + zuIm;
+    const norm = denRe * denRe + denIm * denIm;
+    this.inputReflectionRe = (numRe * denRe + numIm * denIm) / norm;
+    this.inputReflectionIm = (numIm * denRe - numRe * denIm) / norm;
+    this.terminationAt(network.startTermination, frequencyHz, 0, false);
+    this.startReflectionRe = this.reflection[0];
+    this.startReflectionIm = this.reflection[1];
   }
 
   /** Evaluates D(f) and dD/df at complex frequency into valueRe/valueIm and derivativeRe/derivativeIm. */

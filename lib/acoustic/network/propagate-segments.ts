@@ -1,12 +1,18 @@
 // Inner loops of the transfer-matrix chain: carry the state inward through a run of consecutive
 // segment ops, holding it in locals, with hand-written complex arithmetic and no allocation.
+import { BAND_COUNT } from './band-curve';
 import type { CompiledNetwork } from './compile';
 import { SMALL_GROWTH } from './complex-trig';
 
 // Read once: under module loaders that turn imports into getters, each read of an import is a call.
 const smallGrowth = SMALL_GROWTH;
+const bandCount = BAND_COUNT;
 
-/** Per-frequency factors shared by all segments: k0 = 2 pi f / c, (1 - j) sqrt(f) and its derivative (1 - j) / (2 sqrt(f)). */
+/**
+ * Per-frequency factors shared by all segments: k0 = 2 pi f / c, (1 - j) sqrt(f) and its derivative
+ * (1 - j) / (2 sqrt(f)); and the weights of the band curves of wall and lining attenuation (band-curve.ts):
+ * the piece's first band and its value and d/df weights as re/im pairs.
+ */
 export interface WaveFactors {
   freeRe: number;
   freeIm: number;
@@ -14,6 +20,9 @@ export interface WaveFactors {
   layerIm: number;
   layerSlopeRe: number;
   layerSlopeIm: number;
+  band: number;
+  weights: Float64Array;
+  weightSlopes: Float64Array;
 }
 
 /** Carries the top state inward through consecutive segment ops, in locals; returns the next op. */
@@ -22,8 +31,11 @@ export function propagateSegments(network: CompiledNetwork, stack: Float64Array,
   const lengths = network.opLengthM;
   const impedances = network.opImpedance;
   const kirchhoff = network.opKirchhoffPerSqrtHz;
-  const lining = network.opLiningNpPerM;
+  const bandNp = network.opBandNpPerM;
+  const bandSlopes = network.opBandSlopes;
   const freeRe = wave.freeRe, freeIm = wave.freeIm, layerRe = wave.layerRe, layerIm = wave.layerIm;
+  const band = wave.band, weights = wave.weights;
+  const w0 = weights[0], w1 = weights[1], w2 = weights[2], w3 = weights[3], w4 = weights[4], w5 = weights[5], w6 = weights[6], w7 = weights[7];
   let pRe = stack[top], pIm = stack[top + 1], uRe = stack[top + 2], uIm = stack[top + 3];
   const runEnd = Math.min(opEnd, network.opSegmentRunEnd[opStart >> 1]);
   let op = opStart;
@@ -32,8 +44,13 @@ export function propagateSegments(network: CompiledNetwork, stack: Float64Array,
     const lengthM = lengths[segment];
     const impedance = impedances[segment];
     const loss = kirchhoff[segment];
-    const phase = (freeRe + loss * layerRe) * lengthM;
-    const growth = (freeIm + loss * layerIm - lining[segment]) * lengthM;
+    // walls and lining: k -= j alpha(f), alpha on the segment's band curve
+    const base = segment * bandCount + band;
+    const y0 = bandNp[base], m0 = bandSlopes[base], y1 = bandNp[base + 1], m1 = bandSlopes[base + 1];
+    const alphaRe = y0 * w0 + m0 * w2 + y1 * w4 + m1 * w6;
+    const alphaIm = y0 * w1 + m0 * w3 + y1 * w5 + m1 * w7;
+    const phase = (freeRe + loss * layerRe + alphaIm) * lengthM;
+    const growth = (freeIm + loss * layerIm - alphaRe) * lengthM;
     const cosPhase = Math.cos(phase);
     const sinPhase = Math.sin(phase);
     let coshGrowth: number;
@@ -86,10 +103,14 @@ top: number,
   const lengths = network.opLengthM;
   const impedances = network.opImpedance;
   const kirchhoff = network.opKirchhoffPerSqrtHz;
-  const lining = network.opLiningNpPerM;
+  const bandNp = network.opBandNpPerM;
+  const bandSlopes = network.opBandSlopes;
   const wavenumberPerHz = (2 * Math.PI) / network.speedOfSoundMps;
   const freeRe = wave.freeRe, freeIm = wave.freeIm, layerRe = wave.layerRe, layerIm = wave.layerIm;
   const layerSlopeRe = wave.layerSlopeRe, layerSlopeIm = wave.layerSlopeIm;
+  const band = wave.band, weights = wave.weights, slopes = wave.weightSlopes;
+  const w0 = weights[0], w1 = weights[1], w2 = weights[2], w3 = weights[3], w4 = weights[4], w5 = weights[5], w6 = weights[6], w7 = weights[7];
+  const d0 = slopes[0], d1 = slopes[1], d2 = slopes[2], d3 = slopes[3], d4 = slopes[4], d5 = slopes[5], d6 = slopes[6], d7 = slopes[7];
   let pRe = stack[top], pIm = stack[top + 1], uRe = stack[top + 2], uIm = stack[top + 3];
   let dpRe = stack[top + 4], dpIm = stack[top + 5], duRe = stack[top + 6], duIm = stack[top + 7];
   const runEnd = Math.min(opEnd, network.opSegmentRunEnd[opStart >> 1]);
@@ -99,8 +120,13 @@ top: number,
     const lengthM = lengths[segment];
     const impedance = impedances[segment];
     const loss = kirchhoff[segment];
-    const phase = (freeRe + loss * layerRe) * lengthM;
-    const growth = (freeIm + loss * layerIm - lining[segment]) * lengthM;
+    // walls and lining: k -= j alpha(f), alpha on the segment's band curve
+    const base = segment * bandCount + band;
+    const y0 = bandNp[base], m0 = bandSlopes[base], y1 = bandNp[base + 1], m1 = bandSlopes[base + 1];
+    const alphaRe = y0 * w0 + m0 * w2 + y1 * w4 + m1 * w6;
+    const alphaIm = y0 * w1 + m0 * w3 + y1 * w5 + m1 * w7;
+    const phase = (freeRe + loss * layerRe + alphaIm) * lengthM;
+    const growth = (freeIm + loss * layerIm - alphaRe) * lengthM;
     const cosPhase = Math.cos(phase);
     const sinPhase = Math.sin(phase);
     let coshGrowth: number;
@@ -123,9 +149,11 @@ top: number,
     const upperIm = impedance * sinRe;
     const lowerRe = -sinIm / impedance;
     const lowerIm = sinRe / impedance;
-    // d(kL)/df
-    const slopeRe = (wavenumberPerHz + loss * layerSlopeRe) * lengthM;
-    const slopeIm = loss * layerSlopeIm * lengthM;
+    // d(kL)/df, with d(-j alpha)/df = dalpha_im - j dalpha_re
+    const alphaSlopeRe = y0 * d0 + m0 * d2 + y1 * d4 + m1 * d6;
+    const alphaSlopeIm = y0 * d1 + m0 * d3 + y1 * d5 + m1 * d7;
+    const slopeRe = (wavenumberPerHz + loss * layerSlopeRe + alphaSlopeIm) * lengthM;
+    const slopeIm = (loss * layerSlopeIm - alphaSlopeRe) * lengthM;
     const dCosRe = -(sinRe * slopeRe - sinIm * slopeIm);
     const dCosIm = -(sinRe * slopeIm + sinIm * slopeRe);
     const dSinRe = cosRe * slopeRe - cosIm * slopeIm;

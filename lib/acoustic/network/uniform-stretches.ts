@@ -1,4 +1,4 @@
-// Uniform stretches: consecutive segments of one section and lining with no tee between them carry a
+// Uniform stretches: consecutive segments of one section, wall and lining with no tee between them carry a
 // plane wave exactly as one segment of their summed length (the transfer matrices of a uniform duct
 // compose by adding lengths, Munjal, Acoustics of Ducts and Mufflers, ch. 2), so the chain runs once per stretch.
 import type { CompiledBranch } from './compile';
@@ -8,7 +8,8 @@ export interface SegmentConstants {
   lengths: number[];
   impedances: number[];
   kirchhoff: number[];
-  liningNp: number[];
+  /** Band attenuation of each segment (walls and lining). */
+  bandNp: number[][];
 }
 
 /** Consecutive main-path segments of one section and lining with no tee between them. */
@@ -24,7 +25,7 @@ export function sameUniformDuct(constants: SegmentConstants, first: number, seco
   return (
     constants.impedances[first] === constants.impedances[second] &&
     constants.kirchhoff[first] === constants.kirchhoff[second] &&
-    constants.liningNp[first] === constants.liningNp[second]
+    constants.bandNp[first].every((value, band) => value === constants.bandNp[second][band])
   );
 }
 

@@ -10,6 +10,7 @@
 // The envelope samples |p(x)| itself, with the segment's complex k (losses included).
 import { terminationReflection } from '../terminations';
 import type { NetworkEvaluator } from '../network/evaluator';
+import { BAND_COUNT, BandCurveWeights, bandCurveValue } from '../network/band-curve';
 import { complexCosSin } from '../network/complex-trig';
 import type { PressureEnvelopePoint } from '../types';
 import { EnvelopeSampler } from './pressure-envelope';
@@ -44,6 +45,7 @@ function pushExtrema(list: number[], firstX: number, period: number, lengthM: nu
 }
 
 const trig = new Float64Array(4);
+const bandWeights = new BandCurveWeights();
 
 export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, sampler?: EnvelopeSampler): ModeShape {
   const network = evaluator.network;
@@ -62,6 +64,7 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, samp
   const stretches = network.mainStretches;
   sampler?.reset(wavelengthM);
   const rootHz = Math.sqrt(frequencyHz);
+  bandWeights.prepare(frequencyHz, 0);
   let offsetM = 0;
   for (let position = 0; position < stretches.length; position++) {
     const stretch = stretches[position];
@@ -70,7 +73,7 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, samp
     const impedance = network.segmentImpedance[segment];
     const loss = network.segmentKirchhoffPerSqrtHz[segment] * rootHz;
     const wavenumberRe = wavenumberPerHz * frequencyHz + loss;
-    const wavenumberIm = -loss - network.segmentLiningNpPerM[segment];
+    const wavenumberIm = -loss - bandCurveValue(network.segmentBandNpPerM, network.segmentBandSlopes, segment * BAND_COUNT, bandWeights);
     // b = -j Zc U0
     const bRe = impedance * uIm;
     const bIm = -impedance * uRe;

@@ -5,7 +5,8 @@ import { airProperties } from '../air';
 import { DB_PER_NEPER, DEFAULT_TEMPERATURE_C, OCTAVE_BANDS_HZ } from '../constants';
 import { endReflectionLoss } from '../end-reflection-loss';
 import { inputError, requireFinite } from '../input-error';
-import { sabineLinedDuctDbPerM } from '../lining-attenuation';
+import { bandCurveAt, bandCurveSlopes } from '../network/band-curve';
+import { segmentAttenuation } from '../walls/segment-attenuation';
 import { ncCriterionCurveDb } from '../ratings/nc-criterion';
 import { equivalentRadiusM, sectionArea, sectionPerimeter } from '../section';
 import type { Mounting, RunInput } from '../types';
@@ -29,16 +30,25 @@ export interface OutletLevelBand {
   criterionDb: number;
 }
 
-/** Attenuation along the main path per band, dB: lining (Sabine) plus wall losses (Kirchhoff), segment by segment. */
+/**
+ * Attenuation along the main path per band, dB, segment by segment: walls and lining as the chain
+ * carries them (walls/segment-attenuation.ts, each segment capped by flanking) plus the air's boundary
+ * layer (Kirchhoff).
+ */
 export function pathAttenuationDb(run: RunInput, bandsHz: readonly number[] = OCTAVE_BANDS_HZ): number[] {
   const air = airProperties(run.temperatureC ?? DEFAULT_TEMPERATURE_C);
+  const wallLosses = run.wallLosses !== false;
+  const curves = run.segments.map((segment) => {
+    const npPerM = segmentAttenuation(segment, run.walls, wallLosses).npPerM;
+    return { npPerM, slopes: bandCurveSlopes(npPerM) };
+  });
   return bandsHz.map((hz) =>
-    run.segments.reduce((sum, segment) => {
+    run.segments.reduce((sum, segment, index) => {
       const perimeterM = sectionPerimeter(segment.section);
       const areaM2 = sectionArea(segment.section);
-      const liningDb = segment.lining ? sabineLinedDuctDbPerM(segment.lining.absorption, perimeterM, areaM2) : 0;
-      const wallDb = run.wallLosses === false ? 0 : kirchhoffAttenuationNpPerM(hz, perimeterM, areaM2, air) * DB_PER_NEPER;
-      return sum + (liningDb + wallDb) * segment.lengthM;
+      const wallsDbPerM = bandCurveAt(curves[index].npPerM, curves[index].slopes, hz) * DB_PER_NEPER;
+      const airDbPerM = wallLosses ? kirchhoffAttenuationNpPerM(hz, perimeterM, areaM2, air) * DB_PER_NEPER : 0;
+      return sum + (wallsDbPerM + airDbPerM) * segment.lengthM;
     }, 0),
   );
 }

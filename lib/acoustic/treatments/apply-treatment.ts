@@ -25,7 +25,7 @@ export function applyTreatment(run: RunInput, treatment: Treatment): RunInput {
       const segment = segments[index];
       const lining = {
         thicknessM: requireAbove(treatment.thicknessM, 0, 'treatment.thicknessM'),
-        absorption: requireBetween(treatment.absorption, 0, 1, 'treatment.absorption'),
+        ...(treatment.absorption === undefined ? {} : { absorption: requireBetween(treatment.absorption, 0, 1, 'treatment.absorption') }),
       };
       const linedM = treatment.lengthM === undefined ? segment.lengthM : requireBetween(treatment.lengthM, 0, segment.lengthM, 'treatment.lengthM');
       if (linedM >= segment.lengthM || linedM === 0) {

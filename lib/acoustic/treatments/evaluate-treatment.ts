@@ -5,17 +5,16 @@ import { DEFAULT_TEMPERATURE_C } from '../constants';
 import { equivalentRadiusM } from '../section';
 import type { RiskFlag, RiskInput } from '../risk/risk-types';
 import { applyTreatment, longestSegment } from './apply-treatment';
+import { treatmentEffect } from './treatment-effect';
 import { measureFlag } from './measure-flag';
 import { quarterWaveLengthM } from './quarter-wave';
 import { raisedFlags } from './raised-flags';
-import { searchRetune } from './retune-search';
+import { DEFAULT_SITE_TOLERANCE_M, searchRetune } from './retune-search';
 import type { Treatment, TreatmentResult } from './treatment-types';
 import type { Termination } from '../types';
 
 /** Default resonator bore: half the host segment's equivalent diameter (product rule). */
 const RESONATOR_BORE_FRACTION = 0.5;
-/** A retune shorter than this (half a millimetre) is no change a builder can make. */
-const MIN_RETUNE_M = 0.0005;
 
 /** Main-path segment whose far end lies nearest a pressure antinode of the resonance at the target. */
 function segmentNearestAntinode(input: RiskInput, flag: RiskFlag): number {
@@ -41,9 +40,9 @@ function resolve(input: RiskInput, flag: RiskFlag, treatment: Treatment, notes: 
   if (treatment.kind === 'retune-length' && treatment.deltaLengthM === undefined) {
     const segmentIndex = treatment.segmentIndex ?? longestSegment(input.run);
     const search = searchRetune(input, flag, segmentIndex);
-    notes.push(`length search: ${search.analyses} re-runs of the engine on segment ${segmentIndex + 1}`);
-    if (search.deltaLengthM === null || Math.abs(search.deltaLengthM) < MIN_RETUNE_M) {
-      notes.push('no length change of that segment (10 % to about 10x the first step) clears the flag');
+    notes.push(`length search: ${search.analyses} re-runs of the engine on segment ${segmentIndex + 1}, changes of at least ${(DEFAULT_SITE_TOLERANCE_M * 1000).toFixed(0)} mm (site tolerance)`);
+    if (search.deltaLengthM === null) {
+      notes.push('no change of that segment’s length a builder can hold moves the resonances further from the tones');
       return null;
     }
     return { kind: 'retune-length', segmentIndex, deltaLengthM: search.deltaLengthM };
@@ -76,7 +75,7 @@ function terminationWords(termination: Termination): string {
 export function describeTreatment(treatment: Treatment, names: TreatmentNames = PLAIN_NAMES): string {
   switch (treatment.kind) {
     case 'line-segment':
-      return `Line ${names.segment(treatment.segmentIndex)}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm, absorption ${treatment.absorption})`;
+      return `Line ${names.segment(treatment.segmentIndex)}${treatment.lengthM === undefined ? '' : ` over ${treatment.lengthM.toFixed(2)} m`} (${(treatment.thicknessM * 1000).toFixed(0)} mm ${treatment.absorption === undefined ? 'fibrous liner' : `liner, absorption ${treatment.absorption}`})`;
     case 'change-termination':
       return `Change ${names.end(treatment.end)} to ${terminationWords(treatment.termination)}`;
     case 'retune-length':
@@ -89,11 +88,12 @@ export function describeTreatment(treatment: Treatment, names: TreatmentNames = 
 export function evaluateTreatment(input: RiskInput, flag: RiskFlag, treatment: Treatment): TreatmentResult {
   const notes: string[] = [];
   const resolved = resolve(input, flag, treatment, notes);
-  if (resolved === null) return { treatment, description: describeTreatment(treatment), before: flag.quantity, after: flag.quantity, clears: false, raises: [], notes };
+  if (resolved === null) return { treatment, description: describeTreatment(treatment), before: flag.quantity, after: flag.quantity, clears: false, raises: [], effect: {}, notes };
   const treatedRun = applyTreatment(input.run, resolved);
   // One engine run of the treated model serves both the flag's measurement and the flags it raises.
   const treatedAnalysis = analyzeRun(treatedRun);
   const after = measureFlag(input, flag, treatedRun, treatedAnalysis);
   const raises = raisedFlags(input, treatedRun, treatedAnalysis).map((raised) => `${raised.severity}: ${raised.reason}`);
-  return { treatment: resolved, description: describeTreatment(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, raises, notes };
+  const effect = treatmentEffect(input, flag, resolved, treatedRun, treatedAnalysis);
+  return { treatment: resolved, description: describeTreatment(resolved), before: flag.quantity, after: after.quantity, clears: after.clears, raises, effect, notes };
 }

@@ -15,6 +15,7 @@ export type CommandName =
   | 'add-tee'
   | 'set-section'
   | 'set-lining'
+  | 'set-wall'
   | 'set-termination'
   | 'set-run-properties'
   | 'choose-end'

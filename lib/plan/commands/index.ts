@@ -9,7 +9,7 @@ import { deleteSelection } from './delete-selection';
 import { drawSegment } from './draw-segment';
 import { moveNode } from './move-node';
 import { chooseEnd, renumberRunCommand, setRunProperties, setTermination } from './run-properties';
-import { setInserts, setLengthOverride, setLining, setSection } from './segment-properties';
+import { setInserts, setLengthOverride, setLining, setSection, setWall } from './segment-properties';
 import { splitSegment } from './split-segment';
 import { addRoom, deleteRoom, moveRoom, updateRoom } from './rooms';
 import { addTreatment, removeTreatment } from './treatments';
@@ -22,6 +22,7 @@ export const COMMANDS = {
   'add-tee': addTee,
   'set-section': setSection,
   'set-lining': setLining,
+  'set-wall': setWall,
   'set-termination': setTermination,
   'set-run-properties': setRunProperties,
   'choose-end': chooseEnd,

@@ -1,8 +1,8 @@
 // Run-level edits: a termination at an end, name, temperature and fan, and the chosen end.
-import { findRun, type Fan, type PlanDocument, type PlanRun, type Termination } from '../document';
+import { findRun, type Fan, type PlanDocument, type PlanRun, type Termination, type Wall } from '../document';
 import type { EditorState } from '../editor-state';
 import { PlanError } from '../errors';
-import { fanSchema, runNameSchema, temperatureCSchema, terminationSchema } from '../schema';
+import { fanSchema, runNameSchema, temperatureCSchema, terminationSchema, wallSchema } from '../schema';
 import { nodeDegree, runOfNode } from '../topology';
 import { checked, defineCommand } from './define';
 import { soundPowerBandsSchema } from '../rooms/room-schema';
@@ -40,17 +40,20 @@ export interface SetRunPropertiesArgs {
   readonly name?: string;
   readonly temperatureC?: number;
   readonly fan?: Fan | null;
+  /** The walls of the run's segments; null: sheet metal. */
+  readonly walls?: Wall | null;
   /** The fan's sound power into the run, 8 octave bands, dB re 1 pW; null clears it. */
   readonly fanSoundPowerDb?: readonly number[] | null;
 }
 
-export const setRunProperties = defineCommand('set-run-properties', 'Rename the run, or set its air temperature, fan or fan sound power.', (doc, state, args: SetRunPropertiesArgs) => {
+export const setRunProperties = defineCommand('set-run-properties', 'Rename the run, or set its air temperature, walls, fan or fan sound power.', (doc, state, args: SetRunPropertiesArgs) => {
   const run = targetRun(doc, state, args.runId);
   const changed: PlanRun = {
     ...run,
     ...(args.name !== undefined ? { name: checked(runNameSchema, args.name, 'Name') } : {}),
     ...(args.temperatureC !== undefined ? { temperatureC: checked(temperatureCSchema, args.temperatureC, 'Air temperature') } : {}),
     ...(args.fan !== undefined ? { fan: args.fan === null ? null : checked(fanSchema, args.fan, 'Fan') } : {}),
+    ...(args.walls !== undefined ? { walls: args.walls === null ? null : checked(wallSchema, args.walls, 'Walls') } : {}),
     ...(args.fanSoundPowerDb !== undefined ? { fanSoundPowerDb: args.fanSoundPowerDb === null ? null : checked(soundPowerBandsSchema, args.fanSoundPowerDb, "Fan's sound power") } : {}),
   };
   return { doc: replaceRun(doc, changed), state };

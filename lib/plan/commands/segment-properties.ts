@@ -1,9 +1,9 @@
 // Section, lining and length override of the given (or selected) segments.
 import { z } from 'zod';
-import type { Lining, PathInsert, PlanDocument, PlanSegment, Section } from '../document';
+import type { Lining, PathInsert, PlanDocument, PlanSegment, Section, Wall } from '../document';
 import { pathInsertSchema } from '../noise/insert-schema';
 import type { EditorState } from '../editor-state';
-import { lengthOverrideMSchema, liningSchema, sectionSchema } from '../schema';
+import { lengthOverrideMSchema, liningSchema, sectionSchema, wallSchema } from '../schema';
 import { checked, defineCommand, targetSegmentIds } from './define';
 
 function updateSegments(doc: PlanDocument, state: EditorState, segmentIds: readonly string[] | undefined, change: (segment: PlanSegment) => PlanSegment) {
@@ -30,6 +30,21 @@ export interface SetLiningArgs {
 export const setLining = defineCommand('set-lining', 'Line the selected segments, or remove their lining.', (doc, state, args: SetLiningArgs) => {
   const lining = args.lining === null ? null : checked(liningSchema, args.lining, 'Lining');
   return updateSegments(doc, state, args.segmentIds, (segment) => ({ ...segment, lining: lining && { ...lining } }));
+});
+
+export interface SetWallArgs {
+  readonly segmentIds?: readonly string[];
+  /** null: the run's walls. */
+  readonly wall: Wall | null;
+}
+
+export const setWall = defineCommand('set-wall', 'Give the selected segments walls of their own (rigid, sheet metal or measured), or the run\'s walls again.', (doc, state, args: SetWallArgs) => {
+  const wall = args.wall === null ? null : checked(wallSchema, args.wall, 'Walls');
+  return updateSegments(doc, state, args.segmentIds, (segment) => {
+    const { wall: _old, ...rest } = segment;
+    void _old;
+    return wall === null ? rest : { ...rest, wall };
+  });
 });
 
 export interface SetLengthOverrideArgs {

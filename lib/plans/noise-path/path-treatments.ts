@@ -11,8 +11,8 @@ import type { TreatmentOption } from '../treatment-options';
 import { listenerOfSubject, pathLevelFlags } from './room-path';
 import { roomNoise, type RoomNoise } from './room-noise';
 
-/** The liner offered: 50 mm fibrous liner (its absorption by band follows the thickness in the path; 0.7 is kept for the duct model). Product default. */
-const OFFERED_LINING = { thicknessM: 0.05, absorption: 0.7 };
+/** The liner offered: 50 mm fibrous liner, absorbing by band for its thickness in the path and in the duct model alike. Product default. */
+const OFFERED_LINING = { thicknessM: 0.05 };
 
 function levelAt(noise: RoomNoise, listenerId: string, band: number): number | null {
   return noise.listeners.find((listener) => listener.listenerId === listenerId)?.levelDb[band] ?? null;
@@ -51,6 +51,7 @@ export function pathTreatmentOptions(doc: PlanDocument, metresPerPixel: number, 
     after: { levelDb: levelAfter, criterionDb: after.criterionDb[band] },
     clears: !afterFlags.some((candidate) => candidate.subject === flag.subject),
     raises,
+    effect: { bandLossDb: OCTAVE_BANDS_HZ.map((_, index) => (levelAt(before, listenerId, index) ?? 0) - (levelAt(after, listenerId, index) ?? 0)) },
     notes: [`level at listener ${listener.name}, ${flag.targetHz} Hz: ${levelBefore.toFixed(1)} → ${levelAfter.toFixed(1)} dB`],
     planChange,
   };

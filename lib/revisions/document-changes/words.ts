@@ -19,7 +19,8 @@ export function terminationWords(termination: Termination | undefined): string {
 }
 
 export function liningWords(lining: Lining | null | undefined, units: UnitSystem): string {
-  return lining ? `${formatLength(lining.thicknessM, units, 'section')}, absorption ${lining.absorption.toFixed(2)}` : 'none';
+  if (!lining) return 'none';
+  return `${formatLength(lining.thicknessM, units, 'section')}, ${lining.absorption === undefined ? 'fibrous liner by band' : `absorption ${lining.absorption.toFixed(2)}`}`;
 }
 
 /** Octave-band levels 63 Hz to 8 kHz on one line: "63 Hz 85 · 125 Hz 83 · … dB". */

@@ -44,7 +44,7 @@ describe('withEnvelopesAsked', () => {
 
   it(`refuses envelopes of more than ${MAX_ENVELOPE_SAMPLES_PER_ANSWER} samples in one answer with a 422 saying to ask for fewer`, () => {
     const big = Array.from({ length: MAX_ENVELOPE_SAMPLES_PER_ANSWER / 2 + 1 }, (_, index) => ({ positionM: index, relative: 1 }));
-    const resonance = (order: number): Resonance => ({ order, frequencyHz: order, q: null, bandwidthHz: null, antinodesM: [], nodesM: [], dampingHz: 0, pressureEnvelope: big });
+    const resonance = (order: number): Resonance => ({ order, frequencyHz: order, q: null, bandwidthHz: null, antinodesM: [], nodesM: [], dampingHz: 0, broadband: false, pressureEnvelope: big });
     const analysis = { ...run(), resonances: [resonance(1), resonance(2)] } satisfies RunAnalysis;
     expect(withEnvelopesAsked(analysis, { kind: 'orders', orders: [2] }).resonances[1].pressureEnvelope).toHaveLength(big.length);
     let refused: unknown;

@@ -6,8 +6,8 @@ function run(runId: string, lengthM: number, hz: number[]): RunResult {
   return {
     runId, name: runId, problem: null, path: [], fanTonesHz: [], nearFanTone: {},
     analysis: {
-      speedOfSoundMps: 343, lengthM, cutoffHz: 800, endCorrectionM: { start: 0, end: 0 }, reflections: [], echoes: [], warnings: [], minHz: 20, maxHz: 800,
-      resonances: hz.map((frequencyHz, index) => ({ order: index + 1, frequencyHz, q: null, bandwidthHz: null, antinodesM: [], nodesM: [], dampingHz: 0 })),
+      speedOfSoundMps: 343, lengthM, cutoffHz: 800, endCorrectionM: { start: 0, end: 0 }, reflections: [], echoes: [], warnings: [], assumptions: [], broadbandRangesHz: [], minHz: 20, maxHz: 800,
+      resonances: hz.map((frequencyHz, index) => ({ order: index + 1, frequencyHz, q: null, bandwidthHz: null, antinodesM: [], nodesM: [], dampingHz: 0, broadband: false })),
     },
   };
 }

@@ -6,7 +6,7 @@ const c = speedOfSound(20);
 
 describe('echo train (method of characteristics)', () => {
   it('closed–closed: arrivals every 2L/c, all +1 (a rigid end does not invert)', () => {
-    const run = analyzeRun({ segments: [{ lengthM: 3, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxEchoes: 5 });
+    const run = analyzeRun({ walls: { kind: 'rigid' }, segments: [{ lengthM: 3, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxEchoes: 5 });
     expect(run.echoes).toHaveLength(5);
     run.echoes.forEach((echo, index) => {
       expectClose(echo.delayS, ((index + 1) * 2 * 3) / c, 1e-12, `delay ${index + 1}`);
@@ -18,7 +18,7 @@ describe('echo train (method of characteristics)', () => {
 
   it('closed–open: the open end inverts, and reflects 2 delta / c late (delta = 0.6133 a, Levine & Schwinger 1948)', () => {
     const radiusM = 0.1;
-    const run = analyzeRun({ segments: [{ lengthM: 2, section: { shape: 'round', diameterM: 2 * radiusM } }], start: { kind: 'closed' }, end: { kind: 'open', flange: 'unflanged' }, maxEchoes: 4 });
+    const run = analyzeRun({ walls: { kind: 'rigid' }, segments: [{ lengthM: 2, section: { shape: 'round', diameterM: 2 * radiusM } }], start: { kind: 'closed' }, end: { kind: 'open', flange: 'unflanged' }, maxEchoes: 4 });
     run.echoes.forEach((echo, index) => {
       expectClose(echo.delayS, ((index + 1) * 2 * (2 + 0.6133 * radiusM)) / c, 1e-12, `delay ${index + 1}`);
       expectClose(echo.amplitude, (-1) ** (index + 1), 1e-12, `sign ${index + 1}`);
@@ -26,7 +26,7 @@ describe('echo train (method of characteristics)', () => {
   });
 
   it('a step and a lined end: delays equal path length / c; amplitudes follow (S1 - S2)/(S1 + S2) and sqrt(1 - alpha)', () => {
-    const run = analyzeRun({
+    const run = analyzeRun({ walls: { kind: 'rigid' },
       segments: [
         { lengthM: 1.5, section: { shape: 'rect', widthM: 0.1, heightM: 0.1 } },
         { lengthM: 1, section: { shape: 'rect', widthM: 0.2, heightM: 0.2 } },
@@ -47,7 +47,7 @@ describe('echo train (method of characteristics)', () => {
   });
 
   it('a tee: the branch end returns through the junction, named by the branch', () => {
-    const run = analyzeRun({
+    const run = analyzeRun({ walls: { kind: 'rigid' },
       segments: [
         { lengthM: 2, section: { shape: 'round', diameterM: 0.2 }, branches: [{ segments: [{ lengthM: 0.5, section: { shape: 'round', diameterM: 0.2 } }], end: { kind: 'closed' } }] },
         { lengthM: 3, section: { shape: 'round', diameterM: 0.2 } },
@@ -64,7 +64,7 @@ describe('echo train (method of characteristics)', () => {
   });
 
   it('stops at the decay threshold', () => {
-    const run = analyzeRun({ segments: [{ lengthM: 1, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'lined', absorption: 0.75 }, end: { kind: 'closed' }, echoThreshold: 0.01 });
+    const run = analyzeRun({ walls: { kind: 'rigid' }, segments: [{ lengthM: 1, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'lined', absorption: 0.75 }, end: { kind: 'closed' }, echoThreshold: 0.01 });
     // Each round trip multiplies by 0.5: 1, 0.5, 0.25 ... down to 1/128 > 0.01 > 1/256
     expect(run.echoes.map((echo) => echo.amplitude)).toEqual([1, 0.5, 0.25, 0.125, 0.0625, 0.03125, 0.015625]);
   });

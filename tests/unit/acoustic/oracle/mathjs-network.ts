@@ -60,29 +60,45 @@ export function oracleReflection(termination: Termination, frequencyHz: Complex,
   return multiply(multiply(magnitude, exp(phase)), -1) as Complex;
 }
 
-function wavenumber(segment: Segment, frequencyHz: Complex, air: OracleAir, wallLosses: boolean): Complex {
+function wavenumber(segment: Segment, frequencyHz: Complex, air: OracleAir, losses: OracleLosses): Complex {
   const free = multiply(frequencyHz, (2 * Math.PI) / air.speedMps) as Complex;
   const S = area(segment.section);
   const P = perimeter(segment.section);
   let k = free;
-  if (wallLosses) {
+  if (losses.kirchhoff) {
     // Kirchhoff: alpha = (P/2S)(1/c) sqrt(omega nu / 2)[1 + 0.4/sqrt(0.71)], k = omega/c + alpha (1 - j)
     const nu = air.viscosityPaS / air.densityKgM3;
     const omega = multiply(frequencyHz, 2 * Math.PI) as Complex;
     const alpha = multiply(sqrt(multiply(omega, nu / 2) as Complex) as Complex, (P / (2 * S)) * (1 / air.speedMps) * (1 + 0.4 / Math.sqrt(0.71)));
     k = add(k, multiply(alpha, c(1, -1))) as Complex;
   }
-  if (segment.lining) {
-    // Sabine 1.05 alpha^1.4 P/S dB/m, as nepers
-    const nepers = (1.05 * segment.lining.absorption ** 1.4 * (P / S)) / (20 / Math.LN10);
-    k = subtract(k, c(0, nepers)) as Complex;
-  }
+  // Walls (flat measured figures) plus Sabine's 1.05 alpha^1.4 P/S dB/m for the lining, together at most
+  // 40 dB over the segment (the flanking cap), as nepers: k - j alpha
+  const liningDbPerM = segment.lining ? 1.05 * (segment.lining.absorption ?? 0) ** 1.4 * (P / S) : 0;
+  const totalDbPerM = Math.min(losses.wallDbPerM + liningDbPerM, 40 / segment.lengthM);
+  k = subtract(k, c(0, totalDbPerM / (20 / Math.LN10))) as Complex;
   return k;
 }
 
+/** What the oracle models of a run's losses: Kirchhoff's boundary layer and walls measured flat across the bands. */
+export interface OracleLosses {
+  kirchhoff: boolean;
+  wallDbPerM: number;
+}
+
+export function oracleLosses(run: RunInput): OracleLosses {
+  const kirchhoff = run.wallLosses ?? true;
+  const walls = run.walls;
+  if (!kirchhoff || walls?.kind === 'rigid') return { kirchhoff, wallDbPerM: 0 };
+  if (walls?.kind !== 'measured' || walls.attenuationDbPerM.some((value) => value !== walls.attenuationDbPerM[0])) {
+    throw new Error('the oracle models rigid walls and walls measured flat across the bands only');
+  }
+  return { kirchhoff, wallDbPerM: walls.attenuationDbPerM[0] };
+}
+
 /** Inverse plane-wave transfer matrix of a segment: [p, U] near = T [p, U] far. */
-function inverseMatrix(segment: Segment, frequencyHz: Complex, air: OracleAir, wallLosses: boolean): Matrix {
-  const kl = multiply(wavenumber(segment, frequencyHz, air, wallLosses), segment.lengthM) as Complex;
+function inverseMatrix(segment: Segment, frequencyHz: Complex, air: OracleAir, losses: OracleLosses): Matrix {
+  const kl = multiply(wavenumber(segment, frequencyHz, air, losses), segment.lengthM) as Complex;
   const zc = (air.densityKgM3 * air.speedMps) / area(segment.section);
   const cs = cos(kl);
   const sn = sin(kl);
@@ -94,7 +110,7 @@ function inverseMatrix(segment: Segment, frequencyHz: Complex, air: OracleAir, w
 }
 
 /** Admittance U/p looking into a chain from its near end (U into the chain). */
-export function chainAdmittance(segments: Segment[], end: Termination, frequencyHz: Complex, air: OracleAir, wallLosses: boolean): Complex {
+export function chainAdmittance(segments: Segment[], end: Termination, frequencyHz: Complex, air: OracleAir, losses: OracleLosses): Complex {
   const last = segments[segments.length - 1];
   const zcLast = (air.densityKgM3 * air.speedMps) / area(last.section);
   const reflection = oracleReflection(end, frequencyHz, radius(last.section), air.speedMps);
@@ -102,13 +118,13 @@ export function chainAdmittance(segments: Segment[], end: Termination, frequency
   let admittance = divide(subtract(c(1), reflection), multiply(add(c(1), reflection), zcLast)) as Complex;
   for (let index = segments.length - 1; index >= 0; index--) {
     for (const branch of segments[index].branches ?? []) {
-      const branchAdmittance = chainAdmittance(branch.segments, branch.end, frequencyHz, air, wallLosses);
+      const branchAdmittance = chainAdmittance(branch.segments, branch.end, frequencyHz, air, losses);
       // Mouth mass in series: Y' = Y / (1 + j omega M Y), M = rho t_i / S_b
       const mass = (air.densityKgM3 * mouthCorrection(branch.segments[0].section, segments[index].section)) / area(branch.segments[0].section);
       const jOmegaMass = multiply(frequencyHz, c(0, 2 * Math.PI * mass)) as Complex;
       admittance = add(admittance, divide(branchAdmittance, add(c(1), multiply(jOmegaMass, branchAdmittance)))) as Complex;
     }
-    const state = multiply(inverseMatrix(segments[index], frequencyHz, air, wallLosses), matrix([[c(1)], [admittance]])) as Matrix;
+    const state = multiply(inverseMatrix(segments[index], frequencyHz, air, losses), matrix([[c(1)], [admittance]])) as Matrix;
     admittance = divide(state.get([1, 0]) as Complex, state.get([0, 0]) as Complex) as Complex;
   }
   return admittance;
@@ -117,10 +133,10 @@ export function chainAdmittance(segments: Segment[], end: Termination, frequency
 /** 1 - Rs Gamma_in at the start end: zero at the natural frequencies (for a reflecting start). */
 export function oracleMismatch(run: RunInput, frequencyHz: Complex): Complex {
   const air = oracleAir(run.temperatureC ?? 20);
-  const wallLosses = run.wallLosses ?? true;
+  const losses = oracleLosses(run);
   const first = run.segments[0].section;
   const zc = (air.densityKgM3 * air.speedMps) / area(first);
-  const admittance = chainAdmittance(run.segments, run.end, frequencyHz, air, wallLosses);
+  const admittance = chainAdmittance(run.segments, run.end, frequencyHz, air, losses);
   const gamma = divide(subtract(c(1), multiply(admittance, zc)), add(c(1), multiply(admittance, zc))) as Complex;
   const startReflection = oracleReflection(run.start, frequencyHz, radius(first), air.speedMps);
   return subtract(c(1), multiply(startReflection, gamma)) as Complex;

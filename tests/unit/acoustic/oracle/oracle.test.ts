@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { complex, type Complex } from 'mathjs';
 import { analyzeRun, startAdmittanceSweep, type RunInput } from '@/lib/acoustic';
-import { chainAdmittance, oracleAir, oracleMismatch } from './mathjs-network';
+import { chainAdmittance, oracleAir, oracleLosses, oracleMismatch } from './mathjs-network';
 import { runArbitrary } from './random-run';
 import { expectClose } from '../tolerance';
 
@@ -13,7 +13,7 @@ describe('fast path against the mathjs oracle (independent transfer-matrix model
         const fast = startAdmittanceSweep(run, frequencies);
         const air = oracleAir(run.temperatureC ?? 20);
         frequencies.forEach((hz, index) => {
-          const slow = chainAdmittance(run.segments, run.end, complex(hz, 0), air, run.wallLosses ?? true) as Complex;
+          const slow = chainAdmittance(run.segments, run.end, complex(hz, 0), air, oracleLosses(run)) as Complex;
           const scale = Math.hypot(slow.re, slow.im) + 1e-30;
           expect(Math.hypot(fast[2 * index] - slow.re, fast[2 * index + 1] - slow.im) / scale).toBeLessThan(1e-7);
         });
@@ -62,7 +62,7 @@ describe('fast path against the mathjs oracle (independent transfer-matrix model
     // from the end (the run reversed, no branch at the reversed path's far end needed here) and merges them.
     const air = oracleAir(20);
     const zerosSeenFrom = (run: RunInput): number[] => {
-      const imaginaryAdmittance = (hz: number) => (chainAdmittance(run.segments, run.end, complex(hz, 0), air, false) as Complex).im;
+      const imaginaryAdmittance = (hz: number) => (chainAdmittance(run.segments, run.end, complex(hz, 0), air, { kirchhoff: false, wallDbPerM: 0 }) as Complex).im;
       const zeros: number[] = [];
       let previous = imaginaryAdmittance(20);
       for (let hz = 20.05; hz <= 300; hz += 0.05) {

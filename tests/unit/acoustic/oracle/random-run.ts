@@ -1,6 +1,6 @@
 // fast-check generators of valid runs, shared by the oracle and property tests.
 import fc from 'fast-check';
-import type { Branch, RunInput, Section, Segment, Termination } from '@/lib/acoustic';
+import type { Branch, RunInput, Section, Segment, Termination, Wall } from '@/lib/acoustic';
 
 export const sectionArbitrary: fc.Arbitrary<Section> = fc.oneof(
   fc.record({ shape: fc.constant('round' as const), diameterM: fc.double({ min: 0.05, max: 0.6, noNaN: true }) }),
@@ -36,7 +36,14 @@ const segmentArbitrary: fc.Arbitrary<Segment> = fc
   .tuple(plainSegment, fc.option(fc.array(branchArbitrary, { minLength: 1, maxLength: 2 }), { freq: 3 }))
   .map(([segment, branches]) => (branches ? { ...segment, branches } : segment));
 
+/** Rigid walls, or walls measured flat across the bands (the oracle models both). */
+export const wallArbitrary: fc.Arbitrary<Wall> = fc.oneof(
+  fc.constant({ kind: 'rigid' as const }),
+  fc.double({ min: 0, max: 3, noNaN: true }).map((dbPerM) => ({ kind: 'measured' as const, attenuationDbPerM: Array.from({ length: 8 }, () => dbPerM) })),
+);
+
 export const runArbitrary: fc.Arbitrary<RunInput> = fc.record({
+  walls: wallArbitrary,
   segments: fc.array(segmentArbitrary, { minLength: 1, maxLength: 5 }),
   start: terminationArbitrary,
   end: terminationArbitrary,

@@ -14,7 +14,7 @@ const unflanged: Termination = { kind: 'open', flange: 'unflanged' };
 const flanged: Termination = { kind: 'open', flange: 'flanged' };
 
 function pipe(start: Termination, end: Termination, wallLosses = false) {
-  return analyzeRun({ segments: [{ lengthM, section: { shape: 'round', diameterM: 2 * radiusM } }], start, end, maxHz: 600, wallLosses });
+  return analyzeRun({ segments: [{ lengthM, section: { shape: 'round', diameterM: 2 * radiusM } }], start, end, maxHz: 600, wallLosses, walls: { kind: 'rigid' } });
 }
 
 // End corrections as functions of ka, written out from the published fits so the analytic condition can
