@@ -87,7 +87,8 @@ function harmonicsOf(input: RiskInput): number[] {
 const toneName = (harmonic: number) => (harmonic === 1 ? 'blade-pass tone' : `blade-pass harmonic ${harmonic}`);
 
 function toneFlags(input: RiskInput, analysis: RunAnalysis, response: () => RunResponse): RiskFlag[] {
-  if (!input.fan) return [];
+  const fan = input.fan;
+  if (!fan) return [];
   const envelope = envelopeOf(input);
   const flags: RiskFlag[] = [];
   harmonicsOf(input).forEach((toneHz, index) => {
@@ -119,7 +120,7 @@ function toneFlags(input: RiskInput, analysis: RunAnalysis, response: () => RunR
       subject: `tone:h${harmonic}`,
       severity,
       reason:
-        `${describeResonance(resonance)} meets the ${formatHz(toneHz)} ${toneName(harmonic)}, which sweeps ${range} over the operating envelope ` +
+        `${describeResonance(resonance)} meets the ${toneName(harmonic)} (${formatHz(toneHz)} at ${Math.round(fan.rpm)} rpm), which sweeps ${range} over the operating envelope ` +
         `(${describeEnvelope(envelope)}): the run adds up to ${(measured.quantity.gainDb ?? 0).toFixed(1)} dB there over its smooth response.`,
       targetHz: toneHz,
       resonanceOrder: resonance.order,

@@ -69,7 +69,9 @@ export interface TreatmentNames {
 const PLAIN_NAMES: TreatmentNames = { segment: (index) => `segment ${index + 1}`, end: (end) => `the ${end} termination` };
 
 function terminationWords(termination: Termination): string {
-  return `${termination.kind}${termination.kind === 'open' ? ` (${termination.flange})` : ''}`;
+  if (termination.kind === 'open') return `open (${termination.flange})`;
+  if (termination.kind === 'lined') return `lined (absorption ${termination.absorption})`;
+  return termination.kind === 'anechoic' ? 'absorbing (no reflection)' : termination.kind;
 }
 
 export function describeTreatment(treatment: Treatment, names: TreatmentNames = PLAIN_NAMES): string {

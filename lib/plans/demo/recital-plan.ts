@@ -24,10 +24,11 @@ export function demoRecitalPlan(fan: Fan): PlanDocument {
       { id: 'recital-outlet-2', x: 970, y: 470 },
     ],
     segments: [
-      { id: 'riser', from: 'ahu', to: 'riser-foot', section: { shape: 'rect', widthM: 0.6, heightM: 0.4 } },
-      { id: 'corridor-main', from: 'riser-foot', to: 'drop-head', section: { shape: 'rect', widthM: 0.5, heightM: 0.3 } },
+      // round spiral ductwork: stiff walls that lose little, so the run rings (sheet-metal walls, the default)
+      { id: 'riser', from: 'ahu', to: 'riser-foot', section: { shape: 'round', diameterM: 0.56 } },
+      { id: 'corridor-main', from: 'riser-foot', to: 'drop-head', section: { shape: 'round', diameterM: 0.45 } },
       { id: 'recital-drop', from: 'drop-head', to: 'recital-outlet', section: { shape: 'round', diameterM: 0.315 } },
-      { id: 'corridor-on', from: 'drop-head', to: 'drop-head-2', section: { shape: 'rect', widthM: 0.4, heightM: 0.25 } },
+      { id: 'corridor-on', from: 'drop-head', to: 'drop-head-2', section: { shape: 'round', diameterM: 0.355 } },
       { id: 'recital-drop-2', from: 'drop-head-2', to: 'recital-outlet-2', section: { shape: 'round', diameterM: 0.315 } },
     ],
     runs: [{

@@ -3,9 +3,9 @@
 import type { PlanRun } from '@/lib/plan/document';
 import type { ChangeContext, DocumentChange } from './types';
 import { NONE } from './types';
-import { bandsWords, otherFields, same, terminationWords } from './words';
+import { bandsWords, otherFields, same, terminationWords, wallWords } from './words';
 
-const DESCRIBED: readonly (keyof PlanRun)[] = ['id', 'name', 'letter', 'startNodeId', 'endNodeId', 'temperatureC', 'fan', 'fanSoundPowerDb', 'terminations'];
+const DESCRIBED: readonly (keyof PlanRun)[] = ['id', 'name', 'letter', 'startNodeId', 'endNodeId', 'temperatureC', 'walls', 'fan', 'fanSoundPowerDb', 'terminations'];
 
 function runSubject(run: PlanRun, letter: string | undefined): string {
   return `Run ${letter ?? run.letter ?? '?'} (${run.name})`;
@@ -50,6 +50,7 @@ function keptRunChanges(context: ChangeContext, before: PlanRun, after: PlanRun)
   const letters = [context.before.labels.runs[before.id], context.after.labels.runs[after.id]];
   if (letters[0] !== letters[1]) lines.push({ area: 'run', subject, what: 'Letter', before: letters[0] ?? NONE, after: letters[1] ?? NONE });
   if (before.temperatureC !== after.temperatureC) lines.push({ area: 'run', subject, what: 'Air temperature', before: `${before.temperatureC} °C`, after: `${after.temperatureC} °C` });
+  if (!same(before.walls ?? null, after.walls ?? null)) lines.push({ area: 'run', subject, what: 'Walls', before: wallWords(before.walls, 'sheet metal'), after: wallWords(after.walls, 'sheet metal') });
   lines.push(...fanChanges(subject, before.fan, after.fan));
   if (!same(before.fanSoundPowerDb, after.fanSoundPowerDb)) {
     lines.push({ area: 'fan', subject, what: 'Fan sound power', before: bandsWords(before.fanSoundPowerDb, 'dB'), after: bandsWords(after.fanSoundPowerDb, 'dB') });

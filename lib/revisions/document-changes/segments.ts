@@ -5,9 +5,9 @@ import { nodePositions, type PlanSegment } from '@/lib/plan/document';
 import { formatLength } from '@/lib/plan/units';
 import type { ChangeContext, DocumentChange, PlanSide } from './types';
 import { NONE } from './types';
-import { liningWords, otherFields, same, sectionWords } from './words';
+import { liningWords, otherFields, same, sectionWords, wallWords } from './words';
 
-const DESCRIBED: readonly (keyof PlanSegment)[] = ['id', 'from', 'to', 'section', 'lining', 'lengthOverrideM', 'number', 'inserts'];
+const DESCRIBED: readonly (keyof PlanSegment)[] = ['id', 'from', 'to', 'section', 'lining', 'wall', 'lengthOverrideM', 'number', 'inserts'];
 /** Drawn lengths closer than this are the same length (a re-save rounds nothing, but a scale of many digits can). */
 const SAME_LENGTH_M = 0.0005;
 
@@ -46,6 +46,7 @@ function keptSegmentChanges(context: ChangeContext, before: PlanSegment, after: 
   if (typedChanged || lengthChanged) lines.push({ area: 'segment', subject, what: 'Length', before: lengthWords(context, context.before, before), after: lengthWords(context, context.after, after) });
   if (!same(before.section, after.section)) lines.push({ area: 'segment', subject, what: 'Section', before: sectionWords(before.section, context.units), after: sectionWords(after.section, context.units) });
   if (!same(before.lining, after.lining)) lines.push({ area: 'segment', subject, what: 'Lining', before: liningWords(before.lining, context.units), after: liningWords(after.lining, context.units) });
+  if (!same(before.wall ?? null, after.wall ?? null)) lines.push({ area: 'segment', subject, what: 'Walls', before: wallWords(before.wall, 'as the run'), after: wallWords(after.wall, 'as the run') });
   if (!same(before.inserts ?? [], after.inserts ?? [])) lines.push({ area: 'segment', subject, what: 'Silencers and losses', before: insertsWords(before), after: insertsWords(after) });
   for (const other of otherFields(before, after, DESCRIBED)) lines.push({ area: 'segment', subject, what: other.field, before: other.before, after: other.after });
   return lines;

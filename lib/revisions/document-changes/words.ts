@@ -1,5 +1,5 @@
 // Plain words for the values of a plan document, as the change summary shows them.
-import type { Lining, Section, Termination } from '@/lib/plan/document';
+import type { Lining, Section, Termination, Wall } from '@/lib/plan/document';
 import { formatLength, type UnitSystem } from '@/lib/plan/units';
 
 export function sectionWords(section: Section, units: UnitSystem): string {
@@ -16,6 +16,13 @@ export function terminationWords(termination: Termination | undefined): string {
     case 'lined': return `lined, absorption ${termination.absorption.toFixed(2)}`;
     case 'anechoic': return 'anechoic (no reflection)';
   }
+}
+
+/** Walls in words; absent is the default, sheet metal (or, for a segment, the run's walls). */
+export function wallWords(wall: Wall | null | undefined, inherited: string): string {
+  if (!wall) return inherited;
+  if (wall.kind === 'measured') return `measured ${wall.attenuationDbPerM.map((value) => Number(value.toFixed(2))).join(' · ')} dB/m`;
+  return wall.kind === 'rigid' ? 'rigid' : 'sheet metal';
 }
 
 export function liningWords(lining: Lining | null | undefined, units: UnitSystem): string {

@@ -55,7 +55,8 @@ describe('mode list', () => {
     expect(markup).toContain(`${modes[high].frequencyHz.toFixed(1)} Hz`);
     for (const flag of modeFlags) expect(markup).toContain(`flagged: duct resonance ${flag.resonanceOrder}`);
     expect(markup).toContain('data-severity="low"');
-    expect(markup).toContain('<polygon points="6,1 11,11 1,11"');
+    // the shape of each cited flag's severity (high: a filled triangle, medium: a diamond)
+    for (const flag of modeFlags) expect(markup).toContain(flag.severity === 'high' ? '<polygon points="6,1 11,11 1,11"' : flag.severity === 'medium' ? '<polygon points="6,1 11,6 6,11 1,6"' : 'data-severity="low"');
     expect(markup).toMatch(/<details[^>]*open/);
   });
 
