@@ -130,6 +130,12 @@ export function runAcousticBench(): void {
   const analysis = analyzeRun(run);
   const analysisFastest = { ms: 0 };
   const analysisMs = timeMs(() => analyzeRun(run), 51, analysisFastest);
+  // The same run with rigid walls (air losses only): the sharp, ideal case, for comparison with sheet metal (the default).
+  const rigidRun: RunInput = { ...run, walls: { kind: 'rigid' } };
+  for (let warm = 0; warm < 5; warm++) analyzeRun(rigidRun);
+  const rigidAnalysis = analyzeRun(rigidRun);
+  const rigidFastest = { ms: 0 };
+  const rigidMs = timeMs(() => analyzeRun(rigidRun), 51, rigidFastest);
 
   // Pressure envelopes are built when first read; time a fresh analysis plus reading every one.
   const envelopesFastest = { ms: 0 };
@@ -155,7 +161,8 @@ export function runAcousticBench(): void {
   const rows: Array<[string, string]> = [
     ['run', `${run.segments.length} segments, ${lengthM.toFixed(1)} m, 10 tees with two-segment branches, ${run.minHz}-${run.maxHz} Hz`],
     ['resonances found', `${analysis.resonances.length}`],
-    ['analyzeRun, median of 51 warm runs', `${analysisMs.toFixed(2)} ms (fastest ${analysisFastest.ms.toFixed(2)} ms; aim < 10 ms)`],
+    ['analyzeRun, sheet-metal walls, median of 51', `${analysisMs.toFixed(2)} ms (fastest ${analysisFastest.ms.toFixed(2)} ms; aim < 10 ms)`],
+    ['analyzeRun, rigid walls, median of 51', `${rigidMs.toFixed(2)} ms (fastest ${rigidFastest.ms.toFixed(2)} ms; ${rigidAnalysis.resonances.length} resonances)`],
     ['analyzeRun + every pressure envelope', `${withEnvelopesMs.toFixed(2)} ms (fastest ${envelopesFastest.ms.toFixed(2)} ms)`],
     ['sweep (engine, every segment)', `${first.engineNs.toFixed(1)} ns per segment·frequency (${sweeper.segmentCount} segments x ${frequencyCount} frequencies, median of 21 rounds)`],
     ['sweep (plain Float64Array loop)', `${first.plainNs.toFixed(1)} ns per segment·frequency (same rounds, alternating)`],

@@ -62,7 +62,7 @@ export function ReviewTable({ revisionId, runs, risks, decisions, canReview }: R
                       <td className="py-1 pr-2">{resonance.order}</td>
                       <td className="num py-1 pr-2 text-right">{resonance.frequencyHz.toFixed(1)} Hz</td>
                       <td className="num py-1 pr-2 text-right">{resonance.q === null ? '—' : resonance.q.toFixed(1)}</td>
-                      <td className="py-1 pr-2">{tone === null ? <span className="text-graphite-300">clear</span> : <span className="rounded bg-risk-soft px-1 text-xs text-risk-ink">⚠ near {tone.toFixed(0)} Hz</span>}</td>
+                      <td className="py-1 pr-2">{tone === null ? <span className="text-graphite-300">clear</span> : <span className="rounded bg-risk-soft px-1 text-xs text-risk-ink">⚠ meets {tone.toFixed(0)} Hz</span>}</td>
                       <td className="py-1">
                         <RowDecision label={label} current={decisions[target] ?? null} canReview={canReview} busy={busy} onDecide={(decision, note) => decide(target, decision, note)} />
                       </td>

@@ -73,7 +73,7 @@ export { assessRisks } from './risk/assess-risks';
 export type { RiskInput, RiskOptions, FanInput, RiskFlag, RiskKind, Severity, FlaggedQuantity } from './risk/risk-types';
 export { evaluateTreatment, describeTreatment, type TreatmentNames } from './treatments/evaluate-treatment';
 export { candidateTreatments, lowersQuantity } from './treatments/candidate-treatments';
-export { operatingEnvelope, describeEnvelope, type OperatingEnvelope } from './risk/operating-envelope';
+export { operatingEnvelope, describeEnvelope, toneIntervalHz, type OperatingEnvelope } from './risk/operating-envelope';
 export type { TreatmentEffect } from './treatments/treatment-types';
 export { applyTreatment } from './treatments/apply-treatment';
 export { quarterWaveLengthM } from './treatments/quarter-wave';

@@ -1,9 +1,10 @@
 // The analysis of every run on a plan, computed from the document (never stored as truth
 // for a draft). A run that cannot be analysed says why instead.
-import { analyzeRun, bladePassHarmonicsHz, type RunAnalysis } from '@/lib/acoustic';
+import { analyzeRun, bladePassHarmonicsHz, operatingEnvelope, toneIntervalHz, type RunAnalysis } from '@/lib/acoustic';
 import { withoutEnvelope } from '@/lib/analysis/select-envelopes';
 import type { PlanDocument } from '@/lib/plan/document';
 import { toRunInputWithMap } from '@/lib/plan/to-run-input';
+import { RISK_OPTIONS } from './risk-context';
 
 export interface PathPiece { segmentId: string; startM: number; endM: number; fromNodeId: string; toNodeId: string }
 
@@ -14,11 +15,15 @@ export interface RunResult {
   analysis: RunAnalysis | null;
   path: PathPiece[];
   fanTonesHz: number[];          // blade-pass frequency and its harmonics below the analysis band's top
-  nearFanTone: Record<number, number | null>; // resonance order → nearest fan tone within its bandwidth (or 3 %)
+  /**
+   * Resonance order → the fan tone whose interval over the operating envelope (the fan's speed range or
+   * belt slip, the supply air ±5 °C) the resonance's -3 dB band meets, as the flags judge it; null for
+   * broad resonances and those no tone meets.
+   */
+  nearFanTone: Record<number, number | null>;
 }
 
 const FAN_HARMONICS = 5;
-const NEAR_TONE_FRACTION = 0.03;
 
 function fanTones(fan: PlanDocument['runs'][number]['fan'], maxHz: number): number[] {
   if (!fan || fan.blades <= 0 || fan.rpm <= 0) return [];
@@ -36,10 +41,12 @@ export function analysePlanRun(document: PlanDocument, runId: string, metresPerP
     const analysis: RunAnalysis = { ...computed, resonances: computed.resonances.map(withoutEnvelope) };
     const tones = fanTones(run.fan, analysis.resonances.at(-1)?.frequencyHz ?? 0);
     const nearFanTone: Record<number, number | null> = {};
+    const envelope = run.fan ? operatingEnvelope({ ...run.fan, minRpm: run.fan.minRpm ?? null, maxRpm: run.fan.maxRpm ?? null }, run.temperatureC, RISK_OPTIONS) : null;
+    const intervals = envelope && run.fan ? tones.map((toneHz) => ({ toneHz, interval: toneIntervalHz(toneHz, run.fan!.rpm, envelope, run.temperatureC) })) : [];
     for (const resonance of analysis.resonances) {
-      const window = Math.max((resonance.bandwidthHz ?? 0) / 2, resonance.frequencyHz * NEAR_TONE_FRACTION);
-      const near = tones.find((tone) => Math.abs(tone - resonance.frequencyHz) <= window);
-      nearFanTone[resonance.order] = near ?? null;
+      const halfHz = (resonance.bandwidthHz ?? 0) / 2;
+      const near = resonance.broadband ? undefined : intervals.find(({ interval: [lowHz, highHz] }) => resonance.frequencyHz + halfHz >= lowHz && resonance.frequencyHz - halfHz <= highHz);
+      nearFanTone[resonance.order] = near?.toneHz ?? null;
     }
     return { ...base, problem: null, analysis, path, fanTonesHz: tones, nearFanTone };
   } catch (error) {

@@ -34,7 +34,7 @@ for (const size of [{ width: 1440, height: 900 }, { width: 1024, height: 768 }])
     await expect(page.getByTestId('pin-place')).toContainText('along');
     await page.getByRole('button', { name: /^Check all clear rows/ }).click();
     await expect(page.getByText(/clear rows checked\./)).toBeVisible();
-    const toneRow = page.locator('tr', { hasText: '⚠ near' }).first();
+    const toneRow = page.locator('tr', { hasText: '⚠ meets' }).first();
     await toneRow.getByRole('button', { name: /^Query / }).click();
     await toneRow.getByRole('textbox').fill('Sits on the blade-pass tone: retune the riser');
     await expectCleanLayout(page, page.getByRole('main'));

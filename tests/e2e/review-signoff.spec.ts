@@ -30,7 +30,7 @@ test('the engineer checks every clear row in one step, raises a query, and confi
   await expect(page.getByRole('button', { name: 'Check all clear rows (0)' })).toBeDisabled();
 
   // The row on the fan tone was left alone; the engineer raises a query on it.
-  const toneRow = page.locator('tr', { hasText: '⚠ near' }).first();
+  const toneRow = page.locator('tr', { hasText: '⚠ meets' }).first();
   await expect(toneRow.getByTestId('row-decision')).toHaveText(/Not checked yet/);
   await toneRow.getByRole('button', { name: /^Query / }).click();
   await toneRow.getByRole('textbox').fill('Sits on the blade-pass tone: retune the riser');

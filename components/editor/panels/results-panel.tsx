@@ -55,6 +55,12 @@ export function ResultsPanel({ result, loading, stale, error, selectedOrder, onS
           {analysis.warnings.map((warning) => <li key={warning}><span aria-hidden="true">⚠ </span>{warning}</li>)}
         </ul>
       )}
+      <ul className="space-y-0.5 text-xs text-graphite-700" aria-label="Assumptions" data-testid="run-assumptions">
+        {(analysis.assumptions ?? []).map((assumption) => <li key={assumption}>{assumption}</li>)}
+        {(analysis.broadbandRangesHz ?? []).length > 0 && (
+          <li>Broadband (resonances overlap or Q under 5, nothing to dodge): {analysis.broadbandRangesHz.map(([lowHz, highHz]) => `${lowHz.toFixed(0)}–${highHz.toFixed(0)} Hz`).join(', ')}.</li>
+        )}
+      </ul>
       <Section title="Resonances">
         <ResonanceTable resonances={analysis.resonances} nearFanTone={result.nearFanTone} selectedOrder={selectedOrder} onSelect={onSelectOrder} />
         <p className="text-xs text-graphite-500">

@@ -9,7 +9,8 @@ interface ResonanceTableProps {
   onSelect: (order: number | null) => void;
 }
 
-// The run's standing-wave resonances; a row near a blade-pass harmonic is flagged in words.
+// The run's standing-wave resonances; a row a blade-pass harmonic meets over the operating envelope is
+// marked in words; a broad one (Q under 5, or overlapping its neighbour) says so: nothing to dodge there.
 export function ResonanceTable({ resonances, nearFanTone, selectedOrder, onSelect }: ResonanceTableProps) {
   if (resonances.length === 0) return <p className="text-sm text-graphite-500">No resonance in the analysed band.</p>;
   return (
@@ -41,11 +42,13 @@ export function ResonanceTable({ resonances, nearFanTone, selectedOrder, onSelec
               <td className="num py-1 pr-2 text-right">{resonance.q === null ? '—' : resonance.q.toFixed(1)}</td>
               <td className="num py-1 pr-2 text-right">{resonance.bandwidthHz === null ? '—' : `${resonance.bandwidthHz.toFixed(1)} Hz`}</td>
               <td className="py-1">
-                {tone === null ? (
+                {resonance.broadband ? (
+                  <span className="text-xs text-graphite-500" title="Q under 5 or overlapping its neighbour: the run responds broadly here">broad</span>
+                ) : tone === null ? (
                   <span className="text-graphite-300">clear</span>
                 ) : (
-                  <span className="rounded bg-risk-soft px-1.5 py-0.5 text-xs font-medium text-risk-ink" title={`Within the resonance bandwidth (or 3 %) of the ${tone.toFixed(1)} Hz fan tone`}>
-                    ⚠ near {tone.toFixed(0)} Hz
+                  <span className="rounded bg-risk-soft px-1.5 py-0.5 text-xs font-medium text-risk-ink" title={`Its band meets the ${tone.toFixed(1)} Hz fan tone somewhere over the fan's speed range and the supply air's temperature range; the risk list grades it by the dB the run adds there`}>
+                    ⚠ meets {tone.toFixed(0)} Hz
                   </span>
                 )}
               </td>
