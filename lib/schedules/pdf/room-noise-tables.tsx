@@ -3,6 +3,7 @@
 // printed in SI, as the rest of the schedule.
 import { Text, View } from '@react-pdf/renderer';
 import { bandWords, correctionWords, type NoiseTables, type PathRow } from '@/lib/plans/noise-path/path-tables';
+import { plainWarning } from '../plain-warning';
 import { Table } from './table';
 import { styles } from './styles';
 
@@ -37,7 +38,7 @@ export function RoomNoiseTables({ name, tables }: { name: string; tables: NoiseT
         </View>
       ))}
       {tables.bandsBelowSchroederHz.length > 0 && <Text style={styles.paragraph}>* Below the room&apos;s Schroeder frequency ({tables.schroederHz.toFixed(0)} Hz).</Text>}
-      {tables.warnings.map((warning) => <Text key={warning} style={styles.paragraph}>Caution: {warning}</Text>)}
+      {tables.warnings.map((warning) => <Text key={warning} style={styles.paragraph}>Caution: {plainWarning(warning, tables)}</Text>)}
     </View>
   );
 }
