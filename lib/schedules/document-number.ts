@@ -6,7 +6,7 @@
 const MAX_INITIALS = 6;
 
 export function initialsOf(name: string): string {
-  const words = name.normalize('NFKD').replace(/[^\p{L}\p{N}\s]/gu, ' ').split(/\s+/).filter(Boolean);
+  const words = name.normalize('NFKD').replace(/\p{M}/gu, '').replace(/[^\p{L}\p{N}\s]/gu, ' ').split(/\s+/).filter(Boolean);
   const initials = words.map((word) => (/^\p{N}+$/u.test(word) ? word : word[0])).join('').toUpperCase().replace(/[^A-Z0-9]/g, '');
   return initials.slice(0, MAX_INITIALS) || 'X';
 }

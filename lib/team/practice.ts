@@ -2,22 +2,17 @@
 // team's own name until one is given) and its logo, a PNG or JPEG up to 1 MB and 2000 px a side,
 // stored through the S3 client as an upload of the team.
 import { createHash, randomUUID } from 'node:crypto';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { recordAudit, type AuditActor } from '@/lib/audit/record';
 import { AppError, notFound } from '@/lib/errors';
 import { getObject, putObject } from '@/lib/storage/object-store';
-import { text } from '@/lib/text';
 import { sniffPlanFile } from '@/lib/uploads/sniff';
 import { Team, Upload } from '@/models';
+import type { practiceNameSchema } from './schemas';
 
 export const MAX_LOGO_BYTES = 1024 * 1024;
 export const MAX_LOGO_SIDE_PX = 2000;
 const LOGO_TYPES = ['image/png', 'image/jpeg'] as const;
-
-// Shared by the practice form and its server action.
-export const practiceNameSchema = z.object({
-  practiceName: text().trim().max(120, 'Keep the practice name under 120 characters.'),
-});
 
 export interface PracticeSettings {
   teamName: string;
