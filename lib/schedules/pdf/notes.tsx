@@ -22,8 +22,10 @@ export function Notes({ content }: { content: ScheduleContent }) {
   const temperatures = content.temperaturesC.map((value) => `${value.toFixed(0)} °C`).join(', ') || 'none';
   return (
     <View>
-      <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('assumptions')}</Text>
-      <Text style={styles.paragraph}>Air temperatures used: {temperatures}.</Text>
+      <View wrap={false}>
+        <Text style={styles.h2}>{sectionHeading('assumptions')}</Text>
+        <Text style={styles.paragraph}>Air temperatures used: {temperatures}.</Text>
+      </View>
       <Bullets lines={ASSUMPTIONS} />
       <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('cautions')}</Text>
       <Bullets lines={CAUTIONS} />

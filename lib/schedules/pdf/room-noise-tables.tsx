@@ -22,12 +22,16 @@ function BandTable({ title, rows, belowSchroederHz }: { title: string; rows: rea
 export function RoomNoiseTables({ name, tables }: { name: string; tables: NoiseTables }) {
   return (
     <View>
-      <Text style={styles.h3}>Noise paths to the listeners: {name}</Text>
-      <Text style={styles.paragraph}>
-        Room correction: {correctionWords(tables.correction)}. {tables.outlets.length > 1 ? `${tables.outlets.length} outlets, each from its own fan, summed by energy at each listener. ` : ''}Losses are negative; levels in dB (sound power re 1 pW, sound pressure re 20 µPa).
-      </Text>
-      {tables.outlets.map((outlet) => (
+      {tables.outlets.map((outlet, index) => (
         <View key={outlet.outletId} wrap={false}>
+          {index === 0 && (
+            <>
+              <Text style={styles.h3}>Noise paths to the listeners: {name}</Text>
+              <Text style={styles.paragraph}>
+                Room correction: {correctionWords(tables.correction)}. {tables.outlets.length > 1 ? `${tables.outlets.length} outlets, each from its own fan, summed by energy at each listener. ` : ''}Losses are negative; levels in dB (sound power re 1 pW, sound pressure re 20 µPa).
+              </Text>
+            </>
+          )}
           <BandTable title={`${outlet.label} (${outlet.runName})`} rows={outlet.rows} belowSchroederHz={tables.bandsBelowSchroederHz} />
         </View>
       ))}
