@@ -11,7 +11,7 @@ const REPEATS = 5;
 async function main(): Promise<void> {
   const revision = benchRevision(RUNS);
   const resonances = revision.analysis.reduce((sum, run) => sum + (run.analysis?.resonances.length ?? 0), 0);
-  const render = async () => renderSchedulePdf(scheduleContent({ revision, decisions: [], image: null, issuedBy: 'Bench', date: new Date() }), new Date());
+  const render = async () => renderSchedulePdf(scheduleContent({ revision, decisions: [], image: null, issuedBy: 'Bench', date: new Date(), practice: { name: 'Bench practice', logo: null }, history: [] }), new Date());
   const first = Date.now();
   const warm = await render();
   const firstMs = Date.now() - first;

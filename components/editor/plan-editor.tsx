@@ -19,6 +19,7 @@ import { ScaleDialog } from './dialogs/scale-dialog';
 import { editorReducer, editRefusal, initialModel, runCommand } from './editor-model';
 import { EndPanel } from './panels/end-panel';
 import { ResultsPanel } from './panels/results-panel';
+import { OutletReflectionLossTable } from './results/outlet-reflection-loss-table';
 import { RunPanel } from './panels/run-panel';
 import { SegmentPanel } from './panels/segment-panel';
 import { wallWords } from './panels/walls-field';
@@ -249,6 +250,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
                 onApply={(document) => dispatch({ type: 'apply', document, state: normalizeState(document, model.state) })} />
               <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
                 selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} nodeLabels={labels.nodes} />
+              {activeRunId && <div className="mt-5"><OutletReflectionLossTable document={doc} runId={activeRunId} labels={labels} unitSystem={unitSystem} /></div>}
               </>)}
             </div>
           )}

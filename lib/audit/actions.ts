@@ -20,6 +20,7 @@ export const AUDIT_ACTIONS = {
   'invitation.accepted': { label: 'Invitation accepted', area: 'invitation' },
   'member.role_changed': { label: 'Role changed', area: 'member' },
   'member.removed': { label: 'Member removed', area: 'member' },
+  'team.practice_changed': { label: 'Practice name or logo changed', area: 'member' },
   'billing.seats_requested': { label: 'Seat change requested', area: 'billing' },
   'billing.cancel_requested': { label: 'Cancellation requested', area: 'billing' },
   'billing.seats_changed': { label: 'Paid seats changed', area: 'billing' },

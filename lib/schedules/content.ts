@@ -1,27 +1,27 @@
 // Everything a treatment schedule shows, gathered from a frozen revision as plain data, so the
 // PDF pieces only lay it out.
 import type { Termination } from '@/lib/acoustic';
-import { nodePositions } from '@/lib/plan/document';
-import { drawnArea } from '@/lib/plan/drawn-area';
 import { planLabels, type PlanLabels } from '@/lib/plan/labels';
-import { roomRectPx } from '@/lib/plan/rooms/room-input';
+import { outletReflectionLosses, type OutletReflectionLoss } from '@/lib/plan/outlet-reflection-loss';
 import type { RunResult } from '@/lib/plans/results';
 import { resonanceTarget } from '@/lib/revisions/rows';
 import { isAcceptedForIssue, revisionStateLabel } from '@/lib/revisions/states';
-import type { RevisionView, RiskRow, RoomRow, TreatmentRow } from '@/lib/revisions/types';
+import type { RevisionSummary, RevisionView, RiskRow, RoomRow, TreatmentRow } from '@/lib/revisions/types';
 import type { DecisionView } from '@/lib/reviews/data';
 import { DECISION_LABELS } from '@/lib/reviews/decisions';
 import { describeSection, describeTermination } from './describe';
+import { scheduleDocumentNumber } from './document-number';
+import { planFigure, type ScheduleFigure, type ScheduleImage } from './figure';
+import { roomVerdicts, type RoomVerdict } from './in-brief';
+import { reflectionKindWords } from '@/lib/plan/reflection-words';
 
-export interface ScheduleLine { x1: number; y1: number; x2: number; y2: number }
-export interface ScheduleRoomOutline { x: number; y: number; widthPx: number; heightPx: number; name: string }
-export interface ScheduleFigure {
-  metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number;
-  image: { data: Buffer; format: 'png' | 'jpg' } | null;
-  /** The plan has a drawing, but it could not be decoded for printing (one stored before drawings were bounded). */
-  drawingLeftOut: boolean;
-  lines: ScheduleLine[]; labels: { x: number; y: number; text: string }[]; rooms: ScheduleRoomOutline[];
-}
+export { planFigure, type ScheduleFigure, type ScheduleImage };
+
+/** Who issues the schedule: the practice's name and logo from the team settings. */
+export interface SchedulePractice { name: string; logo: ScheduleImage | null }
+
+/** One revision of the plan in the schedule's revision history. */
+export interface ScheduleHistoryRow { number: number; dateText: string; submittedBy: string; outcome: string; reviewedBy: string; note: string }
 
 export interface ScheduleRun {
   name: string;
@@ -42,6 +42,10 @@ export interface ScheduleRun {
 }
 
 export interface ScheduleContent {
+  practice: SchedulePractice;
+  documentNumber: string;
+  /** "Draft", "Issued", or "Preview, not issued". */
+  status: string;
   projectName: string;
   planName: string;
   revisionNumber: number;
@@ -56,49 +60,15 @@ export interface ScheduleContent {
   risks: readonly RiskRow[];
   treatments: readonly TreatmentRow[];
   rooms: readonly RoomRow[];
+  roomVerdicts: RoomVerdict[];
+  outlets: OutletReflectionLoss[];
+  history: ScheduleHistoryRow[];
   temperaturesC: number[];
 }
 
-const FIGURE_MARGIN_PX = 60;
 // The printed table keeps the lowest orders, where duct rumble lives, and every row that
 // matters beyond them (near a fan tone, or flagged); the revision holds the full list.
 export const PRINTED_LOWEST_ORDERS = 12;
-
-/** The plan figure: the drawing (or a blank sheet around what is drawn), run lines and names, room outlines. */
-export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerPixel' | 'background' | 'extras'>, image: ScheduleFigure['image']): ScheduleFigure {
-  const doc = revision.document;
-  const positions = nodePositions(doc);
-  const lines = doc.segments.flatMap((segment) => {
-    const from = positions.get(segment.from);
-    const to = positions.get(segment.to);
-    return from && to ? [{ x1: from.x, y1: from.y, x2: to.x, y2: to.y }] : [];
-  });
-  const names = labelsOf(revision);
-  const segmentLabels = doc.segments.flatMap((segment) => {
-    const from = positions.get(segment.from);
-    const to = positions.get(segment.to);
-    const text = names.segments[segment.id];
-    return from && to && text ? [{ x: (from.x + to.x) / 2, y: (from.y + to.y) / 2, text }] : [];
-  });
-  const labels = [...doc.runs.flatMap((run) => {
-    const start = positions.get(run.startNodeId);
-    return start ? [{ x: start.x, y: start.y, text: `${run.name} (${names.runs[run.id] ?? ''})` }] : [];
-  }), ...segmentLabels];
-  const rooms = doc.rooms.map((room) => {
-    const rect = roomRectPx(room, revision.metresPerPixel);
-    return { x: rect.x, y: rect.y, widthPx: rect.width, heightPx: rect.height, name: room.name };
-  });
-  if (image && revision.background?.widthPx && revision.background.heightPx) {
-    return { metresPerPixel: revision.metresPerPixel, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx, originX: 0, originY: 0, image, drawingLeftOut: false, lines, labels, rooms };
-  }
-  // A blank sheet: the drawn runs and rooms with a margin (from the plan's origin, at least 400 × 300 px).
-  const drawn = drawnArea(doc, revision.metresPerPixel) ?? { x: 0, y: 0, widthPx: 0, heightPx: 0 };
-  const minX = Math.min(drawn.x, 0) - FIGURE_MARGIN_PX;
-  const minY = Math.min(drawn.y, 0) - FIGURE_MARGIN_PX;
-  const maxX = Math.max(drawn.x + drawn.widthPx, 400) + FIGURE_MARGIN_PX;
-  const maxY = Math.max(drawn.y + drawn.heightPx, 300) + FIGURE_MARGIN_PX;
-  return { metresPerPixel: revision.metresPerPixel, widthPx: maxX - minX, heightPx: maxY - minY, originX: minX, originY: minY, image: null, drawingLeftOut: revision.background !== null, lines, labels, rooms };
-}
 
 /** The frozen plan's labels (revisions frozen before labels existed get the ones the editor gives). */
 function labelsOf(revision: Pick<RevisionView, 'document' | 'extras'>): PlanLabels {
@@ -158,17 +128,37 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
       };
     }),
     omitted: left.length === 0 ? null : { count: left.length, fromHz: left[0].frequencyHz, toHz: left[left.length - 1].frequencyHz },
-    reflections: (analysis?.reflections ?? []).map((reflection) => ({ atM: reflection.atM, kind: reflection.kind, magnitude: magnitudeText(reflection.bands) })),
+    reflections: (analysis?.reflections ?? []).map((reflection) => ({ atM: reflection.atM, kind: reflectionKindWords(reflection.kind), magnitude: magnitudeText(reflection.bands) })),
     warnings: analysis?.warnings ?? [],
   };
 }
 
+function dateOf(iso: string): string {
+  return iso.slice(0, 10);
+}
+
+/** The plan's revisions up to the printed one, oldest first, with the review's outcome and overall note. */
+function historyRows(history: readonly RevisionSummary[], upTo: number): ScheduleHistoryRow[] {
+  return [...history].filter((row) => row.number <= upTo).sort((a, b) => a.number - b.number).map((row) => ({
+    number: row.number, dateText: dateOf(row.createdAt), submittedBy: row.submittedByName, outcome: revisionStateLabel(row.state),
+    reviewedBy: row.reviewedByName ? `${row.reviewedByName}${row.reviewedAt ? `, ${dateOf(row.reviewedAt)}` : ''}` : '—', note: row.reviewNote || '—',
+  }));
+}
+
 export function scheduleContent(input: {
-  revision: RevisionView; decisions: readonly DecisionView[]; image: ScheduleFigure['image']; issuedBy: string | null; date: Date;
+  revision: RevisionView; decisions: readonly DecisionView[]; image: ScheduleImage | null; issuedBy: string | null; date: Date;
+  practice: SchedulePractice; history: readonly RevisionSummary[];
 }): ScheduleContent {
   const { revision } = input;
   const decisions = new Map(input.decisions.map((decision) => [decision.target, decision]));
+  const draft = !isAcceptedForIssue(revision.state);
+  const rooms = revision.extras.rooms ?? [];
+  // the history always carries the printed revision, as it stands now
+  const history = [...input.history.filter((row) => row.number !== revision.number), revision];
   return {
+    practice: input.practice,
+    documentNumber: scheduleDocumentNumber(revision.project.name, revision.planName, revision.planId),
+    status: draft ? 'Draft' : input.issuedBy ? 'Issued' : 'Preview, not issued',
     projectName: revision.project.name,
     planName: revision.planName,
     revisionNumber: revision.number,
@@ -176,13 +166,16 @@ export function scheduleContent(input: {
     preparedBy: revision.submittedByName,
     reviewedBy: revision.reviewedByName ?? 'Not reviewed yet',
     stateLabel: revisionStateLabel(revision.state),
-    draft: !isAcceptedForIssue(revision.state),
+    draft,
     issuedBy: input.issuedBy,
     figure: planFigure(revision, input.image),
     runs: revision.analysis.map((result) => runOf(revision, result, decisions)),
     risks: revision.extras.risks ?? [],
     treatments: revision.extras.treatments ?? [],
-    rooms: revision.extras.rooms ?? [],
+    rooms,
+    roomVerdicts: roomVerdicts(rooms, revision.document),
+    outlets: outletReflectionLosses(revision.document, undefined, labelsOf(revision)),
+    history: historyRows(history, revision.number),
     temperaturesC: [...new Set(revision.document.runs.map((run) => run.temperatureC))].sort((a, b) => a - b),
   };
 }

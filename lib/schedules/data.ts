@@ -5,18 +5,19 @@ import { createHash } from 'node:crypto';
 import { recordActivity, type ActivityActor } from '@/lib/activity/record';
 import { recordAudit } from '@/lib/audit/record';
 import { AppError, notFound } from '@/lib/errors';
-import { getRevisionById } from '@/lib/revisions/data';
+import { getRevisionById, listRevisions } from '@/lib/revisions/data';
 import { schedulePath } from '@/lib/revisions/links';
 import { isAcceptedForIssue } from '@/lib/revisions/states';
 import type { RevisionView } from '@/lib/revisions/types';
 import { listDecisions } from '@/lib/reviews/data';
 import { getObject, putObject } from '@/lib/storage/object-store';
+import { practiceForSchedule } from '@/lib/team/practice';
 import { printImage } from '@/lib/uploads/print-image';
 import { assertId } from '@/lib/ids';
 import { sendJob } from '@/lib/jobs/queue';
 import { Schedule, Upload } from '@/models';
 import type { ScheduleStatus } from '@/models/schedule';
-import { scheduleContent, type ScheduleFigure } from './content';
+import { scheduleContent, type ScheduleImage } from './content';
 import { renderSchedulePdf } from './render';
 
 export interface ScheduleSummary {
@@ -43,7 +44,7 @@ function toSummary(row: Schedule, revision: { planName: string; number: number }
   };
 }
 
-async function planImage(revision: RevisionView): Promise<ScheduleFigure['image']> {
+async function planImage(revision: RevisionView): Promise<ScheduleImage | null> {
   if (!revision.background) return null;
   const upload = await Upload.findOne({ where: { id: revision.background.id, teamId: revision.teamId } });
   if (!upload) return null;
@@ -57,8 +58,10 @@ async function planImage(revision: RevisionView): Promise<ScheduleFigure['image'
 }
 
 export async function renderRevisionSchedule(revision: RevisionView, issuedBy: string | null, at: Date): Promise<Buffer> {
-  const decisions = await listDecisions(revision.teamId, revision.id);
-  const content = scheduleContent({ revision, decisions, image: await planImage(revision), issuedBy, date: at });
+  const [decisions, image, practice, history] = await Promise.all([
+    listDecisions(revision.teamId, revision.id), planImage(revision), practiceForSchedule(revision.teamId), listRevisions(revision.teamId, revision.planId),
+  ]);
+  const content = scheduleContent({ revision, decisions, image, issuedBy, date: at, practice, history });
   return renderSchedulePdf(content, at);
 }
 

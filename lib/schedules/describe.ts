@@ -15,3 +15,10 @@ export function describeTermination(termination: Termination): string {
     case 'anechoic': return 'anechoic (no reflection)';
   }
 }
+
+/** A duct size as marked on a drawing: "Ø315" or "600×400" (mm). */
+export function describeSize(section: Section): string {
+  return section.shape === 'round'
+    ? `Ø${(section.diameterM * 1000).toFixed(0)}`
+    : `${(section.widthM * 1000).toFixed(0)}×${(section.heightM * 1000).toFixed(0)}`;
+}

@@ -29,3 +29,9 @@ export const acceptInvitationSchema = z.object({
 export type AcceptAsNewInput = z.input<typeof acceptAsNewSchema>;
 export type AcceptAsExistingInput = z.input<typeof acceptAsExistingSchema>;
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
+
+// Shared by the practice form on the team page and its server action: the name printed on treatment schedules.
+export const practiceNameSchema = z.object({
+  practiceName: text().trim().max(120, 'Keep the practice name under 120 characters.'),
+});
+export type PracticeNameInput = z.input<typeof practiceNameSchema>;

@@ -9,7 +9,8 @@ import { seatChangeSchema } from '@/lib/billing/schemas';
 import { cancelSubscription, requestPaidSeats } from '@/lib/billing/seats';
 import { createInvitation, resendInvitation, revokeInvitation } from '@/lib/team/invitations';
 import { changeMemberRole, removeMember } from '@/lib/team/members';
-import { invitationInputSchema, roleChangeSchema } from '@/lib/team/schemas';
+import { setPracticeName } from '@/lib/team/practice';
+import { invitationInputSchema, practiceNameSchema, roleChangeSchema } from '@/lib/team/schemas';
 import { parseWith } from '@/lib/validation';
 
 const idSchema = text().min(1).max(64);
@@ -74,5 +75,14 @@ export async function cancelSubscriptionAction(): Promise<ActionResult<null>> {
     await cancelSubscription(actor.team.teamId, auditActorOf(actor));
     revalidatePath('/team/billing');
     return null;
+  });
+}
+
+export async function setPracticeNameAction(input: unknown): Promise<ActionResult<{ practiceName: string }>> {
+  return runAction('setPracticeName', async () => {
+    const actor = await authorize('members.manage');
+    const practice = await setPracticeName(actor.team.teamId, auditActorOf(actor), parseWith(practiceNameSchema, input));
+    revalidatePath('/team');
+    return { practiceName: practice.practiceName };
   });
 }

@@ -3,10 +3,12 @@ import { EmptyState } from '@/components/feedback/empty-state';
 import { InvitationRow } from '@/components/team/invitation-row';
 import { InviteForm } from '@/components/team/invite-form';
 import { MemberRow } from '@/components/team/member-row';
+import { PracticeForm } from '@/components/team/practice-form';
 import { requireActor } from '@/lib/auth/current';
 import { teamStanding } from '@/lib/billing/standing';
 import { listInvitations } from '@/lib/team/invitations';
 import { listMembers } from '@/lib/team/members';
+import { getPracticeSettings } from '@/lib/team/practice';
 import { seatUsage } from '@/lib/team/seats';
 
 export const metadata: Metadata = { title: 'Team settings' };
@@ -14,7 +16,7 @@ export const metadata: Metadata = { title: 'Team settings' };
 export default async function TeamMembersPage() {
   const actor = await requireActor();
   const teamId = actor.team!.teamId; // the layout refuses anyone but an admin
-  const [members, invitations, standing, usage] = await Promise.all([listMembers(teamId), listInvitations(teamId), teamStanding(teamId), seatUsage(teamId)]);
+  const [members, invitations, standing, usage, practice] = await Promise.all([listMembers(teamId), listInvitations(teamId), teamStanding(teamId), seatUsage(teamId), getPracticeSettings(teamId)]);
   return (
     <div className="space-y-6">
       <section className="panel" aria-labelledby="members-title">
@@ -30,6 +32,11 @@ export default async function TeamMembersPage() {
         <h2 id="invite-title" className="mb-1 font-semibold">Invite someone</h2>
         <p className="mb-3 text-sm text-graphite-500">They get a mail with a link that works once, for 7 days. A pending invitation holds a seat.</p>
         <InviteForm />
+      </section>
+      <section className="panel p-4" aria-labelledby="practice-title">
+        <h2 id="practice-title" className="mb-1 font-semibold">Practice on treatment schedules</h2>
+        <p className="mb-3 text-sm text-graphite-500">The name and logo at the head of every page of the schedules this team issues.</p>
+        <PracticeForm teamName={practice.teamName} practiceName={practice.practiceName} logo={practice.logo && { id: practice.logo.id, fileName: practice.logo.fileName }} />
       </section>
       <section aria-labelledby="invitations-title">
         <h2 id="invitations-title" className="mb-2 font-semibold">Pending invitations</h2>

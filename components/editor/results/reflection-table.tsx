@@ -1,8 +1,7 @@
 'use client';
 
 import type { Reflection } from '@/lib/acoustic';
-
-const KIND_NAMES: Record<string, string> = { start: 'Start end', end: 'End', 'area-change': 'Area change', tee: 'Tee' };
+import { reflectionKindWords } from '@/lib/plan/reflection-words';
 
 // |R| per octave band at each discontinuity, with the phase in degrees on hover and in words for readers.
 export function ReflectionTable({ reflections, formatPosition, placeName }: { reflections: Reflection[]; formatPosition: (metres: number) => string; placeName?: (atM: number, kind: string) => string | null }) {
@@ -21,7 +20,7 @@ export function ReflectionTable({ reflections, formatPosition, placeName }: { re
           {reflections.map((reflection, index) => (
             <tr key={`${reflection.kind}-${index}`} className="border-b border-graphite-100">
               <th scope="row" className="py-1 pr-2 text-left font-normal">
-                {KIND_NAMES[reflection.kind] ?? reflection.kind}{placeName?.(reflection.atM, reflection.kind) ? <span className="num"> {placeName(reflection.atM, reflection.kind)}</span> : null} <span className="num text-graphite-500">{formatPosition(reflection.atM)}</span>
+                {reflectionKindWords(reflection.kind)}{placeName?.(reflection.atM, reflection.kind) ? <span className="num"> {placeName(reflection.atM, reflection.kind)}</span> : null} <span className="num text-graphite-500">{formatPosition(reflection.atM)}</span>
               </th>
               {reflection.bands.map((band) => {
                 const degrees = (band.phaseRad * 180) / Math.PI;

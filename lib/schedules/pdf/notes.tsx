@@ -2,6 +2,7 @@
 import { Text, View } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
 import { ASSUMPTIONS, CAUTIONS, METHODS } from '../wording';
+import { sectionHeading } from './sections';
 import { styles } from './styles';
 
 function Bullets({ lines }: { lines: readonly string[] }) {
@@ -21,12 +22,14 @@ export function Notes({ content }: { content: ScheduleContent }) {
   const temperatures = content.temperaturesC.map((value) => `${value.toFixed(0)} °C`).join(', ') || 'none';
   return (
     <View>
-      <Text style={styles.h2}>5. Assumptions and limits</Text>
-      <Text style={styles.paragraph}>Air temperatures used: {temperatures}.</Text>
+      <View wrap={false}>
+        <Text style={styles.h2}>{sectionHeading('assumptions')}</Text>
+        <Text style={styles.paragraph}>Air temperatures used: {temperatures}.</Text>
+      </View>
       <Bullets lines={ASSUMPTIONS} />
-      <Text style={styles.h2}>6. Cautions</Text>
+      <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('cautions')}</Text>
       <Bullets lines={CAUTIONS} />
-      <Text style={styles.h2}>7. Methods</Text>
+      <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('methods')}</Text>
       <Bullets lines={METHODS} />
     </View>
   );

@@ -4,16 +4,16 @@ import { Text, View } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
 import { RoomNoiseTables } from './room-noise-tables';
 import { Table } from './table';
+import { sectionHeading } from './sections';
 import { styles } from './styles';
 
 const PATH_BANDS = ['63', '125', '250', '500', '1k', '2k', '4k', '8k'];
-
 
 export function RisksAndRooms({ content }: { content: ScheduleContent }) {
   const nearTones = content.runs.flatMap((run) => run.resonances.filter((row) => row.fanTone !== 'clear').map((row) => [run.name, `Order ${row.order} at ${row.frequencyHz.toFixed(1)} Hz`, row.fanTone]));
   return (
     <View>
-      <Text style={styles.h2}>3. Risk flags and treatments</Text>
+      <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('risks')}</Text>
       {content.risks.length > 0 ? (
         <Table columns={[{ title: 'Risk', width: 0.34 }, { title: 'Severity', width: 0.1 }, { title: 'Detail', width: 0.56 }]} rows={content.risks.map((risk) => [risk.label, risk.severity, risk.detail])} />
       ) : nearTones.length > 0 ? (
@@ -32,7 +32,7 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
       ) : (
         <View style={styles.note}><Text>No treatments are chosen in this revision. The schedule is issued with the analysis only; treatments added later appear in a new revision.</Text></View>
       )}
-      <Text style={styles.h2}>4. Rooms</Text>
+      <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('rooms')}</Text>
       {content.rooms.length === 0
         ? <Text style={styles.paragraph}>No rooms are drawn on this plan, so no room results are given.</Text>
         : <Table columns={[{ title: 'Room', width: 0.3 }, { title: 'Result', width: 0.7 }]} rows={content.rooms.map((room) => [room.name, room.problem ?? room.summary])} />}

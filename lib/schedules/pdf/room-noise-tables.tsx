@@ -3,6 +3,7 @@
 // printed in SI, as the rest of the schedule.
 import { Text, View } from '@react-pdf/renderer';
 import { bandWords, correctionWords, type NoiseTables, type PathRow } from '@/lib/plans/noise-path/path-tables';
+import { plainWarning } from '../plain-warning';
 import { Table } from './table';
 import { styles } from './styles';
 
@@ -21,12 +22,16 @@ function BandTable({ title, rows, belowSchroederHz }: { title: string; rows: rea
 export function RoomNoiseTables({ name, tables }: { name: string; tables: NoiseTables }) {
   return (
     <View>
-      <Text style={styles.h3}>Noise paths to the listeners: {name}</Text>
-      <Text style={styles.paragraph}>
-        Room correction: {correctionWords(tables.correction)}. {tables.outlets.length > 1 ? `${tables.outlets.length} outlets, each from its own fan, summed by energy at each listener. ` : ''}Losses are negative; levels in dB (sound power re 1 pW, sound pressure re 20 µPa).
-      </Text>
-      {tables.outlets.map((outlet) => (
+      {tables.outlets.map((outlet, index) => (
         <View key={outlet.outletId} wrap={false}>
+          {index === 0 && (
+            <>
+              <Text style={styles.h3}>Noise paths to the listeners: {name}</Text>
+              <Text style={styles.paragraph}>
+                Room correction: {correctionWords(tables.correction)}. {tables.outlets.length > 1 ? `${tables.outlets.length} outlets, each from its own fan, summed by energy at each listener. ` : ''}Losses are negative; levels in dB (sound power re 1 pW, sound pressure re 20 µPa).
+              </Text>
+            </>
+          )}
           <BandTable title={`${outlet.label} (${outlet.runName})`} rows={outlet.rows} belowSchroederHz={tables.bandsBelowSchroederHz} />
         </View>
       ))}
@@ -37,7 +42,7 @@ export function RoomNoiseTables({ name, tables }: { name: string; tables: NoiseT
         </View>
       ))}
       {tables.bandsBelowSchroederHz.length > 0 && <Text style={styles.paragraph}>* Below the room&apos;s Schroeder frequency ({tables.schroederHz.toFixed(0)} Hz).</Text>}
-      {tables.warnings.map((warning) => <Text key={warning} style={styles.paragraph}>Caution: {warning}</Text>)}
+      {tables.warnings.map((warning) => <Text key={warning} style={styles.paragraph}>Caution: {plainWarning(warning, tables)}</Text>)}
     </View>
   );
 }

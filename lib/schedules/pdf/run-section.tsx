@@ -2,6 +2,7 @@
 import { Text, View } from '@react-pdf/renderer';
 import { PRINTED_LOWEST_ORDERS, type ScheduleRun } from '../content';
 import { Table } from './table';
+import { SECTIONS, sectionHeading } from './sections';
 import { RISK, styles } from './styles';
 
 function hz(value: number | null): string {
@@ -11,8 +12,9 @@ function hz(value: number | null): string {
 export function RunSection({ run, index }: { run: ScheduleRun; index: number }) {
   const nearTone = new Set(run.resonances.flatMap((row, rowIndex) => (row.fanTone === 'clear' ? [] : [rowIndex])));
   return (
-    <View>
-      <Text style={styles.h2}>2.{index + 1} {run.name}</Text>
+    <View break={index > 0}>
+      {index === 0 && <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('runs')}</Text>}
+      <Text style={index === 0 ? styles.h2Sub : styles.h2}>{SECTIONS.runs.number}.{index + 1} {run.name}</Text>
       {run.problem ? (
         <View style={styles.note}><Text>This run could not be analysed: {run.problem}</Text></View>
       ) : (
@@ -26,8 +28,10 @@ export function RunSection({ run, index }: { run: ScheduleRun; index: number }) 
         columns={[{ title: 'Segment', width: 0.12 }, { title: 'Length', width: 0.14, numeric: true }, { title: 'Section', width: 0.44 }, { title: 'Lining', width: 0.3 }]}
         rows={run.sections.map((section) => [section.label, `${section.lengthM.toFixed(2)} m`, section.section, section.lining])}
       />
-      <Text style={styles.h3}>Terminations</Text>
-      <Table columns={[{ title: 'Where', width: 0.4 }, { title: 'Termination', width: 0.6 }]} rows={run.terminations.map((row) => [row.where, row.kind])} />
+      <View wrap={false}>
+        <Text style={styles.h3}>Terminations</Text>
+        <Table columns={[{ title: 'Where', width: 0.4 }, { title: 'Termination', width: 0.6 }]} rows={run.terminations.map((row) => [row.where, row.kind])} />
+      </View>
       <Text style={styles.h3}>Resonances</Text>
       {run.resonances.length === 0 ? <Text style={styles.muted}>No resonance in the analysed band.</Text> : (
         <Table
@@ -46,13 +50,15 @@ export function RunSection({ run, index }: { run: ScheduleRun; index: number }) 
         </Text>
       )}
       {nearTone.size > 0 && <Text style={[styles.small, { color: RISK }]}>Shaded rows lie within the resonance bandwidth (or 3 %) of a fan blade-pass tone.</Text>}
-      <Text style={styles.h3}>Reflections summary</Text>
-      {run.reflections.length === 0 ? <Text style={styles.muted}>No reflecting discontinuity on the main path.</Text> : (
-        <Table
-          columns={[{ title: 'At', width: 0.14, numeric: true }, { title: 'Discontinuity', width: 0.36 }, { title: 'Reflection coefficient |R| (− inverted), lowest and highest band', width: 0.5 }]}
-          rows={run.reflections.map((row) => [`${row.atM.toFixed(2)} m`, row.kind, row.magnitude])}
-        />
-      )}
+      <View wrap={false}>
+        <Text style={styles.h3}>Reflections summary</Text>
+        {run.reflections.length === 0 ? <Text style={styles.muted}>No reflecting discontinuity on the main path.</Text> : (
+          <Table
+            columns={[{ title: 'At', width: 0.14, numeric: true }, { title: 'Discontinuity', width: 0.36 }, { title: 'Reflection coefficient |R| (− inverted), lowest and highest band', width: 0.5 }]}
+            rows={run.reflections.map((row) => [`${row.atM.toFixed(2)} m`, row.kind, row.magnitude])}
+          />
+        )}
+      </View>
       {run.warnings.map((warning) => <Text key={warning} style={[styles.small, styles.muted]}>Note: {warning}</Text>)}
     </View>
   );

@@ -1,10 +1,12 @@
-// The whole treatment schedule: cover, plan, one section per run, risks and rooms, notes.
+// The whole treatment schedule: cover, plan, one section per run, risks and rooms, outlets and revision history, notes.
 import { Document, Page } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
 import { Cover } from './cover';
 import { Notes } from './notes';
+import { OutletReflectionLoss } from './outlet-reflection-loss';
 import { PageFrame } from './page-frame';
 import { PlanFigure } from './plan-figure';
+import { RevisionHistory } from './revision-history';
 import { RisksAndRooms } from './risks-and-rooms';
 import { RunSection } from './run-section';
 import { styles } from './styles';
@@ -21,18 +23,12 @@ export function ScheduleDocument({ content, createdAt }: { content: ScheduleCont
         <PageFrame content={content} />
         <PlanFigure content={content} />
       </Page>
-      {content.runs.map((run, index) => (
-        <Page key={`${run.name}-${index}`} size="A4" style={styles.page} wrap>
-          <PageFrame content={content} />
-          <RunSection run={run} index={index} />
-        </Page>
-      ))}
       <Page size="A4" style={styles.page} wrap>
         <PageFrame content={content} />
+        {content.runs.map((run, index) => <RunSection key={`${run.name}-${index}`} run={run} index={index} />)}
         <RisksAndRooms content={content} />
-      </Page>
-      <Page size="A4" style={styles.page} wrap>
-        <PageFrame content={content} />
+        <OutletReflectionLoss content={content} />
+        <RevisionHistory content={content} />
         <Notes content={content} />
       </Page>
     </Document>

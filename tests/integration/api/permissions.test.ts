@@ -44,6 +44,8 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/team/invitations/[invitationId]/resend': 'members.manage',
   'GET /api/v1/team/members': 'team.read',
   'PATCH /api/v1/team/members/[memberId]': 'members.manage',
+  'POST /api/v1/team/practice/logo': 'members.manage',
+  'DELETE /api/v1/team/practice/logo': 'members.manage',
   'GET /api/v1/projects/[projectId]': 'project.read',
   'PATCH /api/v1/projects/[projectId]': 'project.update',
   'GET /api/v1/projects/[projectId]/plans': 'plan.read',
