@@ -39,6 +39,8 @@ export interface ScheduleRun {
   omitted: { count: number; fromHz: number; toHz: number } | null;
   reflections: { atM: number; kind: string; magnitude: string }[];
   warnings: string[];
+  /** What the run's results assume (walls, lining, air, ends) and where they are broadband, in words. */
+  assumptions: string[];
 }
 
 export interface ScheduleContent {
@@ -123,13 +125,19 @@ function runOf(revision: RevisionView, result: RunResult, decisions: ReadonlyMap
       const decision = decisions.get(resonanceTarget(result.runId, resonance.order));
       return {
         order: resonance.order, frequencyHz: resonance.frequencyHz, q: resonance.q, bandwidthHz: resonance.bandwidthHz,
-        fanTone: tone === null ? 'clear' : `near ${tone.toFixed(0)} Hz`,
+        fanTone: resonance.broadband ? 'broad' : tone === null ? 'clear' : `meets ${tone.toFixed(0)} Hz`,
         review: decision ? `${DECISION_LABELS[decision.decision]}${decision.note ? `: ${decision.note}` : ''}` : 'not reviewed',
       };
     }),
     omitted: left.length === 0 ? null : { count: left.length, fromHz: left[0].frequencyHz, toHz: left[left.length - 1].frequencyHz },
     reflections: (analysis?.reflections ?? []).map((reflection) => ({ atM: reflection.atM, kind: reflectionKindWords(reflection.kind), magnitude: magnitudeText(reflection.bands) })),
     warnings: analysis?.warnings ?? [],
+    assumptions: [
+      ...(analysis?.assumptions ?? []),
+      ...((analysis?.broadbandRangesHz ?? []).length > 0
+        ? [`Broadband (resonances overlap or Q under 5, nothing to dodge): ${(analysis?.broadbandRangesHz ?? []).map(([lowHz, highHz]) => `${lowHz.toFixed(0)}–${highHz.toFixed(0)} Hz`).join(', ')}.`]
+        : []),
+    ],
   };
 }
 

@@ -4,7 +4,7 @@ import { ROOM_PLAN_METRES_PER_PIXEL, roomPlanDocument } from '../unit/plan/room-
 import { acousticianWithProject, waitForSaved } from './editor-fixtures';
 import { signIn } from './fixtures';
 
-test('a fan tone on a resonance of the run feeding a room is flagged; a chosen retune clears it and the list shows before and after', async ({ page }, testInfo) => {
+test('a fan tone meeting a resonance of the run feeding a room is flagged with its dB over the operating envelope; a chosen retune clears it and the list shows before and after', async ({ page }, testInfo) => {
   const { email, user, project } = await acousticianWithProject('rooms-risk');
   const plan = await Plan.create({ projectId: project.id, name: 'Recital supply', document: roomPlanDocument(), metresPerPixel: ROOM_PLAN_METRES_PER_PIXEL, updatedById: user.id });
   await signIn(page, email);
@@ -14,10 +14,13 @@ test('a fan tone on a resonance of the run feeding a room is flagged; a chosen r
   const drawer = page.getByRole('region', { name: 'Rooms and risks' });
   const toneRow = drawer.locator('[data-testid="risk-row"][data-subject="tone:h1"]');
   await expect(toneRow).toBeVisible();
-  await expect(toneRow).toContainText('High');
+  await expect(toneRow).toContainText(/Low|Medium|High/);
   await expect(toneRow).toContainText('blade-pass tone');
   await expect(toneRow).toContainText('Recital room');
-  await expect(drawer.getByTestId('risk-rules')).toContainText('3 % of a fan tone');
+  // the envelope: 868 rpm ± 2 % belt slip (no speed range entered), supply air 18 ± 5 °C
+  await expect(toneRow).toContainText('fan 851–885 rpm (belt slip), air 13–23 °C');
+  await expect(toneRow).toContainText(/dB at the tone/);
+  await expect(drawer.getByTestId('risk-rules')).toContainText('operating envelope');
 
   // The room's results: mode chart with the run's resonances and fan tones, reflectogram, spectrum.
   await drawer.getByRole('tab', { name: /^Rooms/ }).click();
@@ -44,6 +47,9 @@ test('a fan tone on a resonance of the run feeding a room is flagged; a chosen r
   const retune = drawer.locator('[data-testid="treatment-option"][data-kind="retune-length"]');
   await expect(retune).toContainText(/(Lengthen|Shorten) A1 by \d+ mm/);
   await expect(retune).toContainText('✓ yes');
+  await expect(retune.getByTestId('option-effect')).toContainText(/clearance at the envelope's edges \+\d+\.\d Hz/);
+  const branch = drawer.locator('[data-testid="treatment-option"][data-kind="side-branch-resonator"]');
+  await expect(branch.getByTestId('option-effect')).toContainText(/insertion loss at the tone/);
   await expect(drawer.getByRole('complementary', { name: 'Cautions' })).toContainText('fire and smoke');
   await page.screenshot({ path: testInfo.outputPath('treatment-options.png') });
   await retune.getByRole('button', { name: 'Add to plan' }).click();
@@ -52,8 +58,9 @@ test('a fan tone on a resonance of the run feeding a room is flagged; a chosen r
   // The treatment list shows the flagged quantity before and after.
   const row = drawer.getByTestId('treatment-row');
   await expect(row).toHaveCount(1);
-  await expect(row.getByTestId('treatment-before')).toContainText(/115\.\d Hz/);
-  await expect(row.getByTestId('treatment-after')).toContainText(/Hz off, window/);
+  await expect(row.getByTestId('treatment-before')).toContainText(/resonance 115\.\d Hz/);
+  await expect(row.getByTestId('treatment-before')).toContainText(/sweeps 112\.\d–119\.\d Hz/);
+  await expect(row.getByTestId('treatment-after')).toContainText(/dB at the tone/);
   await expect(row.getByTestId('treatment-standing')).toContainText('Holds');
 
   // On the next results from the saved plan, the tone flag is gone.

@@ -5,7 +5,7 @@ import { apiFetch } from '@/components/api-fetch';
 import type { PlacedFlag } from '@/lib/plans/risks';
 import type { TreatmentOption, TreatmentOptions } from '@/lib/plans/treatment-options';
 import { TreatmentCautions } from './cautions';
-import { formatQuantity } from './quantity';
+import { formatEffect, formatQuantity } from './quantity';
 
 interface TreatmentOptionsProps {
   planId: string;
@@ -44,6 +44,7 @@ export function TreatmentOptionsPanel({ planId, version, flag, editable, onChoos
                 <td className="py-1 pr-2">
                   {option.description}
                   {option.planChange === null && <span className="block text-xs text-graphite-500">Recorded in the list; draw it on the plan yourself.</span>}
+                  {formatEffect(option.effect) && <span className="num block text-xs text-graphite-700" data-testid="option-effect">{formatEffect(option.effect)}</span>}
                 </td>
                 <td className="num pr-2 text-xs"><span data-testid="option-before">{formatQuantity(option.before)}</span> → <span data-testid="option-after">{formatQuantity(option.after)}</span></td>
                 <td className="pr-2 text-xs">

@@ -67,7 +67,7 @@ export const roomSchema = z.object({
 const segmentIndex = z.number().int('must be a whole number').min(0, 'must be at least 0');
 
 export const treatmentSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('line-segment'), segmentIndex, lengthM: lengthOverrideMSchema.optional(), thicknessM: liningThicknessMSchema, absorption: finite('absorption').min(0).max(1) }),
+  z.object({ kind: z.literal('line-segment'), segmentIndex, lengthM: lengthOverrideMSchema.optional(), thicknessM: liningThicknessMSchema, absorption: finite('absorption').min(0).max(1).optional() }),
   z.object({ kind: z.literal('change-termination'), end: z.enum(['start', 'end']), termination: terminationSchema }),
   z.object({ kind: z.literal('retune-length'), segmentIndex: segmentIndex.optional(), deltaLengthM: lengthChangeMSchema.optional() }),
   z.object({ kind: z.literal('side-branch-resonator'), segmentIndex: segmentIndex.optional(), tuneHz: positiveAtMost('tuning', MAX_ANALYSIS_HZ, 'Hz').optional(), diameterM: positiveAtMost('bore', MAX_SECTION_DIMENSION_M, 'm').optional(), lengthM: lengthOverrideMSchema.optional() }),
@@ -79,6 +79,9 @@ const quantitySchema = z.object({
   windowHz: finite('window').optional(),
   levelDb: finite('level').optional(),
   criterionDb: finite('criterion').optional(),
+  gainDb: finite('gain').optional(),
+  gainAtHz: finite('frequency').optional(),
+  envelopeHz: z.tuple([finite('frequency'), finite('frequency')]).optional(),
 });
 
 export const planChangeSchema = z.discriminatedUnion('kind', [

@@ -47,7 +47,7 @@ function TitleBlock({ content }: { content: ScheduleContent }) {
 export function Cover({ content }: { content: ScheduleContent }) {
   // Every resonance of the revision: the printed rows plus those the tables leave out.
   const resonances = content.runs.reduce((sum, run) => sum + run.resonances.length + (run.omitted?.count ?? 0), 0);
-  const nearTones = content.runs.reduce((sum, run) => sum + run.resonances.filter((row) => row.fanTone !== 'clear').length, 0);
+  const nearTones = content.runs.reduce((sum, run) => sum + run.resonances.filter((row) => row.fanTone.startsWith('meets')).length, 0);
   const highRisks = content.risks.filter((risk) => risk.severity === 'high').length;
   return (
     <View>
@@ -76,7 +76,7 @@ export function Cover({ content }: { content: ScheduleContent }) {
       )}
       <Text style={styles.paragraph}>
         {content.runs.length} duct run{content.runs.length === 1 ? '' : 's'} analysed, {resonances} resonance{resonances === 1 ? '' : 's'} in the analysed bands,
-        {' '}{nearTones === 0 ? 'none near a fan blade-pass tone' : `${nearTones} near a fan blade-pass tone`}.
+        {' '}{nearTones === 0 ? 'none meets a fan blade-pass tone over the operating envelope' : `${nearTones} meet a fan blade-pass tone over the operating envelope`}.
         {' '}{content.risks.length === 0 ? 'No risk flag is raised.' : `${content.risks.length} risk flag${content.risks.length === 1 ? '' : 's'} raised${highRisks > 0 ? `, ${highRisks} of them high` : ''} (section ${SECTIONS.risks.number}).`}
         {' '}{treatmentsInBrief(content.treatments)}
       </Text>

@@ -10,7 +10,7 @@ import { styles } from './styles';
 const PATH_BANDS = ['63', '125', '250', '500', '1k', '2k', '4k', '8k'];
 
 export function RisksAndRooms({ content }: { content: ScheduleContent }) {
-  const nearTones = content.runs.flatMap((run) => run.resonances.filter((row) => row.fanTone !== 'clear').map((row) => [run.name, `Order ${row.order} at ${row.frequencyHz.toFixed(1)} Hz`, row.fanTone]));
+  const nearTones = content.runs.flatMap((run) => run.resonances.filter((row) => row.fanTone.startsWith('meets')).map((row) => [run.name, `Order ${row.order} at ${row.frequencyHz.toFixed(1)} Hz`, row.fanTone]));
   return (
     <View>
       <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('risks')}</Text>
@@ -22,7 +22,7 @@ export function RisksAndRooms({ content }: { content: ScheduleContent }) {
           <Table columns={[{ title: 'Run', width: 0.3 }, { title: 'Resonance', width: 0.4 }, { title: 'Fan tone', width: 0.3 }]} rows={nearTones} />
         </>
       ) : (
-        <Text style={styles.paragraph}>No risk flag: no resonance lies near a fan blade-pass tone in this revision.</Text>
+        <Text style={styles.paragraph}>No risk flag in this revision.</Text>
       )}
       {content.treatments.length > 0 ? (
         <Table

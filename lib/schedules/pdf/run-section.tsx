@@ -10,7 +10,7 @@ function hz(value: number | null): string {
 }
 
 export function RunSection({ run, index }: { run: ScheduleRun; index: number }) {
-  const nearTone = new Set(run.resonances.flatMap((row, rowIndex) => (row.fanTone === 'clear' ? [] : [rowIndex])));
+  const nearTone = new Set(run.resonances.flatMap((row, rowIndex) => (row.fanTone.startsWith('meets') ? [rowIndex] : [])));
   return (
     <View break={index > 0}>
       {index === 0 && <Text style={styles.h2} minPresenceAhead={80}>{sectionHeading('runs')}</Text>}
@@ -23,6 +23,7 @@ export function RunSection({ run, index }: { run: ScheduleRun; index: number }) 
           plane-wave cut-off {hz(run.cutoffHz)} · fan: {run.fan}
         </Text>
       )}
+      {run.assumptions.map((assumption) => <Text key={assumption} style={[styles.small, styles.muted]}>{assumption}</Text>)}
       <Text style={styles.h3}>Sections along the main path</Text>
       <Table
         columns={[{ title: 'Segment', width: 0.12 }, { title: 'Length', width: 0.14, numeric: true }, { title: 'Section', width: 0.44 }, { title: 'Lining', width: 0.3 }]}
@@ -45,11 +46,11 @@ export function RunSection({ run, index }: { run: ScheduleRun; index: number }) 
       )}
       {run.omitted && (
         <Text style={[styles.small, styles.muted]}>
-          The table lists the lowest {PRINTED_LOWEST_ORDERS} orders and every resonance near a fan tone or flagged in review; {run.omitted.count} further
+          The table lists the lowest {PRINTED_LOWEST_ORDERS} orders and every resonance a fan tone meets or flagged in review; {run.omitted.count} further
           resonances from {run.omitted.fromHz.toFixed(1)} to {run.omitted.toHz.toFixed(1)} Hz are clear of fan tones and are listed in the revision in Antinode.
         </Text>
       )}
-      {nearTone.size > 0 && <Text style={[styles.small, { color: RISK }]}>Shaded rows lie within the resonance bandwidth (or 3 %) of a fan blade-pass tone.</Text>}
+      {nearTone.size > 0 && <Text style={[styles.small, { color: RISK }]}>Shaded rows: a fan blade-pass tone meets the resonance&apos;s band somewhere over the operating envelope (the fan&apos;s speed range, or ±2 % belt slip without one; the supply air ±5 °C). The risk flags grade each by the dB the run adds there.</Text>}
       <View wrap={false}>
         <Text style={styles.h3}>Reflections summary</Text>
         {run.reflections.length === 0 ? <Text style={styles.muted}>No reflecting discontinuity on the main path.</Text> : (

@@ -37,7 +37,11 @@ describe('GET /api/v1/plans/[planId]/risks', () => {
   it('lists the tone flag of the run feeding the room, and the room results, to any member', async () => {
     const body = await risks('viewer');
     expect(body.version).toBe(2);
-    expect(body.flags.find((flag) => flag.subject === 'tone:h1')).toMatchObject({ severity: 'high', roomId: 'recital', runName: 'Supply to recital room' });
+    const tone = body.flags.find((flag) => flag.subject === 'tone:h1');
+    expect(tone).toMatchObject({ kind: 'resonance-near-tone', roomId: 'recital', runName: 'Supply to recital room' });
+    // graded by the dB the run adds at the tone over the envelope (product rule: low from 3, medium from 6, high from 10)
+    const gainDb = tone?.quantity.gainDb ?? 0;
+    expect(tone?.severity).toBe(gainDb >= 10 ? 'high' : gainDb >= 6 ? 'medium' : 'low');
     expect(body.rooms[0]).toMatchObject({ roomId: 'recital', problem: null });
   });
 
@@ -58,8 +62,11 @@ describe('POST /api/v1/plans/[planId]/treatments/evaluate', () => {
     expect(body.flag.id).toBe(tone.id);
     const retune = body.options.find((option) => option.treatment.kind === 'retune-length')!;
     expect(retune).toMatchObject({ clears: true, planChange: { kind: 'length-override', segmentId: 'main' } });
-    expect(retune.before.distanceHz).toBeLessThan(retune.before.windowHz ?? 0);
+    // before: the resonance's band meets the tone's interval; after: a clear gap, and the run adds under 3 dB there
+    expect(retune.before.distanceHz).toBeLessThanOrEqual(retune.before.windowHz ?? 0);
     expect(retune.after.distanceHz).toBeGreaterThan(retune.after.windowHz ?? Infinity);
+    expect(retune.after.gainDb ?? Infinity).toBeLessThan(3);
+    expect(retune.effect.clearanceHz ?? 0).toBeGreaterThan(0);
     expect((await risks()).version).toBe(2);
   });
 

@@ -75,8 +75,8 @@ describe('the demo treatment schedule, page by page', () => {
     const figurePage = pages[1];
     expect(figurePage).toContain('1. Plan with the duct runs');
     for (const segment of revision.document.segments) expect(figurePage).toContain(`${labels.segments[segment.id]} ${describeSize(segment.section)}`);
-    // the demo: A1 the 600 × 400 riser, two Ø315 drops to the recital room's two outlets, heard at L1 and L2
-    expect(figurePage).toContain('A1 600×400');
+    // the demo: A1 the Ø560 spiral riser, two Ø315 drops to the recital room's two outlets, heard at L1 and L2
+    expect(figurePage).toContain('A1 Ø560');
     expect(figurePage).toContain('outlet A3 end');
     expect(figurePage).toContain('L1');
     expect(figurePage).toContain('L2');

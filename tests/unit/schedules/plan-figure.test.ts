@@ -1,3 +1,4 @@
+import { planLabels } from '@/lib/plan/labels';
 // The schedule's plan figure, worked out by hand from the fixture's coordinates (common practice, no source).
 import { describe, expect, it } from 'vitest';
 import { planFigure } from '@/lib/schedules/content';
@@ -37,7 +38,11 @@ describe('plan figure', () => {
       for (const other of figure.labels) if (other !== label) expect(boxesOverlap(label, other), `${label.text} against ${other.text}`).toBe(false);
     }
     // the chosen lining is tagged on the segment it lines
-    expect(figure.treatments).toEqual([expect.objectContaining({ tag: 'T1', where: 'A2', drawn: true })]);
-    expect(figure.lines.filter((line) => line.treated).map((line) => line.segmentId)).toEqual(['corridor-main']);
+    const document = demoTreatedPlan();
+    const lined = (document.treatments ?? [])[0]?.planChange;
+    const segmentId = lined?.kind === 'lining' ? lined.segmentId : '';
+    const labels = planLabels(document);
+    expect(figure.treatments).toEqual([expect.objectContaining({ tag: 'T1', where: labels.segments[segmentId], drawn: true })]);
+    expect(figure.lines.filter((line) => line.treated).map((line) => line.segmentId)).toEqual([segmentId]);
   });
 });
