@@ -1,6 +1,6 @@
-import { planLabels } from '@/lib/plan/labels';
 // The schedule's plan figure, worked out by hand from the fixture's coordinates (common practice, no source).
 import { describe, expect, it } from 'vitest';
+import { planLabels } from '@/lib/plan/labels';
 import { planFigure } from '@/lib/schedules/content';
 import { boxEdges, boxesOverlap, lineHitsBox } from '@/lib/schedules/label-place';
 import { DEMO_METRES_PER_PIXEL } from '@/lib/plans/demo/recital-plan';
