@@ -256,7 +256,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           )}
           {panelRun && !openRoom && (selectedSegment || selectedNode || editable) && (
             <div className="mt-6 border-t border-graphite-100 pt-4">
-              <RunPanel run={panelRun} editable={editable} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })}
+              <RunPanel run={panelRun} editable={editable} fanOwners={doc.runs.filter((other) => other.id !== panelRun.id && other.fanOfRunId == null && !doc.runs.some((sharer) => sharer.fanOfRunId === panelRun.id))} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })}
                 onRenumber={editable ? () => runCommand(model, dispatch, 'renumber-run', { runId: panelRun.id }) : undefined} />
             </div>
           )}

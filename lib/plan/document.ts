@@ -70,6 +70,11 @@ export interface PlanRun {
   /** The walls of its segments (absent or null: sheet metal), unless a segment has its own. */
   readonly walls?: Wall | null;
   readonly fan: Fan | null;
+  /**
+   * Another run whose fan this run shares (one air handler feeding several runs): its fan, speed range
+   * and sound power stand for this run's own, and the power divides between the runs by duct area.
+   */
+  readonly fanOfRunId?: string | null;
   /** The fan's sound power into this run, octave bands 63 Hz to 8 kHz, dB re 1 pW (the noise path starts from it). */
   readonly fanSoundPowerDb?: readonly number[] | null;
   /** Keyed by node id: every leaf node of the run, the start included. */

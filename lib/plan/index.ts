@@ -7,6 +7,7 @@ export * from './editor-state';
 export * from './geometry';
 export * from './graph';
 export * from './topology';
+export * from './shared-fan';
 export * from './hit-test';
 export { toRunInput, toRunInputWithMap } from './to-run-input';
 export type { RunInputWithMap, MainPathPiece } from './to-run-input';

@@ -37,6 +37,7 @@ const runSchema = z.object({
   temperatureC: temperatureCSchema,
   walls: wallSchema.nullable().optional(),
   fan: fanSchema.nullable(),
+  fanOfRunId: idSchema.nullable().optional(),
   fanSoundPowerDb: soundPowerBandsSchema.nullable().optional(),
   terminations: z.record(idSchema, terminationSchema),
 });
@@ -79,6 +80,11 @@ function checkReferences(doc: DocumentShape, context: z.RefinementCtx): void {
     runIds.add(run.id);
     if (!nodeIds.has(run.startNodeId)) context.addIssue({ code: 'custom', path: ['runs', index, 'startNodeId'], message: `names node "${run.startNodeId}", which does not exist` });
     if (run.endNodeId !== null && !nodeIds.has(run.endNodeId)) context.addIssue({ code: 'custom', path: ['runs', index, 'endNodeId'], message: `names node "${run.endNodeId}", which does not exist` });
+    if (run.fanOfRunId != null) {
+      const owner = doc.runs.find((candidate) => candidate.id === run.fanOfRunId);
+      if (!owner || owner.id === run.id) context.addIssue({ code: 'custom', path: ['runs', index, 'fanOfRunId'], message: `names run "${run.fanOfRunId}", which is not another run of the plan` });
+      else if (owner.fanOfRunId != null) context.addIssue({ code: 'custom', path: ['runs', index, 'fanOfRunId'], message: `names run "${owner.name}", which itself shares another run's fan; name that run instead` });
+    }
     for (const nodeId of Object.keys(run.terminations)) {
       if (!nodeIds.has(nodeId)) context.addIssue({ code: 'custom', path: ['runs', index, 'terminations', nodeId], message: `names node "${nodeId}", which does not exist` });
     }

@@ -4,6 +4,7 @@ import { analyzeRun, bladePassHarmonicsHz, operatingEnvelope, toneIntervalHz, ty
 import { withoutEnvelope } from '@/lib/analysis/select-envelopes';
 import type { PlanDocument } from '@/lib/plan/document';
 import { toRunInputWithMap } from '@/lib/plan/to-run-input';
+import { runFan } from '@/lib/plan/shared-fan';
 import { RISK_OPTIONS } from './risk-context';
 
 export interface PathPiece { segmentId: string; startM: number; endM: number; fromNodeId: string; toNodeId: string }
@@ -39,10 +40,11 @@ export function analysePlanRun(document: PlanDocument, runId: string, metresPerP
     const computed = analyzeRun(input);
     // Pressure envelopes are not kept: the results route computes the ones asked for (run-envelopes.ts).
     const analysis: RunAnalysis = { ...computed, resonances: computed.resonances.map(withoutEnvelope) };
-    const tones = fanTones(run.fan, analysis.resonances.at(-1)?.frequencyHz ?? 0);
+    const fan = runFan(document, run).fan;
+    const tones = fanTones(fan, analysis.resonances.at(-1)?.frequencyHz ?? 0);
     const nearFanTone: Record<number, number | null> = {};
-    const envelope = run.fan ? operatingEnvelope({ ...run.fan, minRpm: run.fan.minRpm ?? null, maxRpm: run.fan.maxRpm ?? null }, run.temperatureC, RISK_OPTIONS) : null;
-    const intervals = envelope && run.fan ? tones.map((toneHz) => ({ toneHz, interval: toneIntervalHz(toneHz, run.fan!.rpm, envelope, run.temperatureC) })) : [];
+    const envelope = fan ? operatingEnvelope({ ...fan, minRpm: fan.minRpm ?? null, maxRpm: fan.maxRpm ?? null }, run.temperatureC, RISK_OPTIONS) : null;
+    const intervals = envelope && fan ? tones.map((toneHz) => ({ toneHz, interval: toneIntervalHz(toneHz, fan.rpm, envelope, run.temperatureC) })) : [];
     for (const resonance of analysis.resonances) {
       const halfHz = (resonance.bandwidthHz ?? 0) / 2;
       const near = resonance.broadband ? undefined : intervals.find(({ interval: [lowHz, highHz] }) => resonance.frequencyHz + halfHz >= lowHz && resonance.frequencyHz - halfHz <= highHz);

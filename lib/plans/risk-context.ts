@@ -10,6 +10,7 @@ import { toRoomInput } from '@/lib/plan/rooms/room-input';
 import type { PlanRoom } from '@/lib/plan/rooms/room-types';
 import { toRunInputWithMap, type MainPathPiece } from '@/lib/plan/to-run-input';
 import { nodeDegree, runOfNode } from '@/lib/plan/topology';
+import { runFan } from '@/lib/plan/shared-fan';
 import { withoutTreatmentChanges } from './analysis/baseline';
 
 /**
@@ -36,8 +37,10 @@ export interface RiskContext {
   level: LevelContext | null;
 }
 
-export function fanInput(run: PlanRun): FanInput | undefined {
-  return run.fan ? { blades: run.fan.blades, rpm: run.fan.rpm, minRpm: run.fan.minRpm ?? null, maxRpm: run.fan.maxRpm ?? null } : undefined;
+/** The run's fan, or the fan of the run whose fan it shares. */
+export function fanInput(doc: PlanDocument, run: PlanRun): FanInput | undefined {
+  const fan = runFan(doc, run).fan;
+  return fan ? { blades: fan.blades, rpm: fan.rpm, minRpm: fan.minRpm ?? null, maxRpm: fan.maxRpm ?? null } : undefined;
 }
 
 /** The run that feeds a room through its first outlet. Throws PlanError. */
@@ -71,7 +74,7 @@ export function riskContext(doc: PlanDocument, metresPerPixel: number, target: R
     const { run, outletNodeId } = feedingRun(doc, room);
     const { input: runInput, path } = toRunInputWithMap(doc, run.id, metresPerPixel);
     const roomInput = toRoomInput(room, run.temperatureC);
-    const input: RiskInput = { run: runInput, room: roomInput, fan: fanInput(run), options: { ...RISK_OPTIONS } };
+    const input: RiskInput = { run: runInput, room: roomInput, fan: fanInput(doc, run), options: { ...RISK_OPTIONS } };
     let level: LevelContext | null = null;
     if (room.outletSoundPowerDb) {
       const outlet = toOutlet(doc, run, outletNodeId, metresPerPixel);
@@ -84,7 +87,7 @@ export function riskContext(doc: PlanDocument, metresPerPixel: number, target: R
   const run = findRun(doc, target.runId);
   if (!run) throw new PlanError(`There is no run with id "${target.runId}".`, { runId: target.runId });
   const { input, path } = toRunInputWithMap(doc, run.id, metresPerPixel);
-  return { run, room: null, input: { run: input, fan: fanInput(run), options: { ...RISK_OPTIONS } }, path, level: null };
+  return { run, room: null, input: { run: input, fan: fanInput(doc, run), options: { ...RISK_OPTIONS } }, path, level: null };
 }
 
 /** The input and path a flag of this kind is measured and treated on. */

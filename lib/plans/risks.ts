@@ -5,6 +5,7 @@ import {
   type OutletLevelBand, type RiskFlag, type RoomAnalysis, type RunAnalysis,
 } from '@/lib/acoustic';
 import { PlanError } from '@/lib/plan/errors';
+import { runFan } from '@/lib/plan/shared-fan';
 import { pathLevelFlags } from './noise-path/room-path';
 import { roomNoise, type RoomNoise } from './noise-path/room-noise';
 import type { PlanDocument } from '@/lib/plan/document';
@@ -129,7 +130,7 @@ export function planRisks(doc: PlanDocument, metresPerPixel: number, runResults:
   const rooms = doc.rooms.map((room) => roomResult(doc, metresPerPixel, runs, room));
   const fedRunIds = new Set(rooms.map((entry) => entry.result.runId).filter((runId): runId is string => runId !== null));
   const runFlags = doc.runs
-    .filter((run) => run.fan !== null && !fedRunIds.has(run.id))
+    .filter((run) => runFan(doc, run).fan !== null && !fedRunIds.has(run.id))
     .flatMap((run) => {
       try {
         const context = riskContext(doc, metresPerPixel, { runId: run.id });

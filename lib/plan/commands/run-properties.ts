@@ -34,12 +34,24 @@ export const setTermination = defineCommand('set-termination', 'Set how an end o
   return { doc: replaceRun(doc, { ...run, terminations: { ...run.terminations, [args.nodeId]: termination } }), state: { ...state, activeRunId: run.id } };
 });
 
+/** The run whose fan another shares: another run of the plan with a fan of its own. Throws PlanError. */
+function sharedFanOwner(doc: PlanDocument, run: PlanRun, ownerId: string | null): string | null {
+  if (ownerId === null) return null;
+  const owner = findRun(doc, ownerId);
+  if (!owner || owner.id === run.id) throw new PlanError('Choose another run of this plan whose fan this run shares.', { runId: run.id });
+  if (owner.fanOfRunId != null) throw new PlanError(`${owner.name} itself shares the fan of another run; choose that run.`, { runId: run.id });
+  if (doc.runs.some((other) => other.fanOfRunId === run.id)) throw new PlanError(`Other runs share the fan of ${run.name}; it keeps its own fan.`, { runId: run.id });
+  return owner.id;
+}
+
 export interface SetRunPropertiesArgs {
   /** Default: the active run. */
   readonly runId?: string;
   readonly name?: string;
   readonly temperatureC?: number;
   readonly fan?: Fan | null;
+  /** The run whose fan this run shares; null: its own fan. */
+  readonly fanOfRunId?: string | null;
   /** The walls of the run's segments; null: sheet metal. */
   readonly walls?: Wall | null;
   /** The fan's sound power into the run, 8 octave bands, dB re 1 pW; null clears it. */
@@ -53,6 +65,7 @@ export const setRunProperties = defineCommand('set-run-properties', 'Rename the 
     ...(args.name !== undefined ? { name: checked(runNameSchema, args.name, 'Name') } : {}),
     ...(args.temperatureC !== undefined ? { temperatureC: checked(temperatureCSchema, args.temperatureC, 'Air temperature') } : {}),
     ...(args.fan !== undefined ? { fan: args.fan === null ? null : checked(fanSchema, args.fan, 'Fan') } : {}),
+    ...(args.fanOfRunId !== undefined ? { fanOfRunId: sharedFanOwner(doc, run, args.fanOfRunId) } : {}),
     ...(args.walls !== undefined ? { walls: args.walls === null ? null : checked(wallSchema, args.walls, 'Walls') } : {}),
     ...(args.fanSoundPowerDb !== undefined ? { fanSoundPowerDb: args.fanSoundPowerDb === null ? null : checked(soundPowerBandsSchema, args.fanSoundPowerDb, "Fan's sound power") } : {}),
   };

@@ -11,6 +11,7 @@ import { buildAdjacency } from '@/lib/plan/graph';
 import { nodeLabelOf, planLabels, segmentLabelOf, type PlanLabels } from '@/lib/plan/labels';
 import type { PlanRoom } from '@/lib/plan/rooms/room-types';
 import { pathBetween } from '@/lib/plan/topology';
+import { runFan, startAreaM2 } from '@/lib/plan/shared-fan';
 import { runFeedingOutlet } from '../risk-context';
 import { fanStart, type FanStart } from './fan-start';
 import { plenumElement } from './plenum-element';
@@ -72,7 +73,12 @@ function ductLabel(place: string, lengthM: number, liningThicknessM: number | un
 /** The path from the fan of the run that ends at outletNodeId to that outlet of the room. Throws PlanError saying what is missing. */
 export function deriveOutletPath(doc: PlanDocument, metresPerPixel: number, room: PlanRoom, outletNodeId: string | null, labels: PlanLabels = planLabels(doc)): DerivedOutletPath {
   const { run, outletNodeId: nodeId } = runFeedingOutlet(doc, room, outletNodeId);
-  if (!run.fanSoundPowerDb) throw new PlanError(`${run.name}: give its fan's sound power (eight octave bands) to predict the level at the listener of ${room.name}.`, { runId: run.id, roomId: room.id });
+  const shared = runFan(doc, run);
+  const fanSoundPowerDb = shared.fanSoundPowerDb;
+  if (!fanSoundPowerDb) {
+    const whose = shared.owner === run ? `${run.name}: give its fan's sound power` : `${run.name} shares the fan of ${shared.owner.name}: give that fan's sound power`;
+    throw new PlanError(`${whose} (eight octave bands) to predict the level at the listener of ${room.name}.`, { runId: shared.owner.id, roomId: room.id });
+  }
   const steps = pathBetween(doc, run.startNodeId, nodeId);
   if (!steps || steps.length === 0) throw new PlanError(`${room.name}: its outlet is not reached from the start of ${run.name}.`, { roomId: room.id });
   const positions = nodePositions(doc);
@@ -84,6 +90,16 @@ export function deriveOutletPath(doc: PlanDocument, metresPerPixel: number, room
     elements.push(element);
     sources.push({ kind: element.kind, ...source });
   };
+  if (shared.sharers.length > 1) {
+    // the shared fan's power divides between its runs by the area of each run's first duct
+    const areas = shared.sharers.map((sharer) => startAreaM2(doc, sharer, (segment) => sectionArea(segment.section)) ?? 0);
+    const ownAreaM2 = startAreaM2(doc, run, (segment) => sectionArea(segment.section)) ?? 0;
+    const totalAreaM2 = areas.reduce((sum, areaM2) => sum + areaM2, 0);
+    if (ownAreaM2 > 0 && totalAreaM2 > ownAreaM2) {
+      const names = shared.sharers.map((sharer) => sharer.name).join(', ');
+      add({ kind: 'split', branchAreaM2: ownAreaM2, totalAreaM2 }, { label: `Fan shared by ${shared.sharers.length} runs (${names}): this run's share by duct area`, segmentId: null, nodeId: run.startNodeId });
+    }
+  }
   steps.forEach((step, index) => {
     const segment = segments.get(step.segmentId) as PlanSegment;
     if (index > 0) {
@@ -120,7 +136,7 @@ export function deriveOutletPath(doc: PlanDocument, metresPerPixel: number, room
   const diameterM = 2 * equivalentRadiusM(last.section);
   const outletLabel = `Outlet ${nodeLabelOf(labels, nodeId)}`;
   add({ kind: 'outlet', diameterM, mounting }, { label: `${outletLabel}, ${mounting === 'flush' ? 'flush with the ceiling or wall' : 'free-hanging'}`, segmentId: null, nodeId });
-  return { runId: run.id, runName: run.name, outletNodeId: nodeId, outletLabel, fan: fanStart(run, run.fanSoundPowerDb), elements, sources, temperatureC: run.temperatureC };
+  return { runId: run.id, runName: run.name, outletNodeId: nodeId, outletLabel, fan: fanStart({ ...run, fan: shared.fan }, fanSoundPowerDb), elements, sources, temperatureC: run.temperatureC };
 }
 
 /** Outlet to listener, m, no closer than MIN_LISTENER_DISTANCE_M. */

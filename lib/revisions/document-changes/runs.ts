@@ -5,7 +5,7 @@ import type { ChangeContext, DocumentChange } from './types';
 import { NONE } from './types';
 import { bandsWords, otherFields, same, terminationWords, wallWords } from './words';
 
-const DESCRIBED: readonly (keyof PlanRun)[] = ['id', 'name', 'letter', 'startNodeId', 'endNodeId', 'temperatureC', 'walls', 'fan', 'fanSoundPowerDb', 'terminations'];
+const DESCRIBED: readonly (keyof PlanRun)[] = ['id', 'name', 'letter', 'startNodeId', 'endNodeId', 'temperatureC', 'walls', 'fan', 'fanOfRunId', 'fanSoundPowerDb', 'terminations'];
 
 function runSubject(run: PlanRun, letter: string | undefined): string {
   return `Run ${letter ?? run.letter ?? '?'} (${run.name})`;
@@ -51,6 +51,10 @@ function keptRunChanges(context: ChangeContext, before: PlanRun, after: PlanRun)
   if (letters[0] !== letters[1]) lines.push({ area: 'run', subject, what: 'Letter', before: letters[0] ?? NONE, after: letters[1] ?? NONE });
   if (before.temperatureC !== after.temperatureC) lines.push({ area: 'run', subject, what: 'Air temperature', before: `${before.temperatureC} °C`, after: `${after.temperatureC} °C` });
   if (!same(before.walls ?? null, after.walls ?? null)) lines.push({ area: 'run', subject, what: 'Walls', before: wallWords(before.walls, 'sheet metal'), after: wallWords(after.walls, 'sheet metal') });
+  if ((before.fanOfRunId ?? null) !== (after.fanOfRunId ?? null)) {
+    const whose = (doc: typeof context.after.document, id: string | null | undefined) => (id ? `shares the fan of ${doc.runs.find((run) => run.id === id)?.name ?? id}` : 'its own fan');
+    lines.push({ area: 'fan', subject, what: 'Fan', before: whose(context.before.document, before.fanOfRunId), after: whose(context.after.document, after.fanOfRunId) });
+  }
   lines.push(...fanChanges(subject, before.fan, after.fan));
   if (!same(before.fanSoundPowerDb, after.fanSoundPowerDb)) {
     lines.push({ area: 'fan', subject, what: 'Fan sound power', before: bandsWords(before.fanSoundPowerDb, 'dB'), after: bandsWords(after.fanSoundPowerDb, 'dB') });

@@ -33,6 +33,18 @@ describe('planDocumentSchema', () => {
     expect(paths).toEqual(expect.arrayContaining(['nodes[0].x', 'segments[0].lining.absorption', 'runs[0].temperatureC', `runs[0].terminations.${run.startNodeId}.kind`]));
   });
 
+  it('a shared fan names another run that has a fan of its own: not itself, not a run that shares one', () => {
+    const { doc } = drawChain([{ x: 0, y: 0 }, { x: 100, y: 0 }]);
+    const run = doc.runs[0];
+    const runs = [run, { ...run, id: 'b', fanOfRunId: run.id }, { ...run, id: 'c', fanOfRunId: 'b' }, { ...run, id: 'd', fanOfRunId: 'd' }];
+    const result = parsePlanDocument({ ...doc, runs });
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors.some((message) => message.startsWith('runs[1]'))).toBe(false);
+    expect(result.errors.some((message) => message.startsWith('runs[2].fanOfRunId:') && message.includes('itself shares'))).toBe(true);
+    expect(result.errors.some((message) => message.startsWith('runs[3].fanOfRunId:') && message.includes('not another run'))).toBe(true);
+  });
+
   it('refuses repeated ids, dangling references and ids over 40 characters', () => {
     const { doc } = drawChain([{ x: 0, y: 0 }, { x: 100, y: 0 }]);
     const bad = {

@@ -99,6 +99,7 @@ describe('documentChanges', () => {
       temperatureC: () => editRun({ temperatureC: 18 }),
       walls: () => editRun({ walls: { kind: 'measured', attenuationDbPerM: [1, 0.8, 0.5, 0.3, 0.2, 0.2, 0.2, 0.2] } }),
       fan: () => editRun({ fan: null }),
+      fanOfRunId: () => ({ ...withTreatment, runs: [...withTreatment.runs, { ...withTreatment.runs[0], id: 'second-run', name: 'Second supply', fanOfRunId: withTreatment.runs[0].id }] }),
       fanSoundPowerDb: () => editRun({ fanSoundPowerDb: [80, 80, 80, 80, 80, 80, 80, 80] }),
       terminations: () => editRun({ terminations: { ahu: { kind: 'anechoic' }, 'recital-outlet': { kind: 'open', flange: 'flanged' } } }),
     },

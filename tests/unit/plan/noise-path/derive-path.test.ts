@@ -76,4 +76,28 @@ describe('noise path read off the plan', () => {
     const without = { ...doc, runs: doc.runs.map((run) => ({ ...run, fanSoundPowerDb: null })) };
     expect(() => derivePath(without, DEMO_METRES_PER_PIXEL, without.rooms[0])).toThrow(/give its fan's sound power/);
   });
+
+  it('a run that shares another run\'s fan takes that fan\'s power, divided between the runs by the area of each one\'s first duct', () => {
+    // A second run from the same air handler: its own start point, a Ø 250 duct to the room; it shares the demo run's fan.
+    const doc = demoRecitalPlan({ blades: DEMO_FAN_BLADES, rpm: DEMO_FAN_SPEEDS_RPM.high });
+    const second = {
+      ...doc,
+      nodes: [...doc.nodes, { id: 'ahu-2', x: 160, y: 80 }, { id: 'second-outlet', x: 700, y: 470 }],
+      segments: [...doc.segments, { id: 'second-duct', from: 'ahu-2', to: 'second-outlet', section: { shape: 'round' as const, diameterM: 0.25 } }],
+      runs: [...doc.runs, { id: 'second', name: 'Second supply', startNodeId: 'ahu-2', endNodeId: 'second-outlet', temperatureC: 16, fan: null, fanOfRunId: 'recital-supply', terminations: { 'ahu-2': { kind: 'closed' as const }, 'second-outlet': { kind: 'open' as const, flange: 'flanged' as const } } }],
+      rooms: [{ ...doc.rooms[0], outlet: { ...doc.rooms[0].outlet, nodeId: 'second-outlet', xM: 6.4 }, extraOutlets: [] }],
+    } as PlanDocument;
+    const derived = derivePath(second, DEMO_METRES_PER_PIXEL, second.rooms[0]);
+    expect(derived.input.elements[0].kind).toBe('split');
+    const riserM2 = sectionArea({ shape: 'round', diameterM: 0.56 });
+    const ownM2 = sectionArea({ shape: 'round', diameterM: 0.25 });
+    // ASHRAE Handbook, HVAC Applications, noise chapter: 10 log(total area / branch area)
+    expectClose(branchPowerSplitDb(ownM2, riserM2 + ownM2), 10 * Math.log10((riserM2 + ownM2) / ownM2), 1e-12, 'split');
+    const split = derived.input.elements[0];
+    expect(split.kind === 'split' && split.branchAreaM2).toBeCloseTo(ownM2, 12);
+    expect(split.kind === 'split' && split.totalAreaM2).toBeCloseTo(riserM2 + ownM2, 12);
+    // the fan's power and speed range are the first run's: worked at the top of its range by the fan laws
+    expect(derived.input.soundPowerDb[0]).toBeCloseTo(DEMO_FAN_SOUND_POWER_DB[0] + 50 * Math.log10(DEMO_FAN_SPEEDS_RPM.high / DEMO_FAN_SPEEDS_RPM.high), 9);
+    expect(derived.sources[0].label).toContain('Fan shared by 2 runs');
+  });
 });
