@@ -81,6 +81,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const [openRoomId, setOpenRoomId] = useState<string | null>(null);
   // The open room's noise path tables, on a sheet over the canvas; closed with the room.
   const [noiseSheetOpen, setNoiseSheetOpen] = useState(false);
+  const [highlightPlace, setHighlightPlace] = useState<{ segmentId: string | null; nodeId: string | null } | null>(null);
   useEffect(() => setNoiseSheetOpen(false), [openRoomId]);
   const closeNoiseSheet = useCallback(() => setNoiseSheetOpen(false), []);
   const tools = useCanvasTools(model, dispatch, tool, setCalibrated, setOpenRoomId);
@@ -168,6 +169,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         <div className="relative min-w-0 flex-1 bg-paper-sunk" ref={canvasArea} data-testid="plan-canvas">
           {canvasSize.width > 0 && (
             <PlanCanvas
+              highlight={noiseSheetOpen ? highlightPlace : null}
               document={doc}
               widthPx={canvasSize.width}
               heightPx={canvasSize.height}
@@ -207,7 +209,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           )}
           {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
           {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
-          {openRoom && noiseSheetOpen && openRoomNoise && <NoiseSheet roomName={openRoom.name} tables={openRoomNoise} unitSystem={unitSystem} onClose={closeNoiseSheet} />}
+          {openRoom && noiseSheetOpen && openRoomNoise && <NoiseSheet roomName={openRoom.name} tables={openRoomNoise} unitSystem={unitSystem} onClose={closeNoiseSheet} onPlace={setHighlightPlace} />}
         </div>
         <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (

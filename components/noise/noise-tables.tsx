@@ -17,11 +17,13 @@ interface TableProps {
   governingHz?: number;
   belowSchroederHz: readonly number[];
   testId: string;
+  /** Told the place on the plan of the element row under the pointer or focus (null when it leaves). */
+  onPlace?: (place: { segmentId: string | null; nodeId: string | null } | null) => void;
 }
 
 // One table, an element or outlet per row and an octave band per column, compact enough for the room
 // panel: the words column takes what is left, the numbers never wrap.
-function BandTable({ caption, heading, rows, units, governingHz, belowSchroederHz, testId }: TableProps) {
+function BandTable({ caption, heading, rows, units, governingHz, belowSchroederHz, testId, onPlace }: TableProps) {
   const governing = governingHz === undefined ? -1 : OCTAVE_BANDS_HZ.indexOf(governingHz);
   return (
     <div className="overflow-x-auto">
@@ -40,7 +42,14 @@ function BandTable({ caption, heading, rows, units, governingHz, belowSchroederH
         </thead>
         <tbody>
           {rows.map((row, index) => (
-            <tr key={`${row.role}-${index}`} className={`border-b border-graphite-100 align-top ${row.total ? 'font-medium' : ''}`} data-testid={ROW_TEST_IDS[row.role]}>
+            <tr key={`${row.role}-${index}`} className={`border-b border-graphite-100 align-top ${row.total ? 'font-medium' : ''} ${onPlace && (row.segmentId || row.nodeId) ? 'hover:bg-paper-sunk' : ''}`} data-testid={ROW_TEST_IDS[row.role]}
+              {...(onPlace && (row.segmentId || row.nodeId) ? {
+                tabIndex: 0,
+                onMouseEnter: () => onPlace({ segmentId: row.segmentId ?? null, nodeId: row.nodeId ?? null }),
+                onMouseLeave: () => onPlace(null),
+                onFocus: () => onPlace({ segmentId: row.segmentId ?? null, nodeId: row.nodeId ?? null }),
+                onBlur: () => onPlace(null),
+              } : {})}>
               <th scope="row" className="break-words py-1 pr-2 text-left font-normal">{rowWords(row, units)}</th>
               {row.valuesDb.map((value, band) => <td key={band} className={`num whitespace-nowrap py-1 pl-1 text-right ${band === governing ? 'bg-risk-soft' : ''}`}>{cell(value)}</td>)}
             </tr>
@@ -60,12 +69,14 @@ interface NoiseTablesViewProps {
   units: UnitSystem;
   /** Only this listener's table (the room panel's choice); all when absent (revision, schedule preview). */
   listenerId?: string;
+  /** Told where an element row's element lies on the plan, for the editor to highlight it. */
+  onPlace?: TableProps['onPlace'];
 }
 
 // A room's noise: each outlet's path from its fan (fan power, each element's loss, the power into the
 // room), then each listener's table (room correction per outlet, their energy sum, the criterion and the
 // margin, the governing band marked in words and a shape), the ratings and the cautions.
-export function NoiseTablesView({ tables, units, listenerId }: NoiseTablesViewProps) {
+export function NoiseTablesView({ tables, units, listenerId, onPlace }: NoiseTablesViewProps) {
   const listeners = listenerId ? tables.listeners.filter((listener) => listener.listenerId === listenerId) : tables.listeners;
   const below = tables.bandsBelowSchroederHz;
   return (
@@ -76,7 +87,7 @@ export function NoiseTablesView({ tables, units, listenerId }: NoiseTablesViewPr
       {tables.outlets.map((outlet) => (
         <details key={outlet.outletId} open className="space-y-1" data-testid="outlet-path">
           <summary className="cursor-pointer text-xs font-semibold">{outlet.label} <span className="font-normal text-graphite-500">· {outlet.runName}</span></summary>
-          <BandTable caption={`Path to ${outlet.label}`} heading="Element" rows={outlet.rows} units={units} belowSchroederHz={below} testId="outlet-path-table" />
+          <BandTable caption={`Path to ${outlet.label}`} heading="Element" rows={outlet.rows} units={units} belowSchroederHz={below} testId="outlet-path-table" onPlace={onPlace} />
         </details>
       ))}
       {listeners.map((listener) => (

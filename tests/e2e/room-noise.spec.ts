@@ -40,6 +40,13 @@ test('two outlets at two listeners, the room correction, the fan speed range and
   await expect(noise.getByTestId('path-ratings').nth(1)).toContainText(/^At L2: NC \d+ · NR [\d.]+ · [\d.]+ dB\(A\)/);
   await expect(noise.getByTestId('path-listener').nth(1)).toContainText('Level at L2, energy sum of the outlets');
   await page.screenshot({ path: testInfo.outputPath('two-outlets-two-listeners.png') });
+  // Pointing at a duct of the path shows where it lies on the plan.
+  const highlights = () => page.evaluate(() => (window as unknown as { Konva: { stages: { find(selector: string): unknown[] }[] } }).Konva.stages.flatMap((stage) => stage.find('.place-highlight')).length);
+  expect(await highlights()).toBe(0);
+  await noise.getByTestId('path-step').filter({ hasText: /^Duct/ }).first().hover();
+  await expect.poll(highlights).toBe(1);
+  await sheet.getByRole('heading', { name: /Noise path tables/ }).hover();
+  await expect.poll(highlights).toBe(0);
   const levelAtL2 = async () => Number(await noise.getByTestId('path-listener').nth(1).locator('td').nth(3).innerText());
   const furnishedL2 = await levelAtL2();
 

@@ -16,6 +16,7 @@ import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
 import { DraggedEndOutlets, OutletLinkShape, roomOutletMarks } from './outlet-link-shape';
 import { SegmentLine } from './segment-line';
+import { PlaceHighlight, type PlanPlace } from './place-highlight';
 import { endNamePlace, END_NAME_FONT_PX } from './end-word-place';
 import { TerminationGlyph } from './termination-glyph';
 import { useRoomDrag } from './use-room-drag';
@@ -49,6 +50,8 @@ export interface PlanCanvasProps {
   onNodeDrag: (nodeId: string, point: Point, phase: 'move' | 'end') => void;
   /** A room dragged with the select tool: its top-left corner where it was let go, plan pixels (not snapped). */
   onRoomDrag?: (roomId: string, corner: Point) => void;
+  /** Where the noise-path element under the pointer came from, highlighted on the plan. */
+  highlight?: PlanPlace | null;
   // Told whenever the view pans or zooms, so HTML overlays (comment pins) can follow the plan.
   onViewChange?: (view: View) => void;
 }
@@ -274,6 +277,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         {drag && doc.segments.filter((segment) => activeSegmentIds.has(segment.id)).map((segment) => segmentLine(segment, dragPositions))}
         {drag && <DraggedEndOutlets doc={{ ...doc, rooms: doc.rooms.filter((room) => room.id !== draggedRoomId) }} end={drag} nodeId={drag.nodeId} metresPerPixel={props.metresPerPixel} scale={view.scale} />}
         {drag && <NodeDot id={drag.nodeId} x={drag.x} y={drag.y} selected isStart={startNodes.has(drag.nodeId)} scale={view.scale} />}
+        {props.highlight && <PlaceHighlight place={props.highlight} document={doc} scale={view.scale} />}
         {props.mode && !drag && <ModeOverlay resonance={props.mode.resonance} speedOfSoundMps={props.mode.speedOfSoundMps} path={props.mainPath} nodes={positions} scale={view.scale} />}
         {props.preview && (
           <Line points={[props.preview.from.x, props.preview.from.y, props.preview.to.x, props.preview.to.y]} stroke="#2d6a96" strokeWidth={2 / view.scale} dash={[6 / view.scale, 4 / view.scale]} listening={false} />

@@ -7,7 +7,7 @@ import { NoiseTablesView } from '@/components/noise/noise-tables';
 
 // The room's noise path tables on a sheet over the canvas (the canvas keeps its size, so nothing under
 // the pointer moves), wide enough for an element column and eight band columns that never wrap.
-export function NoiseSheet({ roomName, tables, unitSystem, onClose }: { roomName: string; tables: NoiseTables; unitSystem: UnitSystem; onClose: () => void }) {
+export function NoiseSheet({ roomName, tables, unitSystem, onClose, onPlace }: { roomName: string; tables: NoiseTables; unitSystem: UnitSystem; onClose: () => void; onPlace?: (place: { segmentId: string | null; nodeId: string | null } | null) => void }) {
   useEffect(() => {
     const close = (event: KeyboardEvent) => { if (event.key === 'Escape') onClose(); };
     window.addEventListener('keydown', close);
@@ -19,7 +19,8 @@ export function NoiseSheet({ roomName, tables, unitSystem, onClose }: { roomName
         <h2 id="noise-sheet-title" className="text-sm font-semibold">Noise path tables: {roomName}</h2>
         <button type="button" className="btn-quiet ml-auto px-2 py-0.5 text-xs" onClick={onClose}>Close the tables</button>
       </div>
-      <NoiseTablesView tables={tables} units={unitSystem} />
+      <p className="mb-2 text-xs text-graphite-500">Point at an element to see where it lies on the plan.</p>
+      <NoiseTablesView tables={tables} units={unitSystem} onPlace={onPlace} />
     </section>
   );
 }

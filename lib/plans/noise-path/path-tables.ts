@@ -11,6 +11,9 @@ export type PathRowRole = 'fan' | 'fan-speed' | 'step' | 'into-room' | 'correcti
 
 export interface PathRow {
   role: PathRowRole;
+  /** An element's place on the plan (its segment or point), for highlighting it there. */
+  segmentId?: string | null;
+  nodeId?: string | null;
   /** In SI. */
   label: string;
   /** The same words with imperial lengths, where the row has a length in it. */
@@ -84,7 +87,7 @@ function outletTable(outlet: RoomNoise['outlets'][number]): OutletTable {
   }
   outlet.steps.forEach((step, index) => {
     const source = outlet.sources[index];
-    rows.push({ role: 'step', ...twoWays((units) => `${ELEMENT_WORDS[step.kind] ?? step.kind}: ${source ? sourceWords(source, units) : ''} (loss)`), valuesDb: step.lossDb.map((loss) => -loss) });
+    rows.push({ role: 'step', ...twoWays((units) => `${ELEMENT_WORDS[step.kind] ?? step.kind}: ${source ? sourceWords(source, units) : ''} (loss)`), valuesDb: step.lossDb.map((loss) => -loss), segmentId: source?.segmentId ?? null, nodeId: source?.nodeId ?? null });
   });
   rows.push({ role: 'into-room', label: 'Sound power into the room (dB re 1 pW)', valuesDb: outlet.powerIntoRoomDb, total: true });
   return { outletId: outlet.outletId, label: outlet.label, runName: outlet.runName, rows };
