@@ -12,7 +12,7 @@ export function formatQuantity(quantity: FlaggedQuantity): string {
     return `${quantity.levelDb.toFixed(1)} dB${quantity.criterionDb !== undefined ? ` (criterion ${quantity.criterionDb.toFixed(1)} dB)` : ''}`;
   }
   const parts: string[] = [];
-  if (quantity.gainDb !== undefined) parts.push(`${formatSigned(quantity.gainDb)} dB at the tone`);
+  if (quantity.gainDb !== undefined) parts.push(`the run adds ${formatSigned(quantity.gainDb)} dB`);
   if (quantity.valueHz !== undefined) parts.push(`resonance ${quantity.valueHz.toFixed(1)} Hz`);
   if (quantity.envelopeHz !== undefined) parts.push(`sweeps ${quantity.envelopeHz[0].toFixed(1)}–${quantity.envelopeHz[1].toFixed(1)} Hz`);
   return parts.join(', ');

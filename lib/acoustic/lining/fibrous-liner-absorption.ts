@@ -6,8 +6,10 @@ import { interpolateLogAxis } from '../tables/log-axis-table';
  * Random-incidence absorption of glass-fibre duct liner about 24 to 32 kg/m³, laid on the sheet metal
  * (reverberation-room tests to ASTM C423, mounting type A), 125 Hz to 4 kHz: values typical of the
  * published test data for 25 mm and 50 mm liner, written from memory (not checked against a stored
- * table). Test results above 1 are written as 1. The test method stops at 125 Hz and 4 kHz, so 63 Hz
- * takes the 125 Hz value and 8 kHz the 4 kHz value, as the room finish library does.
+ * table). Test results above 1 are written as 1. The test method stops at 125 Hz and 4 kHz: 8 kHz takes
+ * the 4 kHz value; below 125 Hz the absorption falls in proportion to frequency (a porous layer much
+ * thinner than a quarter wavelength; common practice, no source), so 63 Hz takes about half the 125 Hz
+ * value rather than all of it, which would credit the liner with several dB it does not give there.
  */
 export const LINER_BANDS_HZ: readonly number[] = [125, 250, 500, 1000, 2000, 4000];
 export const LINER_THICKNESSES_M: readonly number[] = [0.025, 0.05];
@@ -30,10 +32,11 @@ export function fibrousLinerAbsorption(thicknessM: number, bandsHz: readonly num
   const [thinM, thickM] = LINER_THICKNESSES_M;
   return bandsHz.map((hz, index) => {
     requireAbove(hz, 0, `bandsHz[${index}]`);
+    const belowTests = Math.min(1, hz / LINER_BANDS_HZ[0]);
     const thin = interpolateLogAxis(LINER_BANDS_HZ, LINER_ABSORPTION[0], hz);
-    if (thicknessM <= thinM) return thin * (thicknessM / thinM);
+    if (thicknessM <= thinM) return belowTests * thin * (thicknessM / thinM);
     const thick = interpolateLogAxis(LINER_BANDS_HZ, LINER_ABSORPTION[1], hz);
-    if (thicknessM >= thickM) return thick;
-    return thin + ((thicknessM - thinM) / (thickM - thinM)) * (thick - thin);
+    if (thicknessM >= thickM) return belowTests * thick;
+    return belowTests * (thin + ((thicknessM - thinM) / (thickM - thinM)) * (thick - thin));
   });
 }

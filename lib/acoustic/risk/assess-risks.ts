@@ -49,8 +49,9 @@ export interface TargetMeasurement {
 export function measureTarget(response: RunResponse, analysis: RunAnalysis, interval: [number, number]): TargetMeasurement {
   const peak = response.peakGain(interval[0], interval[1], analysis.resonances);
   const met = overlapping(analysis.resonances, interval);
-  // the resonance nearest the interval's centre when none meets it: what a treatment would have to keep away
-  const centreHz = Math.sqrt(interval[0] * interval[1]);
+  // the resonance nearest the peak (among those that meet the interval, else any distinct one): the one the
+  // flag names, and what a treatment would have to keep away
+  const centreHz = peak.atHz;
   const nearest = (met.length > 0 ? met : analysis.resonances.filter((resonance) => !resonance.broadband)).reduce<Resonance | null>(
     (best, resonance) => (best === null || Math.abs(resonance.frequencyHz - centreHz) < Math.abs(best.frequencyHz - centreHz) ? resonance : best),
     null,

@@ -70,9 +70,11 @@ describe('noise path from fan to listener', () => {
       elements: [{ kind: 'duct', section, lengthM: 20, wall: { kind: 'measured', attenuationDbPerM: flat(0) }, lining: { thicknessM: 0.05 } }],
       room: quietRoom,
     });
-    // 63 Hz: α 0.25 (50 mm liner, from memory): 1.05 x 0.25^1.4 x 13.3 x 20 = 40.2 dB, capped at 40 (common practice, no source).
+    // 125 Hz: α 0.25 (50 mm liner, from memory): 1.05 x 0.25^1.4 x 13.3 x 20 = 40.2 dB, capped at 40 (common practice, no source),
+    // and so every band above; 63 Hz: α 0.25 x 63/125 (absorption in proportion to frequency below the tests): 15.3 dB, under the cap.
     expect(1.05 * 0.25 ** 1.4 * (1.2 / 0.09) * 20).toBeGreaterThan(40);
-    expect(result.steps[0].lossDb).toEqual(flat(DUCT_FLANKING_CAP_DB));
+    expect(result.steps[0].lossDb.slice(1)).toEqual(flat(DUCT_FLANKING_CAP_DB).slice(1));
+    expect(result.steps[0].lossDb[0]).toBeCloseTo(1.05 * (0.25 * (63 / 125)) ** 1.4 * (1.2 / 0.09) * 20, 9);
     expect(result.warnings.join(' ')).toMatch(/elements\[0\].*limited to 40 dB by flanking/);
   });
 
