@@ -1,4 +1,5 @@
 // Every model, and every association in one place.
+import { ApiToken } from './api-token';
 import { AuditEvent } from './audit-event';
 import { BillingEvent } from './billing-event';
 import { BillingRefusal } from './billing-refusal';
@@ -45,6 +46,9 @@ User.hasMany(PasswordReset, { foreignKey: 'userId', as: 'passwordResets' });
 PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 User.hasMany(KnownDevice, { foreignKey: 'userId', as: 'knownDevices' });
 KnownDevice.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+User.hasMany(ApiToken, { foreignKey: 'userId', as: 'apiTokens' });
+ApiToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+ApiToken.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 Team.hasOne(TeamBilling, { foreignKey: 'teamId', as: 'billing' });
 TeamBilling.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
 BillingEvent.belongsTo(Team, { foreignKey: 'teamId', as: 'team' });
@@ -78,5 +82,5 @@ PlanActivity.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 Plan.hasMany(PlanAnalysisRow, { foreignKey: 'planId', as: 'analyses' });
 PlanAnalysisRow.belongsTo(Plan, { foreignKey: 'planId', as: 'plan' });
 
-export { AuditEvent, BillingEvent, BillingRefusal, Invitation, KnownDevice, Membership, PasswordReset, Plan, Project, Session, SignUpRequest, Team, TeamBilling, Upload, User };
+export { ApiToken, AuditEvent, BillingEvent, BillingRefusal, Invitation, KnownDevice, Membership, PasswordReset, Plan, Project, Session, SignUpRequest, Team, TeamBilling, Upload, User };
 export { Comment, NotificationSetting, PlanActivity, PlanAnalysisRow, ReviewDecision, Revision, Schedule };

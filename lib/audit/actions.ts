@@ -14,6 +14,8 @@ export type AuditArea = keyof typeof AUDIT_AREAS;
 
 export const AUDIT_ACTIONS = {
   'session.signed_in': { label: 'Signed in', area: 'sign_in' },
+  'token.created': { label: 'API token created', area: 'sign_in' },
+  'token.revoked': { label: 'API token revoked', area: 'sign_in' },
   'invitation.sent': { label: 'Invitation sent', area: 'invitation' },
   'invitation.resent': { label: 'Invitation sent again', area: 'invitation' },
   'invitation.revoked': { label: 'Invitation withdrawn', area: 'invitation' },

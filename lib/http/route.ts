@@ -3,6 +3,7 @@
 // security headers on every answer (lib/http/security-headers.ts).
 import { z } from 'zod';
 import { actorFromSessionId, sessionIdFromCookieHeader, type Actor, type TeamMembership } from '@/lib/auth/actor';
+import { actorFromBearer, bearerToken } from '@/lib/auth/api-tokens';
 import { assertMayAct } from '@/lib/auth/may-act';
 import { AppError, notSignedIn } from '@/lib/errors';
 import type { Action } from '@/lib/permissions';
@@ -34,6 +35,20 @@ export interface RouteOptions {
   tooLarge?: BodyLimit['tooLarge'];
   // Counts each call against the person's rate limit of that name (lib/http/rate-limit.ts).
   rateLimit?: RateLimitName;
+  // Only a signed-in browser session, never an API token (managing the tokens themselves).
+  sessionOnly?: boolean;
+}
+
+/** Who is asking: an API token's person (Authorization: Bearer) or the session cookie's. */
+async function actorOf(request: Request, sessionOnly: boolean): Promise<Actor | null> {
+  const authorization = request.headers.get('authorization');
+  if (authorization !== null) {
+    if (sessionOnly) throw new AppError('forbidden', 'API tokens cannot do this; sign in on the account page.');
+    const token = bearerToken(authorization);
+    if (!token) throw new AppError('not_signed_in', 'Send the API token as "Authorization: Bearer <token>".');
+    return actorFromBearer(token);
+  }
+  return actorFromSessionId(sessionIdFromCookieHeader(request.headers.get('cookie')));
 }
 
 export type RouteHandler = ((request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>) & {
@@ -72,7 +87,7 @@ export function route<Params extends Record<string, string> = Record<string, nev
     try {
       assertSameOrigin(request);
       if (options.access !== 'public') {
-        actor = await actorFromSessionId(sessionIdFromCookieHeader(request.headers.get('cookie')));
+        actor = await actorOf(request, options.sessionOnly ?? false);
         if (!actor) throw notSignedIn();
       }
       let team: TeamMembership | null = actor?.team ?? null;

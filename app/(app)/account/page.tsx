@@ -5,7 +5,9 @@ import { PasswordChangeForm } from '@/components/account/password-change-form';
 import { SignOutEverywhere } from '@/components/shell/sign-out-everywhere';
 import { requireActor } from '@/lib/auth/current';
 import { notificationSettings } from '@/lib/notifications/settings';
-import { ROLE_LABELS } from '@/lib/permissions';
+import { ROLE_LABELS, ROLES } from '@/lib/permissions';
+import { ApiTokensSection } from '@/components/account/api-tokens-section';
+import { roleWithin } from '@/lib/auth/api-tokens';
 
 export const metadata: Metadata = { title: 'Account' };
 
@@ -44,6 +46,7 @@ export default async function AccountPage() {
           ))}
         </ul>
       </section>
+      <ApiTokensSection teams={actor.memberships.map((membership) => ({ teamId: membership.teamId, teamName: membership.teamName, roles: ROLES.filter((role) => roleWithin(role, membership.role)) }))} />
       <section className="panel p-6" aria-labelledby="sessions-title">
         <h2 id="sessions-title" className="mb-1 font-semibold">Sessions</h2>
         <p className="mb-3 text-sm text-graphite-500">Ends every session of this account, on every device.</p>

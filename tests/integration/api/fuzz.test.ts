@@ -43,6 +43,7 @@ function examples(f: Fixtures): Record<string, { body: unknown; params?: Record<
       numbers: ENGINE_NUMBERS,
     },
     'PUT /api/v1/me/preferences': { body: { unitSystem: 'imperial' } },
+    'POST /api/v1/me/tokens': { body: { name: 'Fuzzed token', teamId: f.teamId, role: 'viewer', expiresInDays: 30 } },
     'POST /api/v1/projects': { body: { name: 'Fuzzed project', site: 'Quay 4' } },
     'PATCH /api/v1/projects/[projectId]': { body: { version: 1, name: 'Renamed project', site: 'Quay 5', archived: false }, params: { projectId: f.projectId } },
     'POST /api/v1/projects/[projectId]/plans': { body: { name: 'Fuzzed plan' }, params: { projectId: f.projectId } },

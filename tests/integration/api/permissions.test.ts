@@ -10,7 +10,8 @@ import { storePlanBackground } from '@/lib/uploads/data';
 import { tinyPng } from '../helpers/files';
 import { publicOrigin } from '@/lib/http/same-origin';
 import { newLinkToken } from '@/lib/tokens';
-import { Invitation, Membership } from '@/models';
+import { randomUUID } from 'node:crypto';
+import { ApiToken, Invitation, Membership } from '@/models';
 import { addMember, createTestTeam, type TestTeam } from '../helpers/people';
 import { reviewFixtures } from '../helpers/revisions';
 import { call, listRouteFiles, loadHandlers, type Method } from '../helpers/routes';
@@ -22,6 +23,9 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'GET /api/v1/ready': 'public',
   'GET /api/v1/me': 'signed-in',
   'PUT /api/v1/me/preferences': 'signed-in',
+  'GET /api/v1/me/tokens': 'signed-in',
+  'POST /api/v1/me/tokens': 'signed-in',
+  'DELETE /api/v1/me/tokens/[tokenId]': 'signed-in',
   'GET /api/v1/projects': 'project.read',
   'POST /api/v1/projects': 'project.create',
   'POST /api/v1/sessions': 'public',
@@ -95,7 +99,11 @@ beforeAll(async () => {
   const plan = await createPlan(testTeam.team.id, testTeam.members.acoustician.id, project.id, 'Walk plan');
   const upload = await storePlanBackground(testTeam.team.id, testTeam.members.acoustician.id, 'walk.png', tinyPng());
   const reviewed = await reviewFixtures(testTeam, project.id);
-  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id, planId: plan.id, uploadId: upload.id, ...reviewed };
+  const token = await ApiToken.create({
+    id: randomUUID(), userId: testTeam.members.viewer.id, teamId: testTeam.team.id, name: 'walk token', role: 'viewer', tokenHash: newLinkToken().tokenHash,
+    prefix: 'ant_walk', expiresAt: new Date(Date.now() + 86_400_000), lastUsedAt: null, revokedAt: null,
+  });
+  fixtureParams = { projectId: project.id, memberId: extraMembership!.id, invitationId: invitation.id, planId: plan.id, uploadId: upload.id, tokenId: token.id, ...reviewed };
   const ids = [testTeam.team.id, extra.id, ...Object.values(fixtureParams), ...Object.values(testTeam.members).map((user) => user.id)];
   thisTeamIds = new RegExp(ids.join('|'));
 });
