@@ -56,7 +56,7 @@ const SPACING_ZEROS = 4;
 /** Bounds of the local spacing, in mean spacings. */
 const MIN_SPACING_FRACTION = 0.25;
 const MAX_SPACING_FRACTION = 2;
-/** Zeros whose median damping gives the probes' height. */
+/** Zeros whose least damping gives the probes' height. */
 const HEIGHT_ZEROS = 3;
 /** Probes stay below this fraction of their real part. */
 const MAX_PROBE_HEIGHT_RATIO = 0.25;
@@ -95,8 +95,8 @@ class ZeroTrack {
 
   heightHz(): number {
     if (this.recentIm.length === 0) return 0;
-    const sorted = [...this.recentIm].sort((first, second) => first - second);
-    return Math.max(0, sorted[Math.floor(sorted.length / 2)]);
+    // The least damped of them: a strongly damped mode among sharp ones must not lift the probes away from the next sharp one.
+    return Math.max(0, Math.min(...this.recentIm));
   }
 }
 
