@@ -2,9 +2,11 @@
 import { runAcousticBench } from './acoustic.bench';
 import { runNoisePathBench } from './noise-path.bench';
 import { runRoomBench } from './room.bench';
+import { runSearchBench } from './search.bench';
 
 const BENCHES: Array<{ name: string; run: () => void | Promise<void> }> = [
   { name: 'acoustic', run: runAcousticBench },
+  { name: 'resonance search', run: runSearchBench },
   { name: 'room', run: runRoomBench },
   { name: 'noise path', run: runNoisePathBench },
 ];

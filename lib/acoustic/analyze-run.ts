@@ -17,10 +17,8 @@ import { validateRun } from './validate-run';
 const DEFAULT_MAX_ECHOES = 40;
 const DEFAULT_ECHO_THRESHOLD = 1e-3;
 const MAX_ECHO_WAVEFRONTS = 200000;
-/** Scan points per mean mode spacing c / (2 L). */
-const SCAN_POINTS_PER_MODE_SPACING = 2;
-/** At least this many scan points across the analysed range, however sparse the modes. */
-const MIN_SCAN_POINTS = 16;
+/** The search's first guess of the mode spacing is at most this fraction of the analysed range, however sparse the modes. */
+const MAX_SPACING_OF_RANGE = 1 / 8;
 /**
  * Modes are numbered from the run's lowest natural frequency even when minHz leaves some out: the
  * search starts at this fraction of the mean mode spacing (the lowest mode of a closed–open duct is
@@ -51,9 +49,9 @@ export function analyzeRun(input: RunInput): RunAnalysis {
   if (maxHz > minHz) {
     const endCorrectionsM = network.terminations.reduce((sum, termination) => sum + termination.lowFrequencyEndCorrectionM, 0);
     const modeSpacingHz = speedOfSoundMps / (2 * (network.totalLengthM + endCorrectionsM));
-    const scanStepHz = Math.min(modeSpacingHz / SCAN_POINTS_PER_MODE_SPACING, (maxHz - minHz) / MIN_SCAN_POINTS);
     const searchFromHz = Math.min(minHz, ORDER_SEARCH_FLOOR_SPACINGS * modeSpacingHz);
-    const zeros = findNaturalFrequencies(evaluator, { minHz: searchFromHz, maxHz, scanStepHz });
+    const spacingHz = Math.min(modeSpacingHz, MAX_SPACING_OF_RANGE * (maxHz - searchFromHz));
+    const zeros = findNaturalFrequencies(evaluator, { minHz: searchFromHz, maxHz, modeSpacingHz: spacingHz });
     const hiddenBelow = zeros.filter((zero) => zero.frequencyHz < minHz).length;
     resonances = zeros.slice(hiddenBelow).map((zero, index) => {
       const damped = zero.dampingHz > UNDAMPED_FRACTION * zero.frequencyHz;

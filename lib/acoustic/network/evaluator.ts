@@ -43,13 +43,46 @@ export class NetworkEvaluator {
   constructor(network: CompiledNetwork) {
     this.network = network;
     this.stack = new Float64Array(SLOT * (network.stackDepth + 2));
+    this.openGroupOf = new Int32Array(network.terminations.length).fill(-1);
+    network.terminations.forEach((compiled, index) => {
+      if (compiled.termination.kind !== 'open') return;
+      const flange = compiled.termination.flange;
+      let group = this.groupFlange.findIndex((known, at) => known === flange && this.groupRadiusM[at] === compiled.radiusM);
+      if (group < 0) {
+        group = this.groupFlange.length;
+        this.groupFlange.push(flange);
+        this.groupRadiusM.push(compiled.radiusM);
+      }
+      this.openGroupOf[index] = group;
+    });
+    this.groupReflections = new Float64Array(4 * this.groupFlange.length);
+    this.groupStamp = new Int32Array(this.groupFlange.length).fill(-1);
+    this.groupHasDerivative = new Uint8Array(this.groupFlange.length);
   }
+
+  /**
+   * Open ends of one flange and radius share their reflection at a frequency: each group's R and dR/df
+   * are computed once per frequency (on first use) and read by every end of the group.
+   */
+  private readonly openGroupOf: Int32Array;
+  private readonly groupFlange: Array<'flanged' | 'unflanged'> = [];
+  private readonly groupRadiusM: number[] = [];
+  /** Per group: R and dR/df as re/im pairs, and the frequency stamp (and derivative) they were computed for. */
+  private readonly groupReflections: Float64Array;
+  private readonly groupStamp: Int32Array;
+  private readonly groupHasDerivative: Uint8Array;
+  private stamp = 0;
+  private stampRe = NaN;
+  private stampIm = NaN;
+  /** Evaluations of D(f) by characteristic() since the evaluator was made (the search's cost). */
+  evaluations = 0;
 
   /** Reflection coefficient (and dR/df) of termination at complex frequency, into this.reflection. */
   private terminationAt(index: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): void {
     const compiled = this.network.terminations[index];
     const out = this.reflection;
-    if (compiled.termination.kind !== 'open') {
+    const group = this.openGroupOf[index];
+    if (group < 0) {
       // Frequency-independent reflection, precomputed at compile time.
       out[0] = compiled.constantReflection;
       out[1] = 0;
@@ -57,19 +90,41 @@ export class NetworkEvaluator {
       out[3] = 0;
       return;
     }
+    if (frequencyRe !== this.stampRe || frequencyIm !== this.stampIm) {
+      this.stamp++;
+      this.stampRe = frequencyRe;
+      this.stampIm = frequencyIm;
+    }
+    const cached = this.groupReflections;
+    const at = 4 * group;
+    if (this.groupStamp[group] !== this.stamp || (withDerivative && this.groupHasDerivative[group] === 0)) {
+      this.groupReflectionAt(group, frequencyRe, frequencyIm, withDerivative);
+      this.groupStamp[group] = this.stamp;
+      this.groupHasDerivative[group] = withDerivative ? 1 : 0;
+    }
+    out[0] = cached[at];
+    out[1] = cached[at + 1];
+    out[2] = withDerivative ? cached[at + 2] : 0;
+    out[3] = withDerivative ? cached[at + 3] : 0;
+  }
+
+  private groupReflectionAt(group: number, frequencyRe: number, frequencyIm: number, withDerivative: boolean): void {
     const speed = this.network.speedOfSoundMps;
-    const flange = compiled.termination.flange;
-    openEndReflection(flange, frequencyRe, frequencyIm, compiled.radiusM, speed, out, 0);
-    out[2] = 0;
-    out[3] = 0;
+    const flange = this.groupFlange[group];
+    const radiusM = this.groupRadiusM[group];
+    const out = this.groupReflections;
+    const at = 4 * group;
+    openEndReflection(flange, frequencyRe, frequencyIm, radiusM, speed, out, at);
+    out[at + 2] = 0;
+    out[at + 3] = 0;
     if (withDerivative) {
       // dR/df by central difference: a slightly inexact D' only changes Newton's path, not the zeros of D it converges to.
       const step = RELATIVE_DERIVATIVE_STEP * Math.hypot(frequencyRe, frequencyIm) + 1e-9;
       const neighbours = this.neighbourReflections;
-      openEndReflection(flange, frequencyRe + step, frequencyIm, compiled.radiusM, speed, neighbours, 0);
-      openEndReflection(flange, frequencyRe - step, frequencyIm, compiled.radiusM, speed, neighbours, 2);
-      out[2] = (neighbours[0] - neighbours[2]) / (2 * step);
-      out[3] = (neighbours[1] - neighbours[3]) / (2 * step);
+      openEndReflection(flange, frequencyRe + step, frequencyIm, radiusM, speed, neighbours, 0);
+      openEndReflection(flange, frequencyRe - step, frequencyIm, radiusM, speed, neighbours, 2);
+      out[at + 2] = (neighbours[0] - neighbours[2]) / (2 * step);
+      out[at + 3] = (neighbours[1] - neighbours[3]) / (2 * step);
     }
   }
 
@@ -230,6 +285,7 @@ export class NetworkEvaluator {
   /** Evaluates D(f) and dD/df at complex frequency into valueRe/valueIm and derivativeRe/derivativeIm. */
   characteristic(frequencyRe: number, frequencyIm: number, withDerivative = true): void {
     const network = this.network;
+    this.evaluations++;
     const slot = this.run(0, network.program.length, frequencyRe, frequencyIm, withDerivative);
     const stack = this.stack;
     this.terminationAt(network.startTermination, frequencyRe, frequencyIm, withDerivative);

@@ -36,6 +36,24 @@ export class ZeroList {
     this.count++;
   }
 
+  /** Real part and damping of the highest zero (the list must not be empty). */
+  lastRe(): number {
+    return this.re[this.count - 1];
+  }
+
+  lastIm(): number {
+    return this.im[this.count - 1];
+  }
+
+  /** The zeros with real part strictly between lowHz and highHz, ascending. */
+  between(lowHz: number, highHz: number): NaturalFrequency[] {
+    const zeros: NaturalFrequency[] = [];
+    let index = this.count - 1;
+    while (index >= 0 && this.re[index] >= highHz) index--;
+    for (; index >= 0 && this.re[index] > lowHz; index--) zeros.unshift({ frequencyHz: this.re[index], dampingHz: this.im[index] });
+    return zeros;
+  }
+
   contains(frequencyHz: number, dampingHz: number): boolean {
     const tolerance = SAME_ZERO_RELATIVE * Math.max(1, frequencyHz);
     for (let index = 0; index < this.count; index++) {

@@ -1,0 +1,76 @@
+// Newton's method on D(f) from a seed, with Maehly's deflation of the zeros already found nearby, so that
+// it cannot converge onto one of them: the step is 1 / (D'/D - sum 1/(f - z_i)) (Maehly 1954, as in
+// Press et al., Numerical Recipes, 3rd ed., section 9.5). Stops once the error left, estimated from the
+// shrinking of the steps in the quadratic regime, is below the target.
+import type { NetworkEvaluator } from '../network/evaluator';
+import type { NaturalFrequency } from './natural-frequencies';
+import type { ZeroList } from './zero-list';
+
+const MAX_NEWTON_ITERATIONS = 24;
+/** Target error of a refined zero, Hz, relative to its frequency (1e-8 Hz at 1 kHz). */
+const CONVERGED_RELATIVE = 1e-11;
+const CONVERGED_FLOOR_HZ = 1e-8;
+/** Newton steps shrinking at least this fast are in the quadratic regime, where the error estimate holds. */
+const QUADRATIC_STEP_RATIO = 0.1;
+/** The error estimate must fall this far below the target: it stands in for one more polishing step. */
+const ESTIMATE_MARGIN = 1e-3;
+
+export interface RefineBounds {
+  lowHz: number;
+  highHz: number;
+  /** Longest Newton step, Hz (about a local mode spacing). */
+  maxStepHz: number;
+  /** Lowest imaginary part allowed, Hz (slightly below the real axis). */
+  floorImHz: number;
+  /** Highest damping as a fraction of the real part (Q >= 1 / (2 ratio)). */
+  maxDampingRatio: number;
+  /** Known zeros within this distance (real part) are deflated. */
+  deflationWindowHz: number;
+}
+
+/** Refined zero from (seedRe, seedIm); previousStepHz is the size of the step that produced the seed. Null if it fails or leaves bounds. */
+export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: number, previousStepHz: number, found: ZeroList, bounds: RefineBounds): NaturalFrequency | null {
+  let zRe = seedRe;
+  let zIm = seedIm;
+  let previousStepSize = previousStepHz;
+  for (let iteration = 0; iteration < MAX_NEWTON_ITERATIONS; iteration++) {
+    evaluator.characteristic(zRe, zIm, true);
+    const valueRe = evaluator.valueRe;
+    const valueIm = evaluator.valueIm;
+    const valueNorm = valueRe * valueRe + valueIm * valueIm;
+    if (valueNorm === 0) {
+      const exact = evaluator.derivativeRe !== 0 || evaluator.derivativeIm !== 0;
+      return exact ? { frequencyHz: zRe, dampingHz: zIm } : null;
+    }
+    // Logarithmic derivative D'/D, deflated by the zeros already found nearby.
+    const ratioRe = (evaluator.derivativeRe * valueRe + evaluator.derivativeIm * valueIm) / valueNorm;
+    const ratioIm = (evaluator.derivativeIm * valueRe - evaluator.derivativeRe * valueIm) / valueNorm;
+    if (!found.deflate(zRe, zIm, ratioRe, ratioIm, bounds.deflationWindowHz)) return null;
+    const deflatedRe = found.ratioRe;
+    const deflatedIm = found.ratioIm;
+    const ratioNorm = deflatedRe * deflatedRe + deflatedIm * deflatedIm;
+    if (ratioNorm === 0) return null;
+    let stepRe = -deflatedRe / ratioNorm;
+    let stepIm = deflatedIm / ratioNorm;
+    const stepSize = Math.hypot(stepRe, stepIm);
+    if (stepSize > bounds.maxStepHz) {
+      stepRe *= bounds.maxStepHz / stepSize;
+      stepIm *= bounds.maxStepHz / stepSize;
+    }
+    zRe += stepRe;
+    zIm += stepIm;
+    if (zRe < bounds.lowHz || zRe > bounds.highHz || zIm > bounds.maxDampingRatio * zRe || zIm < bounds.floorImHz) return null;
+    const toleranceHz = Math.max(CONVERGED_FLOOR_HZ, CONVERGED_RELATIVE * zRe);
+    if (stepSize < toleranceHz) return { frequencyHz: zRe, dampingHz: zIm };
+    // Quadratic regime: e_(n+1) ~ C e_n^2 with C ~ s_n / s_(n-1)^2, so the error left after this step is
+    // ~ s_n^3 / s_(n-1)^2; with a wide margin it replaces one more evaluation.
+    const quadratic = stepSize < QUADRATIC_STEP_RATIO * previousStepSize;
+    if (quadratic && (stepSize * stepSize * stepSize) / (previousStepSize * previousStepSize) < ESTIMATE_MARGIN * toleranceHz) {
+      return { frequencyHz: zRe, dampingHz: zIm };
+    }
+    // Near a simple zero Newton's steps shrink quadratically; a seed whose steps stop shrinking is abandoned.
+    if (iteration >= 6 && stepSize > 0.5 * previousStepSize) return null;
+    previousStepSize = stepSize;
+  }
+  return null;
+}
