@@ -6,6 +6,9 @@ import PgBoss from 'pg-boss';
 import type { Transaction } from 'sequelize';
 import { JOB_QUEUES, type JobData, type JobName } from './names';
 
+/** How often the job worker looks for jobs whose worker died, s. */
+const MAINTENANCE_S = 15;
+
 const holder = globalThis as typeof globalThis & { antinodeJobs?: Promise<PgBoss> };
 
 /** Connection string of the app's database (the job tables live beside the app's own). */
@@ -19,14 +22,18 @@ async function startQueue(role: 'sender' | 'worker'): Promise<PgBoss> {
     schema: 'pgboss',
     application_name: `antinode-jobs-${role}`,
     max: role === 'worker' ? 4 : 2,
-    // Only the job worker keeps the queue tidy (expires stuck jobs, archives finished ones).
+    // Only the job worker keeps the queue tidy: every 15 s it hands a job whose worker died (past
+    // its expireInSeconds) back for a retry, and archives finished ones.
     supervise: role === 'worker',
+    maintenanceIntervalSeconds: MAINTENANCE_S,
     schedule: false,
   });
   boss.on('error', (error) => console.error(`[jobs] ${error.message}`));
   await boss.start();
   for (const [name, options] of Object.entries(JOB_QUEUES)) {
     if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, ...options });
+    // A worker brings the stored retry and expiry settings up to date with names.ts (a new release's).
+    else if (role === 'worker') await boss.updateQueue(name, { name, ...options });
   }
   return boss;
 }
