@@ -21,8 +21,9 @@ export const MAIL_JOBS = ['sign-up-mail', 'password-reset-mail', 'send-mail'] as
 
 /** Retries with exponential backoff from retryDelay seconds; a job running past expireInSeconds is taken as lost and retried. */
 export const JOB_QUEUES: Record<JobName, { retryLimit: number; retryDelay: number; retryBackoff: boolean; expireInSeconds: number; policy?: 'standard' | 'stately' }> = {
-  // a render takes seconds; one running a minute is taken as lost (its worker died) and tried again
-  'render-schedule': { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
+  // a 20-run render took 55 s on a busy 2-core machine (npm run bench); one running three minutes
+  // is taken as lost (its worker died) and tried again
+  'render-schedule': { retryLimit: 3, retryDelay: 5, retryBackoff: true, expireInSeconds: 180 },
   'analyse-plan': { retryLimit: 2, retryDelay: 10, retryBackoff: true, expireInSeconds: 120, policy: 'stately' },
   // a mail server away for a while: waits of 15–30 s, doubling each try, up to 16–32 minutes (under an hour in all)
   'send-mail': { retryLimit: 7, retryDelay: 15, retryBackoff: true, expireInSeconds: 60 },

@@ -149,14 +149,14 @@ describe('two web instances and a job worker on one database', () => {
     expect(await mailsTo(resetFor)).toEqual([]);
 
     worker = await startWorker('worker-2');
-    // the lost job is handed back once it expires (60 s) at the next maintenance (every 15 s)
+    // the lost job is handed back once it expires (180 s) at the next maintenance (every 15 s)
     const issued = await until('the schedule being issued by the new worker', async () => {
       const row = await Schedule.findByPk(schedule.id);
       return row?.status === 'issued' ? row : null;
-    }, 150_000);
+    }, 270_000);
     const bytes = Buffer.from(await (await send(second, 'GET', `/api/v1/schedules/${schedule.id}`, { cookie })).arrayBuffer());
     expect(createHash('sha256').update(bytes).digest('hex')).toBe(issued.sha256);
     const mails = await until('the reset mail', async () => { const found = await mailsTo(resetFor); return found.length > 0 ? found : null; }, 30_000);
     expect(mails.map((mail) => mail.subject)).toHaveLength(1);
-  }, 240_000);
+  }, 360_000);
 });
