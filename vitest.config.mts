@@ -20,6 +20,19 @@ export default defineConfig({
           hookTimeout: 60000,
         },
       },
+      {
+        extends: true,
+        // Real app processes (web instances on the test build, job workers): npm test runs these after the build.
+        test: {
+          name: 'processes',
+          include: ['tests/processes/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          globalSetup: ['tests/integration/global-setup.ts'],
+          testTimeout: 180000,
+          hookTimeout: 180000,
+        },
+      },
     ],
   },
 });

@@ -1,5 +1,5 @@
 import pg from 'pg';
-import { Sequelize } from 'sequelize';
+import { ConnectionError, Sequelize } from 'sequelize';
 
 // One Sequelize instance per process. The connection string comes from the environment;
 // `npm start` and `npm test` write it for the cluster they start.
@@ -13,6 +13,19 @@ const CONNECTION_LOST = [
   /ECONNREFUSED/,
   /ECONNRESET/,
 ];
+
+/** PostgreSQL's error classes for a lost or refused connection: 08 (connection exception), 57P01–57P03 (shut down, starting). */
+const CONNECTION_CODES = /^(08...|57P0[123]|ECONNREFUSED|ECONNRESET|ETIMEDOUT|EHOSTUNREACH)$/;
+
+/** Whether an error means the database could not be reached (not that a query was wrong). */
+export function isDatabaseUnreachable(error: unknown, depth = 0): boolean {
+  if (!error || typeof error !== 'object' || depth > 4) return false;
+  if (error instanceof ConnectionError) return true;
+  const { message, code, parent, original, cause } = error as { message?: unknown; code?: unknown; parent?: unknown; original?: unknown; cause?: unknown };
+  if (typeof code === 'string' && CONNECTION_CODES.test(code)) return true;
+  if (typeof message === 'string' && CONNECTION_LOST.some((pattern) => pattern.test(message))) return true;
+  return [parent, original, cause].some((inner) => inner !== error && isDatabaseUnreachable(inner, depth + 1));
+}
 
 /** A Sequelize instance with the app's settings (the app uses one per process: `sequelize` below). */
 export function createSequelize(url = process.env.DATABASE_URL ?? 'postgres://antinode@127.0.0.1:54329/antinode'): Sequelize {

@@ -17,12 +17,15 @@ reset_database antinode_bench
 prepare_database antinode_bench
 export ANTINODE_DIST_DIR=.next-bench
 BENCH_PORT="${ANTINODE_BENCH_PORT:-3200}"
+# Schedules are stored in the file store: the test profile's fakes (mail, store, payments).
+start_fakes test
 step "Building the app for the editor benchmark"
 build_app bench-build.log
-# The bench measures the server, not the per-person rate limit: one person sends every request here.
+export ANTINODE_BASE_URL="http://localhost:$BENCH_PORT"
 start_jobs_worker bench
+# The bench measures the server, not the per-person rate limit: one person sends every request here.
 # It stands behind a "proxy" on loopback, so the account bench can send each request as its own client.
-ANTINODE_ANALYSIS_RATE_PER_MINUTE=1000000 ANTINODE_TRUSTED_PROXIES=127.0.0.1 ANTINODE_BASE_URL="http://localhost:$BENCH_PORT" \
+ANTINODE_ANALYSIS_RATE_PER_MINUTE=1000000 ANTINODE_TRUSTED_PROXIES=127.0.0.1 \
   node scripts/serve.mjs --port "$BENCH_PORT" --host 127.0.0.1 >"$DATA_DIR/bench-server.log" 2>&1 &
 SERVER_PID=$!
 trap 'kill $SERVER_PID 2>/dev/null; stop_pid_file "$DATA_DIR/jobs-bench.pid" "the job worker (bench)"' EXIT
@@ -37,6 +40,9 @@ ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" node node_modules/tsx/dist/cli
 
 step "Account answers: an address with an account and one without (reset, sign-up)"
 ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/accounts/run.ts || fail "the account benchmark failed"
+
+step "Background jobs: schedules issued through the job worker, and the web answers meanwhile"
+ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/jobs/run.ts || fail "the job benchmark failed"
 
 step "Treatment schedule PDF"
 # @react-pdf/renderer ships ES modules only, so the benchmark is bundled (packages stay external) and run as ESM.

@@ -28,6 +28,11 @@ node node_modules/vitest/vitest.mjs run --project integration || fail "integrati
 step "Building the app for the browser tests"
 build_app test-build.log
 
+step "Tests with several app processes (web instances and job workers on the build)"
+node node_modules/vitest/vitest.mjs run --project processes || fail "the tests with several app processes failed" "their output is in .data/processes-*.log"
+
+# The worker writes the links in mails: the address the browser tests use (playwright.config.ts).
+export ANTINODE_BASE_URL="http://localhost:${ANTINODE_E2E_PORT:-3100}"
 start_jobs_worker test
 trap 'stop_pid_file "$DATA_DIR/jobs-test.pid" "the job worker (test)"' EXIT
 

@@ -9,7 +9,7 @@ import { AppError } from '@/lib/errors';
 import { isSpent, spend, throttledError } from '@/lib/http/rate-limit';
 import { RATE_LIMIT_RULES } from '@/lib/http/rate-limit-rules';
 import { emailChangedMail } from '@/lib/mail/messages';
-import { sendMail } from '@/lib/mail/send';
+import { queueMail } from '@/lib/mail/queue';
 import { appUrl } from '@/lib/tokens';
 import { PasswordReset, Session, User } from '@/models';
 
@@ -58,8 +58,8 @@ export async function changeEmail(userId: string, sessionId: string, currentPass
     throw error;
   }
   // Tell the old address, so a change nobody asked for does not go unnoticed.
-  await sendMail(emailChangedMail({ to: previous, newEmail: email, link: appUrl('/forgotten-password') })).catch((error: unknown) => {
-    console.error('[mail] e-mail change notice not sent', error);
+  await queueMail('e-mail change notice', emailChangedMail({ to: previous, newEmail: email, link: appUrl('/forgotten-password') })).catch((error: unknown) => {
+    console.error('[mail] e-mail change notice not queued', error);
   });
   return email;
 }

@@ -1,6 +1,6 @@
 // Forgotten passwords. The request answers the same whether or not the address has an
-// account, at once: looking the address up and sending the mail happen after the answer
-// (lib/jobs/after-answer.ts), so neither shows in how long it takes. The mailed link works once,
+// account, at once: it only queues a password-reset-mail job; looking the address up and sending
+// the mail are the job worker's (lib/jobs/), so neither shows in how long the request takes. The mailed link works once,
 // for an hour, and only its hash is stored. Requests from one client address, and mails to one
 // account, have budgets (lib/http/rate-limit-rules.ts).
 import { Op } from 'sequelize';
@@ -10,9 +10,10 @@ import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
 import { addressKey } from '@/lib/http/client-address';
 import { consumeRateLimit, spend } from '@/lib/http/rate-limit';
-import { afterAnswer } from '@/lib/jobs/after-answer';
+import type { JobData } from '@/lib/jobs/names';
+import { followUpJobId, jobExists, sendJob } from '@/lib/jobs/queue';
 import { passwordResetMail } from '@/lib/mail/messages';
-import { sendMail } from '@/lib/mail/send';
+import { queueMail } from '@/lib/mail/queue';
 import { appUrl, hashLinkToken, newLinkToken } from '@/lib/tokens';
 import { PasswordReset, Session, User } from '@/models';
 
@@ -22,29 +23,35 @@ const MIN_GAP_MS = 60_000; // at most one mail a minute per account
 export const RESET_REQUESTED_MESSAGE =
   'If an account uses that address, a link to choose a new password is on its way. It works once, within an hour.';
 
-async function mailReset(email: string, now: Date): Promise<void> {
-  const user = await User.findOne({ where: { email } });
-  if (!user) return;
+/**
+ * The password-reset-mail job: for an address with an account, within its budgets, a new link and
+ * its mail, queued together. A job run twice queues its mail once.
+ */
+export async function passwordResetMailJob(job: { id: string; data: JobData['password-reset-mail'] }): Promise<{ outcome: string }> {
+  const now = new Date(job.data.requestedAt);
+  const mailJobId = followUpJobId(job.id, 'mail');
+  if (await jobExists('send-mail', mailJobId)) return { outcome: 'already queued' };
+  const user = await User.findOne({ where: { email: job.data.email } });
+  if (!user) return { outcome: 'no account' };
   const recent = await PasswordReset.count({ where: { userId: user.id, createdAt: { [Op.gt]: new Date(now.getTime() - MIN_GAP_MS) } } });
-  if (recent > 0) return;
+  if (recent > 0) return { outcome: 'a link went less than a minute ago' };
   if (!(await spend('resetMailsPerAccount', user.id)).allowed) {
     console.warn('[mail] password reset not sent: the account has had its reset mails for the day');
-    return;
+    return { outcome: 'over the account budget' };
   }
   const { token, tokenHash } = newLinkToken();
   const expiresAt = new Date(now.getTime() + RESET_LINK_MINUTES * 60_000);
-  await PasswordReset.create({ userId: user.id, tokenHash, expiresAt });
-  try {
-    await sendMail(passwordResetMail({ to: user.email, link: appUrl(`/reset-password?token=${encodeURIComponent(token)}`), expiresAt }));
-  } catch (error) {
-    console.error('[mail] password reset not sent', error); // the answer has gone: the log is all that can know
-  }
+  await sequelize.transaction(async (transaction) => {
+    await PasswordReset.create({ userId: user.id, tokenHash, expiresAt }, { transaction });
+    await queueMail('password reset link', passwordResetMail({ to: user.email, link: appUrl(`/reset-password?token=${encodeURIComponent(token)}`), expiresAt }), { id: mailJobId, transaction });
+  });
+  return { outcome: 'link' };
 }
 
-/** Counts against the client's budget (429 past it, the same for every address), then answers. */
+/** Counts against the client's budget (429 past it, the same for every address), queues the lookup, answers. */
 export async function requestPasswordReset(email: string, clientAddress: string | null, now = new Date()): Promise<void> {
   await consumeRateLimit('resetPerAddress', addressKey(clientAddress));
-  afterAnswer('password reset mail', () => mailReset(email, now));
+  await sendJob('password-reset-mail', { email, requestedAt: now.toISOString() });
 }
 
 // Sets the new password, uses up the link (and any other open link), ends every session. The

@@ -5,6 +5,7 @@ import { z } from 'zod';
 import { actorFromSessionId, sessionIdFromCookieHeader, type Actor, type TeamMembership } from '@/lib/auth/actor';
 import { actorFromBearer, bearerToken } from '@/lib/auth/api-tokens';
 import { assertMayAct } from '@/lib/auth/may-act';
+import { isDatabaseUnreachable } from '@/lib/db';
 import { AppError, notSignedIn } from '@/lib/errors';
 import type { Action } from '@/lib/permissions';
 import { zodToAppError } from '@/lib/validation';
@@ -66,6 +67,10 @@ export function jsonText(text: string, status = 200): Response {
   return new Response(text, { status, headers: { 'content-type': 'application/json' } });
 }
 
+/** What a request meets while PostgreSQL is down or restarting (503; the editor keeps its edits and saves again). */
+export const DATABASE_UNREACHABLE = 'The server cannot reach its database just now; it may be restarting. Try again in a few seconds.';
+const DATABASE_RETRY_AFTER_S = 5;
+
 export function errorResponse(error: unknown): Response {
   if (error instanceof AppError) {
     const headers: Record<string, string> = {};
@@ -74,6 +79,10 @@ export function errorResponse(error: unknown): Response {
   }
   if (error instanceof z.ZodError) return errorResponse(zodToAppError(error));
   if (error instanceof RangeError) return errorResponse(new AppError('bad_input', error.message));
+  if (isDatabaseUnreachable(error)) {
+    console.warn('[api] the database is not answering:', error instanceof Error ? error.message : error);
+    return errorResponse(new AppError('busy', DATABASE_UNREACHABLE, { retryAfterS: DATABASE_RETRY_AFTER_S }));
+  }
   console.error('[api] unexpected error', error);
   return json({ error: { code: 'internal', message: 'Something went wrong on the server. Nothing was changed; try again.' } }, 500);
 }

@@ -1,12 +1,18 @@
 // Which function works each kind of job (the job worker registers these with the queue).
 import type PgBoss from 'pg-boss';
+import { passwordResetMailJob } from '@/lib/account/recovery';
+import { signUpMailJob } from '@/lib/auth/sign-up';
 import { analysePlanJob } from './analyse-plan';
 import type { JobData, JobName } from './names';
 import { renderScheduleJob } from './render-schedule';
+import { sendMailJob } from './send-mail';
 
 export const JOB_HANDLERS: { [N in JobName]: (job: PgBoss.JobWithMetadata<JobData[N]>) => Promise<unknown> } = {
   'render-schedule': renderScheduleJob,
   'analyse-plan': (job) => analysePlanJob(job.data),
+  'send-mail': sendMailJob,
+  'sign-up-mail': signUpMailJob,
+  'password-reset-mail': passwordResetMailJob,
 };
 
 /** Registers every handler with the queue: one job at a time per kind, looking for new ones every `pollS` seconds. */

@@ -75,7 +75,7 @@ export async function issueSchedule(teamId: string, actor: ActivityActor, revisi
   const revision = await getRevisionById(teamId, revisionId);
   const row = await Schedule.create({ teamId, revisionId: revision.id, status: 'rendering', issuedById: actor.id, issuedByName: actor.name, createdAt: new Date() });
   try {
-    await sendJob('render-schedule', { scheduleId: row.id, teamId }, row.id);
+    await sendJob('render-schedule', { scheduleId: row.id, teamId }, { key: row.id });
   } catch (error) {
     await row.update({ status: 'failed', failure: 'The schedule could not be queued for rendering (the job queue did not answer). Issue it again in a minute; if it fails again, tell your team admin.' });
     console.error(`[schedules] schedule ${row.id} not queued:`, error);

@@ -2,7 +2,7 @@
 // team's billing row so two admins cannot both take the last seat. Only an account whose own
 // address is confirmed may invite. Each mail counts against the team's budget and the
 // recipient's (from any team), "Send again" waits 10 minutes after each mail of an invitation
-// (lib/http/rate-limit-rules.ts), and the mail goes after the answer (lib/jobs/after-answer.ts).
+// (lib/http/rate-limit-rules.ts), and the mail is queued with the change (the send-mail job).
 import { Op, type Transaction } from 'sequelize';
 import { recordAudit, type AuditActor } from '@/lib/audit/record';
 import { billingRow, standingOf } from '@/lib/billing/standing';
@@ -10,9 +10,8 @@ import { sequelize } from '@/lib/db';
 import { AppError, notFound } from '@/lib/errors';
 import { emailKey, isSpent, spend, throttledError, type RateLimitName } from '@/lib/http/rate-limit';
 import { RATE_LIMIT_RULES } from '@/lib/http/rate-limit-rules';
-import { afterAnswer } from '@/lib/jobs/after-answer';
 import { invitationMail } from '@/lib/mail/messages';
-import { sendMail } from '@/lib/mail/send';
+import { queueMail } from '@/lib/mail/queue';
 import { ROLE_LABELS, type Role } from '@/lib/permissions';
 import { appUrl, newLinkToken } from '@/lib/tokens';
 import { Invitation, Membership, User } from '@/models';
@@ -47,9 +46,10 @@ export async function listInvitations(teamId: string): Promise<InvitationSummary
   return rows.map((row) => toSummary(row));
 }
 
-function mailInvitation(row: Invitation, token: string): void {
+/** Queues the invitation's mail in the transaction that issued its link: both happen, or neither. */
+async function mailInvitation(row: Invitation, token: string, transaction: Transaction): Promise<void> {
   const mail = invitationMail({ to: row.email, role: row.role, link: appUrl(`/invitation?token=${encodeURIComponent(token)}`), expiresAt: row.expiresAt });
-  afterAnswer('invitation mail', () => sendMail(mail));
+  await queueMail('invitation', mail, { transaction });
 }
 
 export const UNCONFIRMED_INVITER =
@@ -97,9 +97,9 @@ export async function createInvitation(teamId: string, inviter: AuditActor, inpu
     );
     await spendMailBudgets(mailBudgets(teamId, input.email, created.id));
     await recordAudit({ teamId, actor: inviter, action: 'invitation.sent', subject: `${input.email} as ${ROLE_LABELS[input.role]}` }, transaction);
+    await mailInvitation(created, token, transaction);
     return created;
   });
-  mailInvitation(row, token);
   return toSummary(row, now);
 }
 
@@ -127,9 +127,9 @@ export async function resendInvitation(teamId: string, inviter: AuditActor, invi
     await spendMailBudgets(mailBudgets(teamId, found.email, found.id));
     await found.update({ tokenHash, expiresAt: new Date(now.getTime() + INVITATION_DAYS * DAY_MS) }, { transaction });
     await recordAudit({ teamId, actor: inviter, action: 'invitation.resent', subject: found.email }, transaction);
+    await mailInvitation(found, token, transaction);
     return found;
   });
-  mailInvitation(row, token);
   return toSummary(row, now);
 }
 

@@ -66,7 +66,7 @@ export async function planAnalysisOf(plan: Pick<PlanView, 'id' | 'document' | 'm
 export async function askForAnalysisAhead(planId: string, teamId: string | null, delayS = 0): Promise<void> {
   if (!teamId) return;
   try {
-    await sendJob('analyse-plan', { planId, teamId }, planId, delayS);
+    await sendJob('analyse-plan', { planId, teamId }, { key: planId, delayS });
   } catch (error) {
     console.warn(`[analysis] plan ${planId} was not queued for analysis ahead:`, error instanceof Error ? error.message : error);
   }

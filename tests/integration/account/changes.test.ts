@@ -2,15 +2,17 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { changeEmail, changePassword } from '@/lib/account/changes';
 import { signIn, startSession } from '@/lib/auth/accounts';
 import { sequelize } from '@/lib/db';
+import { stopJobQueue } from '@/lib/jobs/queue';
 import { AppError } from '@/lib/errors';
 import { Session } from '@/models';
 import { mailsTo } from '../helpers/inbox';
+import { workWaitingJobs } from '../helpers/jobs';
 import { createTestTeam, TEST_PASSWORD, uniqueEmail } from '../helpers/people';
 import { FILE_PEER } from '../helpers/routes';
 
 const here = { address: FILE_PEER, deviceToken: null };
 
-afterAll(async () => { await sequelize.close(); });
+afterAll(async () => { await stopJobQueue(); await sequelize.close(); });
 
 describe('account changes', () => {
   it('wrong current passwords are budgeted per session (5) and per account (10): a stolen session cannot guess on', async () => {
@@ -55,6 +57,7 @@ describe('account changes', () => {
     const fresh = uniqueEmail('moved');
     const previous = members.engineer.email;
     await expect(changeEmail(members.engineer.id, sessionId, TEST_PASSWORD, fresh)).resolves.toBe(fresh);
+    await workWaitingJobs();
     expect((await mailsTo(previous)).map((mail) => mail.subject)).toEqual(['Your Antinode e-mail address was changed']);
     await expect(signIn(fresh, TEST_PASSWORD, here)).resolves.toMatchObject({ session: { name: 'antinode_session' } });
   });

@@ -1,20 +1,20 @@
 // Sign-up reveals nothing about which addresses have accounts: the same answer, given before any
-// lookup or mail (the mail goes after the answer); an account exists only once its address is
+// lookup or mail (a job looks the address up and queues the mail); an account exists only once its address is
 // confirmed from the mailed link. Not revealing whether an account exists: OWASP Authentication
 // Cheat Sheet ("Authentication and error messages": account creation). The budgets (10 sign-ups
 // an hour per address, 3 sign-up mails a day per recipient) are product rules.
-import { afterAll, afterEach, describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { POST as signUp } from '@/app/api/v1/sign-ups/route';
 import { POST as confirm } from '@/app/api/v1/sign-ups/confirm/route';
 import { sequelize } from '@/lib/db';
-import { allAnswered, jobsAfterAnswer, pauseAfterAnswer } from '@/lib/jobs/after-answer';
+import { stopJobQueue } from '@/lib/jobs/queue';
+import { waitingJobs, workWaitingJobs } from '../helpers/jobs';
 import { Membership, Session, SignUpRequest, Team, User } from '@/models';
 import { lastLinkTo, mailsTo } from '../helpers/inbox';
 import { createTestTeam, uniqueEmail } from '../helpers/people';
 import { call, freshPeer } from '../helpers/routes';
 
-afterAll(async () => { await sequelize.close(); });
-afterEach(() => pauseAfterAnswer(false));
+afterAll(async () => { await stopJobQueue(); await sequelize.close(); });
 
 
 function form(email: string, extra: Partial<Record<'name' | 'teamName', string>> = {}) {
@@ -27,13 +27,14 @@ describe('sign-up', () => {
     const taken = members.viewer.email;
     const fresh = uniqueEmail('fresh');
     const usersBefore = await User.count();
-    await allAnswered();
-    pauseAfterAnswer(true);
+    await workWaitingJobs(); // what earlier tests left
     const forFresh = await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(fresh), headers: freshPeer() });
     const forTaken = await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(taken), headers: freshPeer() });
-    // Answered with nothing looked up, stored or sent yet: the two answers cannot differ in time
-    // by a lookup, a password hash or a mail.
-    expect(jobsAfterAnswer()).toBe(2);
+    // Answered with nothing looked up, stored or sent yet, one job waiting for each (the job worker
+    // is not running here): the two answers did the same steps, so cannot differ in time by a
+    // lookup, a stored request or a mail.
+    expect(await waitingJobs(['sign-up-mail'])).toBe(2);
+    expect(await waitingJobs(['send-mail'])).toBe(0);
     expect(await SignUpRequest.count({ where: { email: fresh } })).toBe(0);
     expect(await mailsTo(fresh)).toEqual([]);
     expect(await mailsTo(taken)).toEqual([]);
@@ -43,8 +44,7 @@ describe('sign-up', () => {
     expect(forFresh.headers.get('set-cookie')).toBeNull();
     expect(forTaken.headers.get('set-cookie')).toBeNull();
 
-    pauseAfterAnswer(false);
-    await allAnswered();
+    expect(await workWaitingJobs()).toBe(4); // two lookups, then two mails
     expect(await User.count()).toBe(usersBefore); // nothing exists until the link is used
     expect((await mailsTo(fresh)).map((mail) => mail.subject)).toEqual(['Confirm your address to create your Antinode account']);
     const notice = await mailsTo(taken);
@@ -55,7 +55,7 @@ describe('sign-up', () => {
   it('the mailed link creates the account, confirmed, with its team, and signs in; once', async () => {
     const email = uniqueEmail('confirm');
     await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(email, { teamName: 'Quayside Acoustics' }), headers: freshPeer() });
-    await allAnswered();
+    await workWaitingJobs();
     const token = await lastLinkTo(email, '/sign-up/confirm');
     const joined = await call(confirm, 'POST', '/api/v1/sign-ups/confirm', { body: { token } });
     expect(joined.status).toBe(201);
@@ -79,7 +79,7 @@ describe('sign-up', () => {
     await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(fresh, spam), headers: freshPeer() });
     const { members } = await createTestTeam('spam-taken');
     await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(members.viewer.email, spam), headers: freshPeer() });
-    await allAnswered();
+    await workWaitingJobs();
     for (const mail of [...(await mailsTo(fresh)), ...(await mailsTo(members.viewer.email))]) {
       expect(`${mail.subject}\n${mail.text}`).not.toContain('spam.example');
     }
@@ -95,7 +95,7 @@ describe('sign-up', () => {
     const refused = await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(uniqueEmail('burst-late')), headers });
     expect(refused.headers.get('retry-after')).toMatch(/^\d+$/);
     expect(refused.body).toMatchObject({ error: { code: 'throttled', message: expect.stringMatching(/^Too many sign-ups from your network\. Try again in /) } });
-    await allAnswered();
+    await workWaitingJobs();
   });
 
   it('one recipient gets at most 3 sign-up mails a day, however many addresses ask', async () => {
@@ -103,7 +103,7 @@ describe('sign-up', () => {
     for (let index = 0; index < 6; index += 1) {
       expect((await call(signUp, 'POST', '/api/v1/sign-ups', { body: form(target), headers: freshPeer() })).status).toBe(202);
     }
-    await allAnswered();
+    await workWaitingJobs();
     expect(await mailsTo(target)).toHaveLength(3);
   });
 });

@@ -17,6 +17,7 @@ import { issueSchedule } from '@/lib/schedules/data';
 import { PlanActivity, PlanAnalysisRow, Schedule } from '@/models';
 import { createTestTeam, type TestTeam } from '../helpers/people';
 import { recitalPlan, submitted } from '../helpers/revisions';
+import { until } from '../helpers/until';
 
 let t: TestTeam;
 let projectId: string;
@@ -28,16 +29,6 @@ beforeAll(async () => {
   await workAllQueues(await jobQueue('worker'), 0.5);
 });
 afterAll(async () => { await stopJobQueue(); await closeComputePool(); await sequelize.close(); });
-
-async function until<T>(what: string, read: () => Promise<T | null | undefined | false>, timeoutMs = 90_000): Promise<T> {
-  const started = Date.now();
-  for (;;) {
-    const value = await read();
-    if (value) return value;
-    if (Date.now() - started > timeoutMs) throw new Error(`${what} did not happen within ${timeoutMs / 1000} s`);
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-}
 
 const issuedEntries = (planId: string) => PlanActivity.count({ where: { teamId: t.team.id, planId, kind: 'schedule.issued' } });
 

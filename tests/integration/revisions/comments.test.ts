@@ -2,11 +2,13 @@
 // member (unless they turned it off); viewers may not write.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '@/lib/db';
+import { stopJobQueue } from '@/lib/jobs/queue';
 import { listPlanActivity } from '@/lib/activity/data';
 import { setNotificationSetting } from '@/lib/notifications/settings';
 import { createProject } from '@/lib/projects/data';
 import { call } from '../helpers/routes';
 import { mailsTo } from '../helpers/inbox';
+import { workWaitingJobs } from '../helpers/jobs';
 import { createTestTeam, type TestTeam } from '../helpers/people';
 import { planWithRuns, submitted } from '../helpers/revisions';
 import { GET as list, POST as write } from '@/app/api/v1/comments/route';
@@ -22,7 +24,7 @@ beforeAll(async () => {
   planId = await planWithRuns(t, project.id, 1);
   revisionId = (await submitted(t, planId)).id;
 });
-afterAll(async () => { await sequelize.close(); });
+afterAll(async () => { await stopJobQueue(); await sequelize.close(); });
 
 describe('comments', () => {
   it('pins, answers, resolves, reopens, and mails mentions', async () => {
@@ -37,6 +39,7 @@ describe('comments', () => {
     expect(pinned.status).toBe(201);
     expect(pinned.body).toMatchObject({ mailed: 2 });
     const commentId = (pinned.body as { comment: { id: string } }).comment.id;
+    await workWaitingJobs();
     const mail = (await mailsTo(t.members.acoustician.email)).at(-1);
     expect(mail?.subject).toContain('mentioned you');
     expect(mail?.text).toContain(`/plans/${planId}/revisions/1?comment=${commentId}`);

@@ -5,12 +5,14 @@
 // no source); what each needs is the product's rule (lib/reviews/outcome.ts).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sequelize } from '@/lib/db';
+import { stopJobQueue } from '@/lib/jobs/queue';
 import { savePlanDocument, getPlan } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
 import { getRevisionByNumber, latestRevision } from '@/lib/revisions/data';
 import { reviewRows } from '@/lib/revisions/rows';
 import { call } from '../helpers/routes';
 import { mailsTo } from '../helpers/inbox';
+import { workWaitingJobs } from '../helpers/jobs';
 import { createTestTeam, type TestTeam } from '../helpers/people';
 import { recitalPlan } from '../helpers/revisions';
 import { POST as submit, GET as list } from '@/app/api/v1/plans/[planId]/revisions/route';
@@ -29,7 +31,7 @@ beforeAll(async () => {
   const project = await createProject(t.team.id, t.members.acoustician.id, { name: PROJECT, site: '' });
   planId = await recitalPlan(t, project.id, PLAN);
 });
-afterAll(async () => { await sequelize.close(); });
+afterAll(async () => { await stopJobQueue(); await sequelize.close(); });
 
 async function submitAs(role: 'acoustician' | 'engineer', note = 'First look: the riser is new') {
   return call(submit, 'POST', `/api/v1/plans/${planId}/revisions`, { cookie: await t.cookieFor(role), params: { planId }, body: { note } });
@@ -42,6 +44,7 @@ describe('revisions and review', () => {
     expect(answer.status).toBe(201);
     const revision = await getRevisionByNumber(t.team.id, planId, 1);
     expect(revision.state).toBe('waiting');
+    await workWaitingJobs();
     const mail = (await mailsTo(t.members.engineer.email)).at(-1);
     expect(mail?.subject).toBe(`Review requested: ${PROJECT}: ${PLAN}, revision 1`);
     expect(mail?.text).toContain('First look: the riser is new');
@@ -94,6 +97,7 @@ describe('revisions and review', () => {
     const late = await call(decide, 'PUT', '/x', { cookie: engineer, params, body: { target: reviewRows(first.analysis, first.extras)[0].target, decision: 'checked' } });
     expect(late.status).toBe(409);
 
+    await workWaitingJobs();
     const mail = (await mailsTo(t.members.acoustician.email)).at(-1);
     expect(mail?.subject).toBe(`Review finished: ${PROJECT}: ${PLAN}, revision 1, revise and resubmit`);
     expect(mail?.text).toContain('Outcome: Revise and resubmit.');
@@ -118,6 +122,7 @@ describe('revisions and review', () => {
     expect(accepted.body).toMatchObject({ revision: { state: 'accepted', number: 2, reviewNote: '' } });
     const listed = await call(list, 'GET', '/x', { cookie: await t.cookieFor('viewer'), params: { planId } });
     expect(listed.body).toMatchObject({ revisions: [{ number: 2, state: 'accepted' }, { number: 1, state: 'revise_resubmit' }] });
+    await workWaitingJobs();
     expect((await mailsTo(t.members.acoustician.email)).at(-1)?.subject).toBe(`Review finished: ${PROJECT}: ${PLAN}, revision 2, accepted`);
 
     const acceptedPlan = await getPlan(t.team.id, planId);

@@ -4,14 +4,15 @@ import { POST as invite } from '@/app/api/v1/team/invitations/route';
 import { POST as resend } from '@/app/api/v1/team/invitations/[invitationId]/resend/route';
 import { DELETE as revoke } from '@/app/api/v1/team/invitations/[invitationId]/route';
 import { sequelize } from '@/lib/db';
-import { allAnswered } from '@/lib/jobs/after-answer';
+import { stopJobQueue } from '@/lib/jobs/queue';
+import { workWaitingJobs } from '../helpers/jobs';
 import { newLinkToken } from '@/lib/tokens';
 import { AuditEvent, Invitation, Membership, Team, User } from '@/models';
 import { lastLinkTo, mailsTo } from '../helpers/inbox';
 import { addMember, createTestTeam, TEST_PASSWORD, uniqueEmail } from '../helpers/people';
 import { call } from '../helpers/routes';
 
-afterAll(async () => { await sequelize.close(); });
+afterAll(async () => { await stopJobQueue(); await sequelize.close(); });
 afterEach(() => { vi.useRealTimers(); });
 
 const DAY_MS = 86_400_000;
@@ -30,7 +31,7 @@ describe('invitations', () => {
     const sent = await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email, role: 'architect' } });
     expect(sent.status).toBe(201);
     const stored = await Invitation.findOne({ where: { teamId: team.id, email } });
-    await allAnswered();
+    await workWaitingJobs();
     const token = await lastLinkTo(email, '/invitation');
     expect(stored!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(stored!.tokenHash).not.toContain(token);
@@ -54,7 +55,7 @@ describe('invitations', () => {
     await User.update({ name: 'Call +1 555 0100 now, visit spam.example' }, { where: { id: members.admin.id } });
     const email = uniqueEmail('spam-invitee');
     expect((await call(invite, 'POST', '/api/v1/team/invitations', { cookie: await cookieFor('admin'), body: { email, role: 'viewer' } })).status).toBe(201);
-    await allAnswered();
+    await workWaitingJobs();
     const [mail] = await mailsTo(email);
     expect(mail.subject).toBe('An invitation to join a team on Antinode');
     expect(`${mail.subject}\n${mail.text}`).not.toMatch(/spam\.example|555 0100|PRIZE/);
@@ -73,13 +74,13 @@ describe('invitations', () => {
     for (let press = 0; press < 10; press += 1) presses.push(await call(resend, 'POST', '/x', { cookie: admin, params: { invitationId } }));
     expect(presses.map((answer) => answer.status)).toEqual(Array<number>(10).fill(429));
     expect(presses[0].body).toMatchObject({ error: { code: 'throttled', message: expect.stringMatching(/^This invitation was sent less than 10 minutes ago\. Give the mail time to arrive; you can send it again in \d+ (s|minutes)\.$/) } });
-    await allAnswered();
+    await workWaitingJobs();
     expect(await mailsTo(email)).toHaveLength(1);
 
     vi.useFakeTimers({ toFake: ['Date'] });
     vi.setSystemTime(Date.now() + 10 * 60_000 + 1000);
     expect((await call(resend, 'POST', '/x', { cookie: admin, params: { invitationId } })).status).toBe(200);
-    await allAnswered();
+    await workWaitingJobs();
     expect(await mailsTo(email)).toHaveLength(2);
   });
 
@@ -96,7 +97,7 @@ describe('invitations', () => {
       if (open) await call(revoke, 'DELETE', '/x', { cookie: admin, params: { invitationId: open.id } });
     }
     expect(statuses).toEqual([201, 201, 201, 429, 429]);
-    await allAnswered();
+    await workWaitingJobs();
     expect(await mailsTo(email)).toHaveLength(3);
   });
 
@@ -112,7 +113,7 @@ describe('invitations', () => {
       if (open) await call(revoke, 'DELETE', '/x', { cookie: admin, params: { invitationId: open.id } });
     }
     expect(statuses).toEqual([...Array<number>(30).fill(201), 429]);
-    await allAnswered();
+    await workWaitingJobs();
   });
 
   it('an account whose own address is not confirmed cannot invite', async () => {
