@@ -32,7 +32,8 @@ export interface PlanCanvasProps {
   widthPx: number;
   heightPx: number;
   background: { url: string; widthPx: number; heightPx: number } | null;
-  gridSpacingPx: number;
+  /** The drawing grid: step and origin, plan pixels. */
+  grid: { spacingPx: number; origin: Point | null };
   metresPerPixel: number;
   selection: Selection;
   editable: boolean;
@@ -253,7 +254,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       <Layer listening={false}>
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
-        <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.gridSpacingPx} scale={view.scale} />
+        <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.grid.spacingPx} origin={props.grid.origin} scale={view.scale} />
       </Layer>
       <Layer>
         {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (
