@@ -26,7 +26,7 @@ import { wallWords } from './panels/walls-field';
 import { SaveStatusLabel } from './save-status';
 import { ScheduleCsvControls } from './schedule-csv-controls';
 import { ToolStrip } from './tool-strip';
-import { mayUseTool, type ToolName } from './tools';
+import { mayUseTool, TOOLS, type ToolName } from './tools';
 import { useAutosave } from './use-autosave';
 import { planGrid, useCanvasTools, type PlanGrid } from './use-canvas-tools';
 import { useModeEnvelope } from './use-mode-envelope';
@@ -143,23 +143,24 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
+  const activeTool = TOOLS.find((candidate) => candidate.name === tool) ?? TOOLS[0];
   const tool_hint = { select: editable ? 'Click to select; drag points or rooms to move them.' : 'Click a segment or room to read it.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know; the grid starts at the first.', origin: 'Click where the grid should start.' }[tool];
 
   return (
     <div className="flex h-full flex-col">
-      <div className="flex flex-wrap items-center gap-x-2 gap-y-1 border-b border-graphite-100 bg-paper px-4 py-2">
-        <nav aria-label="Breadcrumb" className="min-w-0 max-w-[22rem] truncate text-sm text-graphite-500" title={`${plan.project.name} / ${plan.name}`}>
+      <div className="flex flex-nowrap items-center gap-x-2 border-b border-graphite-100 bg-paper px-4 py-2" data-testid="plan-header">
+        <nav aria-label="Breadcrumb" className="min-w-0 max-w-[22rem] shrink truncate text-sm text-graphite-500" title={`${plan.project.name} / ${plan.name}`}>
           <Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}
           <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
         </nav>
         {editable ? <SaveStatusLabel status={model.saveStatus} version={model.version} /> : <span className="rounded bg-paper-sunk px-2 py-0.5 text-xs">Read only</span>}
         <PlanRevisionActions planId={plan.id} latest={revisions.latest} planVersion={model.version} contentHash={model.saveStatus === 'saved' && results.data?.version === model.version ? results.data.contentHash : null} canSubmit={revisions.canSubmit && model.saveStatus === 'saved'} canIssue={revisions.canIssue} />
-        <div className="ml-auto flex items-center gap-2">
+        <div className="ml-auto flex shrink-0 items-center gap-2">
           {editable && (
             <>
               <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)">Undo</button>
               <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)">Redo</button>
-              <BackgroundUpload planId={plan.id} hasBackground={plan.background !== null} />
+              <BackgroundUpload planId={plan.id} backgroundId={plan.background?.id ?? null} />
             </>
           )}
           <UnitSystemToggle unitSystem={unitSystem} />
@@ -177,6 +178,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               background={background}
               grid={grid}
               metresPerPixel={model.metresPerPixel}
+              unitSystem={unitSystem}
               selection={selection}
               editable={model.editable && tool === 'select'}
               panning={tool === 'pan' && !comments.placing}
@@ -194,10 +196,14 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             />
           )}
           <CommentPins view={pinView} />
-          <p className="num pointer-events-none absolute bottom-2 right-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700" title="Plan scale">
-            Scale 1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')} · grid {gridStepWords(unitSystem)}
-          </p>
-          <p className="pointer-events-none absolute bottom-2 left-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700">{comments.placing ? 'Click the plan where the comment belongs.' : tool_hint}</p>
+          <div className="pointer-events-none absolute inset-x-2 bottom-2 flex items-end justify-between gap-2 text-xs text-graphite-700">
+            <p className="min-w-0 rounded bg-paper-raised/90 px-2 py-1" data-testid="active-tool">
+              {comments.placing ? 'Click the plan where the comment belongs.' : <><span className="font-semibold text-select">{activeTool.label} ({activeTool.keys})</span> · {tool_hint}</>}
+            </p>
+            <p className="num shrink-0 rounded bg-paper-raised/90 px-2 py-1" title="Plan scale">
+              Scale 1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')} · grid {gridStepWords(unitSystem)}{doc.gridOrigin ? ' from its origin' : ''}
+            </p>
+          </div>
           {model.notice && model.saveStatus !== 'conflict' && (
             <p role="alert" className="absolute left-1/2 top-2 -translate-x-1/2 rounded border border-risk bg-risk-soft px-3 py-1 text-sm text-risk-ink">
               {model.notice} <button type="button" className="ml-2 underline" onClick={() => dispatch({ type: 'notice', message: null })}>Dismiss</button>
