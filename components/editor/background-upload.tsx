@@ -51,7 +51,7 @@ export function BackgroundUpload({ planId, backgroundId }: { planId: string; bac
     <div className="relative flex items-center gap-2">
       <input ref={input} type="file" accept="image/png,image/jpeg,image/webp,application/pdf" className="sr-only" id="background-file" aria-label="Plan drawing file"
         onChange={(event) => { const file = event.target.files?.[0]; if (file) void upload(file); }} />
-      <label htmlFor="background-file" className={`btn-quiet cursor-pointer ${busy ? 'opacity-50' : ''}`}>{busy ? 'Uploading…' : hasBackground ? 'Replace drawing' : 'Upload drawing'}</label>
+      <label htmlFor="background-file" className={`btn-quiet cursor-pointer whitespace-nowrap ${busy ? 'opacity-50' : ''}`}>{busy ? 'Uploading…' : hasBackground ? 'Replace drawing' : 'Upload drawing'}</label>
       {message && (
         <p role={message.ok ? 'status' : 'alert'} data-testid="upload-message"
           className={`absolute right-0 top-full z-30 mt-1 w-72 rounded border px-2 py-1 text-xs shadow-panel ${message.ok ? 'border-graphite-200 bg-paper-raised text-graphite-700' : 'border-risk bg-risk-soft text-risk-ink'}`}>

@@ -150,7 +150,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
     <div className="flex h-full flex-col">
       <div className="flex flex-nowrap items-center gap-x-2 border-b border-graphite-100 bg-paper px-4 py-2" data-testid="plan-header">
         <nav aria-label="Breadcrumb" className="min-w-0 max-w-[22rem] shrink truncate text-sm text-graphite-500" title={`${plan.project.name} / ${plan.name}`}>
-          <Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}
+          <span className="hidden xl:inline"><Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}</span>
           <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
         </nav>
         {editable ? <SaveStatusLabel status={model.saveStatus} version={model.version} /> : <span className="rounded bg-paper-sunk px-2 py-0.5 text-xs">Read only</span>}
@@ -158,8 +158,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         <div className="ml-auto flex shrink-0 items-center gap-2">
           {editable && (
             <>
-              <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)">Undo</button>
-              <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)">Redo</button>
+              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)"><span aria-hidden="true" className="xl:hidden">↶</span><span className="max-xl:sr-only">Undo</span></button>
+              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)"><span aria-hidden="true" className="xl:hidden">↷</span><span className="max-xl:sr-only">Redo</span></button>
               <BackgroundUpload planId={plan.id} backgroundId={plan.background?.id ?? null} />
             </>
           )}
@@ -200,7 +200,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             <p className="min-w-0 rounded bg-paper-raised/90 px-2 py-1" data-testid="active-tool">
               {comments.placing ? 'Click the plan where the comment belongs.' : <><span className="font-semibold text-select">{activeTool.label} ({activeTool.keys})</span> · {tool_hint}</>}
             </p>
-            <p className="num shrink-0 rounded bg-paper-raised/90 px-2 py-1" title="Plan scale">
+            <p className="num shrink-0 rounded bg-paper-raised/90 px-2 py-1" title="Plan scale" data-testid="plan-scale">
               Scale 1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')} · grid {gridStepWords(unitSystem)}{doc.gridOrigin ? ' from its origin' : ''}
             </p>
           </div>

@@ -45,11 +45,11 @@ export function PlanRevisionActions({ planId, latest, planVersion, contentHash =
           <span className="text-graphite-500">Draft: changed since revision {latest.number}</span>
         )}
       </span>
-      {showListLink && <Link href={revisionsPath(planId)} className="btn-quiet">Revisions</Link>}
+      {showListLink && <Link href={revisionsPath(planId)} className="btn-quiet whitespace-nowrap">Revisions</Link>}
       {canIssue && latest !== null && (
-        <Link href={schedulePath(planId, latest.number)} className="btn-quiet">Issue schedule</Link>
+        <Link href={schedulePath(planId, latest.number)} className="btn-quiet whitespace-nowrap">Issue schedule</Link>
       )}
-      {canSubmit && <button type="button" className="btn-primary" onClick={() => setOpen(true)}>Submit for review</button>}
+      {canSubmit && <button type="button" className="btn-primary whitespace-nowrap" onClick={() => setOpen(true)}>Submit for review</button>}
       {canSubmit && open && <SubmitRevisionDialog planId={planId} onSubmitted={submitted} onClose={() => setOpen(false)} />}
     </div>
   );

@@ -97,7 +97,7 @@ test('imperial air temperature, speed of sound and grid; the scale dialog reads 
   expect((await savedDocument(plan.id)).document.runs[0].temperatureC).toBe(20);
   // c = 343.2 m/s at 20 °C (ISO 9613-1) is 1126.0 ft/s (÷ 0.3048).
   await expect(page.locator('dl[aria-label="Run summary"]')).toContainText('ft/s');
-  await expect(page.getByTitle('Plan scale')).toContainText('grid 1 ft');
+  await expect(page.getByTestId('plan-scale')).toContainText('grid 1 ft');
 
   // The scale from two clicks and a bare "12" (read in ft here: 12 ft = 3.6576 m).
   await page.keyboard.press('k');
@@ -110,7 +110,7 @@ test('imperial air temperature, speed of sound and grid; the scale dialog reads 
   await page.getByLabel('Real distance').fill('12');
   await expect(page.getByRole('dialog').getByTestId('unit-hint')).toHaveText('ft');
   await page.getByRole('button', { name: 'Set scale' }).click();
-  await expect(page.getByTitle('Plan scale')).toContainText('from its origin');
+  await expect(page.getByTestId('plan-scale')).toContainText('from its origin');
   await waitForSaved(page);
   const scaled = await savedDocument(plan.id);
   expect(scaled.metresPerPixel).not.toBe(ROOM_PLAN_METRES_PER_PIXEL);
@@ -124,7 +124,7 @@ test('imperial air temperature, speed of sound and grid; the scale dialog reads 
   const undone = await savedDocument(plan.id);
   expect(undone.metresPerPixel).toBe(ROOM_PLAN_METRES_PER_PIXEL);
   expect(undone.document.gridOrigin).toBeUndefined();
-  await expect(page.getByTitle('Plan scale')).not.toContainText('from its origin');
+  await expect(page.getByTestId('plan-scale')).not.toContainText('from its origin');
 });
 
 test('tool keys work with focus on a side-panel control, and Escape leaves a text field', async ({ page }) => {

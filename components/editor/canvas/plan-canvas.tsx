@@ -174,12 +174,16 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         if (!node || !other || nodeId === dragNodeId) continue;
         const angleRad = Math.atan2(node.y - other.y, node.x - other.x);
         const halfWidthPx = sectionWidthPx(planWidthM(segment.section)) / 2;
-        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={angleRad} termination={termination} scale={view.scale}
-          ductHalfWidthPx={halfWidthPx} otherDucts={ducts.filter((duct) => duct.id !== segment.id).map((duct) => duct.line)} />);
         const endLabel = labels.nodes[nodeId];
+        const namePlace = endLabel ? endNamePlace(node, angleRad, endLabel.length, view.scale, halfWidthPx) : null;
+        const belowName = namePlace && endLabel
+          ? { x: namePlace.x, y: namePlace.y + (END_NAME_FONT_PX * 1.3) / view.scale, centreX: namePlace.x + (endLabel.length * END_NAME_FONT_PX * 0.6) / 2 / view.scale }
+          : null;
+        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={angleRad} termination={termination} scale={view.scale}
+          ductHalfWidthPx={halfWidthPx} otherDucts={ducts.filter((duct) => duct.id !== segment.id).map((duct) => duct.line)} belowName={belowName} />);
         if (endLabel) {
           // beyond the end, along the segment's direction
-          const place = endNamePlace(node, angleRad, endLabel.length, view.scale, halfWidthPx);
+          const place = namePlace!;
           glyphs.push(<Text key={`l${nodeId}`} x={place.x} y={place.y} text={endLabel} fontSize={END_NAME_FONT_PX / view.scale}
             fontFamily="IBM Plex Mono, monospace" fill="#5d626b" listening={false} name="end-label" />);
         }

@@ -41,6 +41,8 @@ export const SegmentLine = memo(function SegmentLine({ id, x1, y1, x2, y2, width
   const sizeX = (x1 + x2) / 2 - (flip * normalX * sizeAwayPx) / scale;
   const sizeY = (y1 + y2) / 2 - (flip * normalY * sizeAwayPx) / scale;
   const thin = widthPx <= 4;
+  // the size only where the segment is long enough on screen to carry it beside the label
+  const showSize = size !== undefined && Math.hypot(x2 - x1, y2 - y1) * scale >= sizeWidthPx + 2 * LABEL_FONT_PX * MONO_EM * (label?.length ?? 0) + 16;
   return (
     <>
       {selected && <Line points={[x1, y1, x2, y2]} stroke="#2d6a96" strokeWidth={(widthPx + 6) / scale} opacity={0.35} lineCap="round" listening={false} perfectDrawEnabled={false} />}
@@ -58,7 +60,7 @@ export const SegmentLine = memo(function SegmentLine({ id, x1, y1, x2, y2, width
         shadowForStrokeEnabled={false}
       />
       {!thin && <Line points={[x1, y1, x2, y2]} stroke="#25282d" strokeWidth={1 / scale} listening={false} perfectDrawEnabled={false} />}
-      {size && (
+      {showSize && (
         <Text x={sizeX} y={sizeY} text={size} fontSize={SIZE_FONT_PX / scale} fontFamily="IBM Plex Mono, monospace" fill="#5d626b"
           offsetX={sizeWidthPx / 2 / scale} offsetY={SIZE_FONT_PX / 2 / scale} listening={false} perfectDrawEnabled={false} name="segment-size" />
       )}

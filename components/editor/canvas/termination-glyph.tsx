@@ -23,13 +23,16 @@ const GLYPH_HALF_PX = 9;
 
 // A shape per end type (never colour alone) drawn at a leaf node, pointing along the duct, and its word on
 // the duct's left-hand side, clear of the duct, the end's name and a room outlet's word (end-word-place.ts).
-// When the left-hand side would cover another duct, the word goes on the right-hand side instead.
-export function TerminationGlyph({ x, y, angleRad, termination, scale, ductHalfWidthPx = 0, otherDucts = [] }: {
+// When the left-hand side would cover another duct, the word goes on the right-hand side; when both
+// would, it goes beyond the end, under the end's name (belowName), where the duct never is.
+export function TerminationGlyph({ x, y, angleRad, termination, scale, ductHalfWidthPx = 0, otherDucts = [], belowName = null }: {
   x: number; y: number; angleRad: number; termination: Termination; scale: number;
   /** Half the duct's drawn width on screen, px. */
   ductHalfWidthPx?: number;
   /** The other ducts on the plan, plan pixels, for keeping the word off them. */
   otherDucts?: readonly DuctLine[];
+  /** Top-left corner of the line under the end's name, plan pixels, and its centre x. */
+  belowName?: { x: number; y: number; centreX: number } | null;
 }) {
   const size = Math.max(GLYPH_HALF_PX, ductHalfWidthPx + 3) / scale;
   const key = terminationKey(termination);
@@ -37,8 +40,11 @@ export function TerminationGlyph({ x, y, angleRad, termination, scale, ductHalfW
   const word = TERMINATION_LABELS[key];
   const { widthPx, heightPx } = endWordSizePx(word.length, WORD_FONT_PX, 0);
   const at = (side: EndWordSide) => endWordPlace({ x, y }, angleRad, side, word.length, WORD_FONT_PX, 0, scale, ductHalfWidthPx);
+  const clear = (corner: { x: number; y: number }) => boxIsClear({ ...corner, width: widthPx / scale, height: heightPx / scale }, otherDucts);
   const left = at('left');
-  const place = boxIsClear({ ...left, width: widthPx / scale, height: heightPx / scale }, otherDucts) ? left : at('right');
+  const right = at('right');
+  const below = belowName ? { x: belowName.centreX - widthPx / 2 / scale, y: belowName.y } : null;
+  const place = clear(left) ? left : clear(right) ? right : below ?? left;
   return (
     <>
     <Text text={word} x={place.x} y={place.y} fontSize={WORD_FONT_PX / scale} fontFamily="IBM Plex Sans, sans-serif" fill="#3a3e45" listening={false} name="termination-word" />
