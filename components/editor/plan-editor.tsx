@@ -158,8 +158,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
         <div className="ml-auto flex shrink-0 items-center gap-2">
           {editable && (
             <>
-              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)"><span aria-hidden="true" className="xl:hidden">↶</span><span className="max-xl:sr-only">Undo</span></button>
-              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)"><span aria-hidden="true" className="xl:hidden">↷</span><span className="max-xl:sr-only">Redo</span></button>
+              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)" aria-label="Undo"><span aria-hidden="true" className="xl:hidden">↶</span><span aria-hidden="true" className="hidden xl:inline">Undo</span></button>
+              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo"><span aria-hidden="true" className="xl:hidden">↷</span><span aria-hidden="true" className="hidden xl:inline">Redo</span></button>
               <BackgroundUpload planId={plan.id} backgroundId={plan.background?.id ?? null} />
             </>
           )}

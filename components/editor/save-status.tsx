@@ -14,7 +14,7 @@ export function SaveStatusLabel({ status, version }: { status: SaveStatus; versi
   const label = LABELS[status];
   return (
     <span role="status" data-testid="save-status" className={`num whitespace-nowrap text-xs ${label.tone}`} title={`Version ${version}`}>
-      <span aria-hidden="true">{label.mark} </span>{label.text}<span className="hidden 2xl:inline"> · version {version}</span>
+      <span aria-hidden="true">{label.mark} </span>{status === 'saved' ? <><span className="xl:hidden">Saved</span><span className="hidden xl:inline">{label.text}</span></> : label.text}<span className="hidden 2xl:inline"> · version {version}</span>
     </span>
   );
 }

@@ -93,6 +93,8 @@ test('imperial air temperature, speed of sound and grid; the scale dialog reads 
   await temperature.fill('20 °C');
   await temperature.press('Enter');
   await expect(temperature).toHaveValue('68.0 °F');
+  // Escape leaves the field, so the next key chooses a tool
+  await temperature.press('Escape');
   await waitForSaved(page);
   expect((await savedDocument(plan.id)).document.runs[0].temperatureC).toBe(20);
   // c = 343.2 m/s at 20 °C (ISO 9613-1) is 1126.0 ft/s (÷ 0.3048).

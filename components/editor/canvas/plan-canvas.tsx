@@ -18,6 +18,7 @@ import { DraggedEndOutlets, OutletLinkShape, roomOutletMarks } from './outlet-li
 import { SegmentLine } from './segment-line';
 import { endNamePlace, END_NAME_FONT_PX } from './end-word-place';
 import { TerminationGlyph } from './termination-glyph';
+import { segmentWords, wordObstacle } from './segment-words';
 import type { DuctLine } from './box-clear';
 import { formatLength, type UnitSystem } from '@/lib/plan/units';
 import type { Section } from '@/lib/plan/document';
@@ -161,10 +162,15 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   // Everything that stays still during a drag, built once per document, selection or zoom.
   const staticShapes = useMemo(() => {
     const glyphs: ReactNode[] = [];
+    // the ducts and their words, as obstacles for the words at the ends
     const ducts = doc.segments.flatMap((segment) => {
       const from = positions.get(segment.from);
       const to = positions.get(segment.to);
-      return from && to ? [{ id: segment.id, line: { x1: from.x, y1: from.y, x2: to.x, y2: to.y, halfWidth: sectionWidthPx(planWidthM(segment.section)) / 2 / view.scale } satisfies DuctLine }] : [];
+      if (!from || !to) return [];
+      const widthPx = sectionWidthPx(planWidthM(segment.section));
+      const words = segmentWords(from.x, from.y, to.x, to.y, widthPx, view.scale, labels.segments[segment.id], sectionWords(segment.section, unitSystem));
+      const wordLines = [words.label, words.size].flatMap((box) => (box ? [wordObstacle(box, view.scale)] : []));
+      return [{ id: segment.id, line: { x1: from.x, y1: from.y, x2: to.x, y2: to.y, halfWidth: widthPx / 2 / view.scale } satisfies DuctLine, wordLines }];
     });
     for (const run of doc.runs) {
       for (const [nodeId, termination] of Object.entries(run.terminations)) {
@@ -180,7 +186,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
           ? { x: namePlace.x, y: namePlace.y + (END_NAME_FONT_PX * 1.3) / view.scale, centreX: namePlace.x + (endLabel.length * END_NAME_FONT_PX * 0.6) / 2 / view.scale }
           : null;
         glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={angleRad} termination={termination} scale={view.scale}
-          ductHalfWidthPx={halfWidthPx} otherDucts={ducts.filter((duct) => duct.id !== segment.id).map((duct) => duct.line)} belowName={belowName} />);
+          ductHalfWidthPx={halfWidthPx} otherDucts={ducts.flatMap((duct) => (duct.id === segment.id ? duct.wordLines : [duct.line, ...duct.wordLines]))} belowName={belowName} />);
         if (endLabel) {
           // beyond the end, along the segment's direction
           const place = namePlace!;
@@ -198,7 +204,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         )))}
       </>
     );
-  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale, labels, sectionWidthPx]);
+  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale, labels, sectionWidthPx, unitSystem]);
 
   const toPlan = (stage: Konva.Stage | null): Point | null => {
     const pointer = stage?.getPointerPosition();
