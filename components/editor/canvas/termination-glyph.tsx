@@ -23,8 +23,8 @@ const GLYPH_HALF_PX = 9;
 
 // A shape per end type (never colour alone) drawn at a leaf node, pointing along the duct, and its word on
 // the duct's left-hand side, clear of the duct, the end's name and a room outlet's word (end-word-place.ts).
-// When the left-hand side would cover another duct, the word goes on the right-hand side; when both
-// would, it goes beyond the end, under the end's name (belowName), where the duct never is.
+// When the left-hand side would cover another duct or a segment's words, the word goes beyond the
+// end, under the end's name (belowName), where the duct never is.
 export function TerminationGlyph({ x, y, angleRad, termination, scale, ductHalfWidthPx = 0, otherDucts = [], belowName = null }: {
   x: number; y: number; angleRad: number; termination: Termination; scale: number;
   /** Half the duct's drawn width on screen, px. */
@@ -44,7 +44,8 @@ export function TerminationGlyph({ x, y, angleRad, termination, scale, ductHalfW
   const left = at('left');
   const right = at('right');
   const below = belowName ? { x: belowName.centreX - widthPx / 2 / scale, y: belowName.y } : null;
-  const place = clear(left) ? left : clear(right) ? right : below ?? left;
+  // the right-hand side is a room outlet's (end-word-place.ts): only when there is no line under the name
+  const place = clear(left) ? left : below ?? (clear(right) ? right : left);
   return (
     <>
     <Text text={word} x={place.x} y={place.y} fontSize={WORD_FONT_PX / scale} fontFamily="IBM Plex Sans, sans-serif" fill="#3a3e45" listening={false} name="termination-word" />
