@@ -2,14 +2,28 @@
 
 import { useRouter } from 'next/navigation';
 import { useRef, useState } from 'react';
+import { apiFetch } from '@/components/api-fetch';
 import type { ErrorBody } from '@/lib/errors';
 
+type Message = { ok: boolean; text: string; undo?: { uploadId: string | null } };
+
 // Upload (or replace) the plan drawing: PNG, JPEG, WebP or the first page of a PDF, up to 20 MB.
-export function BackgroundUpload({ planId, hasBackground }: { planId: string; hasBackground: boolean }) {
+// After an upload, Undo puts back the drawing the plan had before (or the blank grid).
+export function BackgroundUpload({ planId, backgroundId }: { planId: string; backgroundId: string | null }) {
   const router = useRouter();
   const input = useRef<HTMLInputElement>(null);
   const [busy, setBusy] = useState(false);
-  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const [message, setMessage] = useState<Message | null>(null);
+  const hasBackground = backgroundId !== null;
+
+  async function undo(uploadId: string | null) {
+    setBusy(true);
+    const answer = await apiFetch(`/api/v1/plans/${planId}/background`, { method: 'PUT', body: { uploadId } });
+    setBusy(false);
+    if (!answer.ok) { setMessage({ ok: false, text: answer.error.message }); return; }
+    setMessage({ ok: true, text: uploadId ? 'The earlier drawing is back.' : 'The plan is back on the blank grid.' });
+    router.refresh();
+  }
 
   async function upload(file: File) {
     setBusy(true);
@@ -23,7 +37,7 @@ export function BackgroundUpload({ planId, hasBackground }: { planId: string; ha
         setMessage({ ok: false, text: error?.message ?? `The upload failed (${response.status}).` });
         return;
       }
-      setMessage({ ok: true, text: `${file.name} is the plan drawing now.` });
+      setMessage({ ok: true, text: `${file.name} is the plan drawing now.`, undo: { uploadId: backgroundId } });
       router.refresh();
     } catch {
       setMessage({ ok: false, text: 'The server could not be reached; nothing changed.' });
@@ -37,11 +51,13 @@ export function BackgroundUpload({ planId, hasBackground }: { planId: string; ha
     <div className="relative flex items-center gap-2">
       <input ref={input} type="file" accept="image/png,image/jpeg,image/webp,application/pdf" className="sr-only" id="background-file" aria-label="Plan drawing file"
         onChange={(event) => { const file = event.target.files?.[0]; if (file) void upload(file); }} />
-      <label htmlFor="background-file" className={`btn-quiet cursor-pointer ${busy ? 'opacity-50' : ''}`}>{busy ? 'Uploading…' : hasBackground ? 'Replace drawing' : 'Upload drawing'}</label>
+      <label htmlFor="background-file" className={`btn-quiet cursor-pointer whitespace-nowrap ${busy ? 'opacity-50' : ''}`}>{busy ? 'Uploading…' : hasBackground ? 'Replace drawing' : 'Upload drawing'}</label>
       {message && (
         <p role={message.ok ? 'status' : 'alert'} data-testid="upload-message"
           className={`absolute right-0 top-full z-30 mt-1 w-72 rounded border px-2 py-1 text-xs shadow-panel ${message.ok ? 'border-graphite-200 bg-paper-raised text-graphite-700' : 'border-risk bg-risk-soft text-risk-ink'}`}>
-          {message.text} <button type="button" className="ml-1 underline" onClick={() => setMessage(null)}>Dismiss</button>
+          {message.text}{' '}
+          {message.undo && <button type="button" className="ml-1 underline" disabled={busy} onClick={() => void undo(message.undo!.uploadId)}>Undo</button>}
+          <button type="button" className="ml-1 underline" onClick={() => setMessage(null)}>Dismiss</button>
         </p>
       )}
     </div>

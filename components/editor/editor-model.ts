@@ -11,6 +11,8 @@ export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error';
 export interface EditorModel {
   editable: boolean;               // false for roles that may only read the plan: every edit is refused
   history: History<PlanDocument>;
+  /** The scale at each step of `history`, moved in step with it: a new scale is undone like any edit. */
+  scales: History<ScaleStep>;
   state: EditorState;
   metresPerPixel: number;
   version: number;                 // the server version the edits are based on
@@ -20,12 +22,16 @@ export interface EditorModel {
   notice: string | null;           // the last refusal or save problem, in words
 }
 
+/** One step's scale (an object, so that a step keeping the same scale is still a step). */
+export interface ScaleStep { readonly metresPerPixel: number }
+
 export type EditorAction =
   | { type: 'apply'; document: PlanDocument; state: EditorState }
   | { type: 'undo' }
   | { type: 'redo' }
   | { type: 'set-state'; state: EditorState }
-  | { type: 'set-scale'; metresPerPixel: number }
+  /** A new scale, one undo step; the grid starts at gridOrigin (the scale line's first point) when given. */
+  | { type: 'set-scale'; metresPerPixel: number; gridOrigin?: { x: number; y: number } }
   | { type: 'save-started' }
   | { type: 'save-succeeded'; version: number; document: PlanDocument; metresPerPixel: number }
   | { type: 'save-conflict'; message: string }
@@ -57,21 +63,31 @@ export function runCommand<Name extends CommandName>(model: EditorModel, dispatc
 
 export function initialModel(document: PlanDocument, version: number, metresPerPixel: number, editable: boolean): EditorModel {
   const state = { ...initialEditorState(), activeRunId: document.runs[0]?.id ?? null };
-  return { editable, history: createHistory(document), state, metresPerPixel, version, savedDocument: document, savedMetresPerPixel: metresPerPixel, saveStatus: 'saved', notice: null };
+  return { editable, history: createHistory(document), scales: createHistory<ScaleStep>({ metresPerPixel }), state, metresPerPixel, version, savedDocument: document, savedMetresPerPixel: metresPerPixel, saveStatus: 'saved', notice: null };
 }
 
-/** A new scale keeps drawn points where they are; each linked outlet is placed again at its duct end (scale changes are not undo steps). */
-function withScale(model: EditorModel, metresPerPixel: number): EditorModel {
-  const present = placeOutletsAtEnds(model.history.present, metresPerPixel);
-  return { ...model, metresPerPixel, history: present === model.history.present ? model.history : { ...model.history, present } };
+/**
+ * A new scale keeps drawn points where they are; each linked outlet is placed again at its duct end,
+ * and the grid may start at a new origin. One undo step, even when the document itself is unchanged.
+ */
+function withScale(model: EditorModel, metresPerPixel: number, gridOrigin: { x: number; y: number } | undefined): EditorModel {
+  const placed = placeOutletsAtEnds(model.history.present, metresPerPixel);
+  const document = gridOrigin ? { ...placed, gridOrigin: { x: gridOrigin.x, y: gridOrigin.y } } : placed === model.history.present ? { ...placed } : placed;
+  return { ...model, metresPerPixel, history: push(model.history, document), scales: push(model.scales, { metresPerPixel }) };
+}
+
+/** A document edit at the current scale: the scale history takes a step only when the document does. */
+function withDocument(model: EditorModel, document: PlanDocument): Pick<EditorModel, 'history' | 'scales'> {
+  const history = push(model.history, document);
+  return { history, scales: history === model.history ? model.scales : push(model.scales, { metresPerPixel: model.metresPerPixel }) };
 }
 
 export function isDirty(model: EditorModel): boolean {
   return model.history.present !== model.savedDocument || model.metresPerPixel !== model.savedMetresPerPixel;
 }
 
-function afterEdit(model: EditorModel, history: History<PlanDocument>, state: EditorState): EditorModel {
-  const next = { ...model, history, state, notice: null };
+function afterEdit(model: EditorModel, history: History<PlanDocument>, state: EditorState, scales: History<ScaleStep> = model.scales): EditorModel {
+  const next = { ...model, history, scales, metresPerPixel: scales.present.metresPerPixel, state, notice: null };
   return { ...next, saveStatus: model.saveStatus === 'conflict' ? 'conflict' : isDirty(next) ? 'unsaved' : 'saved' };
 }
 
@@ -79,19 +95,22 @@ export function editorReducer(model: EditorModel, action: EditorAction): EditorM
   const refusal = EDITS.has(action.type) ? editRefusal(model) : null;
   if (refusal) return { ...model, notice: refusal };
   switch (action.type) {
-    case 'apply':
-      return afterEdit(model, push(model.history, action.document), action.state);
+    case 'apply': {
+      const { history, scales } = withDocument(model, action.document);
+      return afterEdit(model, history, action.state, scales);
+    }
     case 'undo':
     case 'redo': {
       if (action.type === 'undo' ? !canUndo(model.history) : !canRedo(model.history)) return model;
       const history = action.type === 'undo' ? undo(model.history) : redo(model.history);
-      return afterEdit(model, history, normalizeState(history.present, model.state));
+      const scales = action.type === 'undo' ? undo(model.scales) : redo(model.scales);
+      return afterEdit(model, history, normalizeState(history.present, model.state), scales);
     }
     case 'set-state':
       return { ...model, state: action.state };
     case 'set-scale': {
-      const scaled = withScale(model, action.metresPerPixel);
-      return afterEdit(scaled, scaled.history, model.state);
+      const scaled = withScale(model, action.metresPerPixel, action.gridOrigin);
+      return afterEdit(scaled, scaled.history, normalizeState(scaled.history.present, model.state), scaled.scales);
     }
     case 'save-started':
       return { ...model, saveStatus: 'saving' };

@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
 import { planLabels } from '@/lib/plan/labels';
 import { findNode, findRoom, findRun, findSegment, normalizeState, runOfNode, runOfSegment, snapToGrid, type Point } from '@/lib/plan';
-import { formatLength } from '@/lib/plan/units';
+import { formatLength, gridStepWords } from '@/lib/plan/units';
 import type { PlanView } from '@/lib/plans/data';
 import type { UnitSystem } from '@/models/user';
 import { CommentPins, CommentsPanel, CommentsProvider, useComments, type PinView } from '@/components/comments/plan-comments';
@@ -26,9 +26,9 @@ import { wallWords } from './panels/walls-field';
 import { SaveStatusLabel } from './save-status';
 import { ScheduleCsvControls } from './schedule-csv-controls';
 import { ToolStrip } from './tool-strip';
-import { mayUseTool, type ToolName } from './tools';
+import { mayUseTool, TOOLS, type ToolName } from './tools';
 import { useAutosave } from './use-autosave';
-import { gridSpacingPx, useCanvasTools } from './use-canvas-tools';
+import { planGrid, useCanvasTools, type PlanGrid } from './use-canvas-tools';
 import { useModeEnvelope } from './use-mode-envelope';
 import { usePlanResults } from './use-plan-results';
 import { usePlanRisks } from './use-plan-risks';
@@ -84,7 +84,10 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const [highlightPlace, setHighlightPlace] = useState<{ segmentId: string | null; nodeId: string | null } | null>(null);
   useEffect(() => setNoiseSheetOpen(false), [openRoomId]);
   const closeNoiseSheet = useCallback(() => setNoiseSheetOpen(false), []);
-  const tools = useCanvasTools(model, dispatch, tool, setCalibrated, setOpenRoomId);
+  const grid = useMemo(() => planGrid(model.metresPerPixel, unitSystem, model.history.present.gridOrigin), [model.metresPerPixel, unitSystem, model.history.present.gridOrigin]);
+  const gridRef = useRef<PlanGrid>(grid);
+  gridRef.current = grid;
+  const tools = useCanvasTools(model, dispatch, tool, grid, setCalibrated, setOpenRoomId);
   const results = usePlanResults(plan.id, model.version);
   const risks = usePlanRisks(plan.id, model.version);
   const roomActions = useRoomActions(model, dispatch, setOpenRoomId);
@@ -111,13 +114,13 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const onNodeDrag = useCallback((nodeId: string, point: Point, phase: 'move' | 'end') => {
     if (phase !== 'end') return;
     const current = modelRef.current;
-    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridSpacingPx(current.metresPerPixel)), metresPerPixel: current.metresPerPixel });
+    runCommand(current, dispatch, 'move-node', { nodeId, to: snapToGrid(point, gridRef.current.spacingPx, gridRef.current.origin), metresPerPixel: current.metresPerPixel });
   }, []);
 
   // A dragged room's corner lands on the grid, as a dragged point does; a drag back to where it was changes nothing.
   const onRoomDrag = useCallback((roomId: string, corner: Point) => {
     const current = modelRef.current;
-    const to = snapToGrid(corner, gridSpacingPx(current.metresPerPixel));
+    const to = snapToGrid(corner, gridRef.current.spacingPx, gridRef.current.origin);
     const room = findRoom(current.history.present, roomId);
     if (room && room.x === to.x && room.y === to.y) return;
     runCommand(current, dispatch, 'move-room', { roomId, to, metresPerPixel: current.metresPerPixel });
@@ -141,23 +144,24 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const flaggedRoomIds = useMemo(() => new Set((risks.data?.flags ?? []).map((flag) => flag.roomId).filter((roomId): roomId is string => roomId !== null)), [risks.data]);
   const risksStale = model.saveStatus !== 'saved' || (risks.data !== undefined && risks.data.version !== model.version) || risks.isFetching;
   const stale = model.saveStatus !== 'saved' || (results.data !== undefined && results.data.version !== model.version) || results.isFetching;
-  const tool_hint = { select: editable ? 'Click to select; drag points or rooms to move them.' : 'Click a segment or room to read it.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know.' }[tool];
+  const activeTool = TOOLS.find((candidate) => candidate.name === tool) ?? TOOLS[0];
+  const tool_hint = { select: editable ? 'Click to select; drag points or rooms to move them.' : 'Click a segment or room to read it.', draw: 'Click at the fan end, then at each bend. Double-click or Escape ends the run.', split: 'Click a segment where it should split.', tee: 'Click a segment where the tee goes, then where its branch ends.', room: 'Click one corner of the room, then the opposite corner.', pan: 'Drag to pan; the wheel zooms.', scale: 'Click two points whose real distance you know; the grid starts at the first.', origin: 'Click where the grid should start.' }[tool];
 
   return (
     <div className="flex h-full flex-col">
-      <div className="flex flex-wrap items-center gap-x-2 gap-y-1 border-b border-graphite-100 bg-paper px-4 py-2">
-        <nav aria-label="Breadcrumb" className="min-w-0 max-w-[22rem] truncate text-sm text-graphite-500" title={`${plan.project.name} / ${plan.name}`}>
-          <Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}
+      <div className="flex flex-nowrap items-center gap-x-2 border-b border-graphite-100 bg-paper px-4 py-2" data-testid="plan-header">
+        <nav aria-label="Breadcrumb" className="min-w-0 max-w-[22rem] shrink truncate text-sm text-graphite-500" title={`${plan.project.name} / ${plan.name}`}>
+          <span className="hidden xl:inline"><Link href={`/projects/${plan.project.id}`} className="hover:text-graphite">{plan.project.name}</Link> <span aria-hidden="true">/</span>{' '}</span>
           <h1 className="inline font-semibold text-graphite">{plan.name}</h1>
         </nav>
         {editable ? <SaveStatusLabel status={model.saveStatus} version={model.version} /> : <span className="rounded bg-paper-sunk px-2 py-0.5 text-xs">Read only</span>}
         <PlanRevisionActions planId={plan.id} latest={revisions.latest} planVersion={model.version} contentHash={model.saveStatus === 'saved' && results.data?.version === model.version ? results.data.contentHash : null} canSubmit={revisions.canSubmit && model.saveStatus === 'saved'} canIssue={revisions.canIssue} />
-        <div className="ml-auto flex items-center gap-2">
+        <div className="ml-auto flex shrink-0 items-center gap-2">
           {editable && (
             <>
-              <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)">Undo</button>
-              <button type="button" className="btn-quiet" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)">Redo</button>
-              <BackgroundUpload planId={plan.id} hasBackground={plan.background !== null} />
+              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)" aria-label="Undo"><span aria-hidden="true" className="xl:hidden">↶</span><span aria-hidden="true" className="hidden xl:inline">Undo</span></button>
+              <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo"><span aria-hidden="true" className="xl:hidden">↷</span><span aria-hidden="true" className="hidden xl:inline">Redo</span></button>
+              <BackgroundUpload planId={plan.id} backgroundId={plan.background?.id ?? null} />
             </>
           )}
           <UnitSystemToggle unitSystem={unitSystem} />
@@ -174,8 +178,9 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               widthPx={canvasSize.width}
               heightPx={canvasSize.height}
               background={background}
-              gridSpacingPx={gridSpacingPx(model.metresPerPixel)}
+              grid={grid}
               metresPerPixel={model.metresPerPixel}
+              unitSystem={unitSystem}
               selection={selection}
               editable={model.editable && tool === 'select'}
               panning={tool === 'pan' && !comments.placing}
@@ -193,10 +198,14 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             />
           )}
           <CommentPins view={pinView} />
-          <p className="num pointer-events-none absolute bottom-2 right-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700" title="Plan scale">
-            Scale 1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')} · grid {formatLength(gridSpacingPx(model.metresPerPixel) * model.metresPerPixel, unitSystem, 'run')}
-          </p>
-          <p className="pointer-events-none absolute bottom-2 left-2 rounded bg-paper-raised/90 px-2 py-1 text-xs text-graphite-700">{comments.placing ? 'Click the plan where the comment belongs.' : tool_hint}</p>
+          <div className="pointer-events-none absolute inset-x-2 bottom-2 flex items-end justify-between gap-2 text-xs text-graphite-700">
+            <p className="min-w-0 rounded bg-paper-raised/90 px-2 py-1" data-testid="active-tool">
+              {comments.placing ? 'Click the plan where the comment belongs.' : <><span className="font-semibold text-select">{activeTool.label} ({activeTool.keys})</span> · {tool_hint}</>}
+            </p>
+            <p className="num shrink-0 rounded bg-paper-raised/90 px-2 py-1" title="Plan scale" data-testid="plan-scale">
+              Scale 1 px = {formatLength(model.metresPerPixel, unitSystem, 'section')} · grid {gridStepWords(unitSystem)}{doc.gridOrigin ? ' from its origin' : ''}
+            </p>
+          </div>
           {model.notice && model.saveStatus !== 'conflict' && (
             <p role="alert" className="absolute left-1/2 top-2 -translate-x-1/2 rounded border border-risk bg-risk-soft px-3 py-1 text-sm text-risk-ink">
               {model.notice} <button type="button" className="ml-2 underline" onClick={() => dispatch({ type: 'notice', message: null })}>Dismiss</button>
@@ -204,7 +213,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           )}
           {calibrated && (
             <ScaleDialog points={calibrated} unitSystem={unitSystem}
-              onApply={(metresPerPixel) => { dispatch({ type: 'set-scale', metresPerPixel }); setCalibrated(null); tools.clearCalibration(); chooseTool('select'); }}
+              onApply={(metresPerPixel) => { dispatch({ type: 'set-scale', metresPerPixel, gridOrigin: calibrated[0] }); setCalibrated(null); tools.clearCalibration(); chooseTool('select'); }}
               onCancel={() => { setCalibrated(null); tools.clearCalibration(); }} />
           )}
           {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
@@ -251,14 +260,14 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               <ScheduleCsvControls document={doc} runId={activeRunId} runName={(activeRunId && findRun(doc, activeRunId)?.name) || 'run'} metresPerPixel={model.metresPerPixel} editable={editable}
                 onApply={(document) => dispatch({ type: 'apply', document, state: normalizeState(document, model.state) })} />
               <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
-                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} nodeLabels={labels.nodes} />
+                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} nodeLabels={labels.nodes} unitSystem={unitSystem} />
               {activeRunId && <div className="mt-5"><OutletReflectionLossTable document={doc} runId={activeRunId} labels={labels} unitSystem={unitSystem} /></div>}
               </>)}
             </div>
           )}
           {panelRun && !openRoom && (selectedSegment || selectedNode || editable) && (
             <div className="mt-6 border-t border-graphite-100 pt-4">
-              <RunPanel run={panelRun} editable={editable} fanOwners={doc.runs.filter((other) => other.id !== panelRun.id && other.fanOfRunId == null && !doc.runs.some((sharer) => sharer.fanOfRunId === panelRun.id))} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })}
+              <RunPanel run={panelRun} editable={editable} unitSystem={unitSystem} fanOwners={doc.runs.filter((other) => other.id !== panelRun.id && other.fanOfRunId == null && !doc.runs.some((sharer) => sharer.fanOfRunId === panelRun.id))} onChange={(changes) => runCommand(model, dispatch, 'set-run-properties', { runId: panelRun.id, ...changes })}
                 onRenumber={editable ? () => runCommand(model, dispatch, 'renumber-run', { runId: panelRun.id }) : undefined} />
             </div>
           )}

@@ -13,8 +13,8 @@ const LABELS: Record<SaveStatus, { text: string; mark: string; tone: string }> =
 export function SaveStatusLabel({ status, version }: { status: SaveStatus; version: number }) {
   const label = LABELS[status];
   return (
-    <span role="status" data-testid="save-status" className={`num text-xs ${label.tone}`}>
-      <span aria-hidden="true">{label.mark} </span>{label.text} · version {version}
+    <span role="status" data-testid="save-status" className={`num whitespace-nowrap text-xs ${label.tone}`} title={`Version ${version}`}>
+      <span aria-hidden="true">{label.mark} </span>{status === 'saved' ? <><span className="xl:hidden">Saved</span><span className="hidden xl:inline">{label.text}</span></> : label.text}<span className="hidden 2xl:inline"> · version {version}</span>
     </span>
   );
 }

@@ -6,7 +6,7 @@ import { mayUseTool, TOOLS, type ToolName } from './tools';
 export function ToolStrip({ tool, editable, onTool }: { tool: ToolName; editable: boolean; onTool: (tool: ToolName) => void }) {
   const shown = TOOLS.filter((candidate) => mayUseTool(candidate.name, editable));
   return (
-    <div role="toolbar" aria-label="Drawing tools" aria-orientation="vertical" className="flex w-20 flex-col gap-1 border-r border-graphite-100 bg-paper-raised p-2">
+    <div role="toolbar" aria-label="Drawing tools" aria-orientation="vertical" className="flex w-20 shrink-0 flex-col gap-1 overflow-y-auto border-r border-graphite-100 bg-paper-raised p-2">
       {shown.map((candidate) => (
         <button
           key={candidate.name}
@@ -14,7 +14,7 @@ export function ToolStrip({ tool, editable, onTool }: { tool: ToolName; editable
           title={`${candidate.hint} (${candidate.keys})`}
           aria-pressed={tool === candidate.name}
           onClick={() => onTool(candidate.name)}
-          className={`rounded px-1 py-2 text-xs ${tool === candidate.name ? 'bg-select text-paper-raised' : 'text-graphite-700 hover:bg-paper-sunk'}`}
+          className={`shrink-0 rounded px-1 py-1.5 text-xs ${tool === candidate.name ? 'bg-select text-paper-raised' : 'text-graphite-700 hover:bg-paper-sunk'}`}
         >
           <span className="block font-medium">{candidate.label}</span>
           <kbd className="font-mono text-[10px] opacity-70">{candidate.keys}</kbd>

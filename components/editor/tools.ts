@@ -2,7 +2,7 @@
 // changes the plan. A tool that changes the plan is off (not only hidden) for read-only roles.
 import type { EditorAction } from '@/lib/plan';
 
-export type ToolName = 'select' | 'draw' | 'split' | 'tee' | 'room' | 'pan' | 'scale';
+export type ToolName = 'select' | 'draw' | 'split' | 'tee' | 'room' | 'pan' | 'scale' | 'origin';
 
 export interface Tool {
   readonly name: ToolName;
@@ -21,7 +21,8 @@ export const TOOLS: readonly Tool[] = [
   { name: 'tee', label: 'Tee', keys: 'T', action: 'tool-tee', changesPlan: true, hint: 'Click on a segment where the tee goes, then click where its branch ends.' },
   { name: 'room', label: 'Room', keys: 'R', action: 'tool-room', changesPlan: true, hint: 'Click one corner of a room, then the opposite corner; its size follows the plan scale.' },
   { name: 'pan', label: 'Pan', keys: 'H', action: 'tool-pan', changesPlan: false, hint: 'Drag to move around the plan; the wheel zooms.' },
-  { name: 'scale', label: 'Scale', keys: 'K', action: 'tool-scale', changesPlan: true, hint: 'Click two points whose real distance you know, then type it.' },
+  { name: 'scale', label: 'Scale', keys: 'K', action: 'tool-scale', changesPlan: true, hint: 'Click two points whose real distance you know, then type it; the grid starts at the first.' },
+  { name: 'origin', label: 'Grid origin', keys: 'G', action: 'tool-origin', changesPlan: true, hint: 'Click where the grid should start, for example a column line on the drawing.' },
 ];
 
 /** The tool a key action chooses, if it chooses one. */

@@ -6,23 +6,31 @@ import { findNode, findSegment, snapPoint, type NodeRef, type Point } from '@/li
 import type { CanvasPointer } from './canvas/plan-canvas';
 import { runCommand, type EditorAction, type EditorModel } from './editor-model';
 import { mayUseTool, type ToolName } from './tools';
+import { gridStepM } from '@/lib/plan/units';
+import type { UnitSystem } from '@/models/user';
 
 const SNAP_RADIUS_SCREEN_PX = 10;
 // Two clicks this close in time and place end a drawn chain (a double-click).
 const DOUBLE_CLICK_MS = 400;
 const DOUBLE_CLICK_SCREEN_PX = 5;
-const GRID_SPACING_M = 0.5;
 /** A room drawn with the Room tool starts this high, m (product default; change it in the form). */
 const NEW_ROOM_HEIGHT_M = 3;
 
 export interface ToolFeedback {
+  /** The rubber band from the last point to the pointer (drawing, a tee's branch, the scale line). */
   preview: { from: Point; to: Point } | null;
   roomPreview: { from: Point; to: Point } | null;
   calibration: Point[];
 }
 
-export function gridSpacingPx(metresPerPixel: number): number {
-  return GRID_SPACING_M / metresPerPixel;
+/** The drawing grid: its step in plan pixels (a round step in the person's units) and where it starts. */
+export interface PlanGrid {
+  readonly spacingPx: number;
+  readonly origin: Point | null;
+}
+
+export function planGrid(metresPerPixel: number, unitSystem: UnitSystem, origin: Point | undefined): PlanGrid {
+  return { spacingPx: gridStepM(unitSystem) / metresPerPixel, origin: origin ?? null };
 }
 
 /** "Room N" with the lowest N not already taken. */
@@ -32,7 +40,7 @@ function nextRoomName(names: readonly string[]): string {
   return `Room ${number}`;
 }
 
-export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorAction>, tool: ToolName, onCalibrated: (points: [Point, Point]) => void, onRoom: (roomId: string | null) => void = () => {}) {
+export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorAction>, tool: ToolName, grid: PlanGrid, onCalibrated: (points: [Point, Point]) => void, onRoom: (roomId: string | null) => void = () => {}) {
   const [roomFrom, setRoomFrom] = useState<Point | null>(null);
   const [drawFrom, setDrawFrom] = useState<NodeRef | null>(null);
   const [teeAt, setTeeAt] = useState<{ segmentId: string; at: Point } | null>(null);
@@ -55,11 +63,12 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
       nodeRadiusPx: SNAP_RADIUS_SCREEN_PX / event.scale,
       anchor,
       angleStepDeg: event.shiftKey ? null : 45,
-      gridSpacingPx: event.shiftKey ? null : gridSpacingPx(model.metresPerPixel),
+      gridSpacingPx: event.shiftKey ? null : grid.spacingPx,
+      gridOrigin: grid.origin,
     });
     const ref: NodeRef = result.target.kind === 'node' ? { nodeId: result.target.nodeId } : { point: result.point };
     return { ref, point: result.point };
-  }, [doc.nodes, model.metresPerPixel, anchorOf]);
+  }, [doc.nodes, grid, anchorOf]);
 
   const cancel = useCallback(() => { setDrawFrom(null); setTeeAt(null); setCalibration([]); setRoomFrom(null); }, []);
 
@@ -118,7 +127,7 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
         return;
       }
       case 'room': {
-        const corner = snapPoint(event.point, { nodes: [], nodeRadiusPx: 0, anchor: null, angleStepDeg: null, gridSpacingPx: event.shiftKey ? null : gridSpacingPx(model.metresPerPixel) }).point;
+        const corner = snapPoint(event.point, { nodes: [], nodeRadiusPx: 0, anchor: null, angleStepDeg: null, gridSpacingPx: event.shiftKey ? null : grid.spacingPx, gridOrigin: grid.origin }).point;
         if (!roomFrom) { setRoomFrom(corner); return; }
         const lengthM = Math.abs(corner.x - roomFrom.x) * model.metresPerPixel;
         const widthM = Math.abs(corner.y - roomFrom.y) * model.metresPerPixel;
@@ -136,18 +145,24 @@ export function useCanvasTools(model: EditorModel, dispatch: Dispatch<EditorActi
         if (next.length === 2) onCalibrated([next[0], next[1]]);
         return;
       }
+      case 'origin':
+        // Onto a drawn point when near one, otherwise exactly where clicked (not onto the old grid).
+        runCommand(model, dispatch, 'set-grid-origin', { origin: snapPoint(event.point, { nodes: doc.nodes, nodeRadiusPx: SNAP_RADIUS_SCREEN_PX / event.scale }).point });
+        return;
       case 'pan':
         return;
     }
-  }, [tool, model, dispatch, snapped, anchorOf, drawFrom, teeAt, calibration, onCalibrated, roomFrom, onRoom, doc.rooms]);
+  }, [tool, model, dispatch, snapped, anchorOf, drawFrom, teeAt, calibration, onCalibrated, roomFrom, onRoom, doc.rooms, doc.nodes, grid]);
 
   // The rubber band from the last point to the (snapped) pointer.
   let preview: ToolFeedback['preview'] = null;
   const from = tool === 'draw' ? anchorOf(drawFrom) : tool === 'tee' && teeAt ? teeAt.at : null;
   if (from && pointer) {
-    const to = snapPoint(pointer, { nodes: doc.nodes, nodeRadiusPx: 0, anchor: from, angleStepDeg: 45, gridSpacingPx: gridSpacingPx(model.metresPerPixel) }).point;
+    const to = snapPoint(pointer, { nodes: doc.nodes, nodeRadiusPx: 0, anchor: from, angleStepDeg: 45, gridSpacingPx: grid.spacingPx }).point;
     preview = { from, to };
   }
+  // While calibrating: from the first point to the pointer, unsnapped (the scale line follows the drawing).
+  if (tool === 'scale' && calibration.length === 1 && pointer) preview = { from: calibration[0], to: pointer };
   const roomPreview = tool === 'room' && roomFrom && pointer ? { from: roomFrom, to: pointer } : null;
   return { onPointer, cancel, feedback: { preview, roomPreview, calibration } as ToolFeedback, drawing: drawFrom !== null || teeAt !== null || roomFrom !== null, clearCalibration: () => setCalibration([]) };
 }

@@ -17,14 +17,26 @@ interface EditorKeys {
   setHelpOpen: (open: boolean | ((open: boolean) => boolean)) => void;
 }
 
+const TYPED_INPUT_TYPES = new Set(['text', 'search', 'number', 'email', 'password', 'url', 'tel', 'date', 'time']);
+
+/** Where a key press is typing: a text field, a text area, a list box, editable text. Buttons, radios, checkboxes and tabs are not. */
+function isTypingIn(target: EventTarget | null): boolean {
+  if (!(target instanceof HTMLElement)) return false;
+  if (target.isContentEditable || target.closest('textarea, select, [contenteditable="true"]')) return true;
+  return target instanceof HTMLInputElement && TYPED_INPUT_TYPES.has(target.type);
+}
+
 export function useEditorKeys(keys: EditorKeys): void {
   const latest = useRef(keys);
   latest.current = keys;
 
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {
-      const target = event.target as HTMLElement;
-      if (target.closest('input, textarea, select, [contenteditable="true"]')) return;
+      // Escape in a text field leaves it, so the next key chooses a tool again.
+      if (isTypingIn(event.target)) {
+        if (event.key === 'Escape' && event.target instanceof HTMLElement && event.target.closest('aside')) event.target.blur();
+        return;
+      }
       const { modelRef, dispatch, chooseTool, cancelTool, setHelpOpen } = latest.current;
       if (event.key === '?') { setHelpOpen((open) => !open); return; }
       const action = matchKeyBinding(event);

@@ -1,11 +1,12 @@
 import { OCTAVE_BANDS_HZ } from '@/lib/acoustic';
 import { correctionWords, ratingWords, rowWords, type ListenerTable, type NoiseTables, type PathRow } from '@/lib/plans/noise-path/path-tables';
 import type { UnitSystem } from '@/lib/plan/units';
+import { signedFixed } from '@/lib/signed-number';
 
 const BAND_LABELS = OCTAVE_BANDS_HZ.map((hz) => (hz >= 1000 ? `${hz / 1000}k` : String(hz)));
 const ROW_TEST_IDS: Partial<Record<PathRow['role'], string>> = { step: 'path-step', listener: 'path-listener', margin: 'path-margin' };
 
-const cell = (value: number) => (Math.abs(value) < 0.05 ? 0 : value).toFixed(1);
+const cell = (value: number) => signedFixed(value, 1);
 
 interface TableProps {
   caption: string;

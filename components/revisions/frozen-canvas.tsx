@@ -32,7 +32,7 @@ export function FrozenCanvas({ document, metresPerPixel, background }: FrozenCan
     <div ref={area} data-testid="plan-canvas" className={`panel relative h-[480px] overflow-hidden ${placing ? 'ring-2 ring-select' : ''}`}>
       {size.width > 0 && (
         <PlanCanvas
-          document={document} widthPx={size.width} heightPx={size.height} background={background} gridSpacingPx={50} metresPerPixel={metresPerPixel}
+          document={document} widthPx={size.width} heightPx={size.height} background={background} grid={{ spacingPx: 50, origin: document.gridOrigin ?? null }} metresPerPixel={metresPerPixel}
           selection={EMPTY_SELECTION} editable={false} panning={false} mainPath={NO_POINTS} mode={null} preview={null} calibration={NO_POINTS}
           onPointer={onPointer} onNodeDrag={() => undefined} onViewChange={onViewChange}
         />

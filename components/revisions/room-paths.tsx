@@ -1,6 +1,7 @@
 import { NoiseTablesView } from '@/components/noise/noise-tables';
 import type { UnitSystem } from '@/lib/plan/units';
 import type { RoomRow } from '@/lib/revisions/types';
+import { signedFixed } from '@/lib/signed-number';
 
 const BANDS = ['63', '125', '250', '500', '1k', '2k', '4k', '8k'];
 
@@ -16,7 +17,7 @@ function SinglePath({ room }: { room: RoomRow }) {
           {path.rows.map((row) => (
             <tr key={row.label} className={`border-b border-graphite-100 ${row.total ? 'font-medium' : ''}`}>
               <th scope="row" className="py-1 pr-2 text-left font-normal">{row.label}</th>
-              {row.valuesDb.map((value, band) => <td key={band} className="num py-1 pr-1 text-right">{value.toFixed(1)}</td>)}
+              {row.valuesDb.map((value, band) => <td key={band} className="num py-1 pr-1 text-right">{signedFixed(value, 1)}</td>)}
             </tr>
           ))}
         </tbody>

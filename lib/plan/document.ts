@@ -94,6 +94,8 @@ export interface PlanDocument {
   readonly listeners: readonly PlanPlaceholder[];
   /** The chosen treatments (absent in documents saved before treatments existed). */
   readonly treatments?: readonly PlanTreatment[];
+  /** Where the drawing grid starts, plan pixels (absent: the drawing's top-left corner). */
+  readonly gridOrigin?: { readonly x: number; readonly y: number };
 }
 
 /** Round Ø 250 mm: the section of a newly drawn run. */

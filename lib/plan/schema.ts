@@ -54,6 +54,8 @@ const documentShape = z.object({
   listeners: placeholders,
   // Documents saved before treatments existed have none.
   treatments: z.array(planTreatmentSchema).max(MAX_ITEMS, `at most ${MAX_ITEMS} treatments`).default([]),
+  // Documents saved before the grid could move start it at the drawing's corner.
+  gridOrigin: z.object({ x: planCoordinateSchema('x'), y: planCoordinateSchema('y') }).optional(),
 });
 
 type DocumentShape = z.infer<typeof documentShape>;

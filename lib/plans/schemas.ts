@@ -33,3 +33,8 @@ export const evaluateTreatmentsSchema = z
   })
   .refine((value) => Boolean(value.roomId) || Boolean(value.runId), { message: 'Send the roomId or the runId of the flag.', path: ['roomId'] });
 export type EvaluateTreatmentsInput = z.infer<typeof evaluateTreatmentsSchema>;
+
+// Undoing a drawing upload: back to the drawing the plan had before (an earlier upload of the team), or none.
+export const planBackgroundSchema = z.object({
+  uploadId: text({ error: 'uploadId must be the id of an earlier drawing, or null' }).min(1).max(40).nullable(),
+});

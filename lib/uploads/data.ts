@@ -56,3 +56,11 @@ export async function readUpload(teamId: string, uploadId: string): Promise<{ su
   if (!row) return null;
   return { summary: toUploadSummary(row), bytes: await getObject(row.storageKey) };
 }
+
+/** An earlier plan drawing of the team, to put back on a plan; refused with what is wrong otherwise. */
+export async function requirePlanDrawing(teamId: string, uploadId: string): Promise<UploadSummary> {
+  const row = isId(uploadId) ? await Upload.findOne({ where: { id: uploadId, teamId } }) : null;
+  if (!row) throw new AppError('not_found', 'That drawing is not one of this team’s uploads.', { field: 'uploadId' });
+  if (!row.widthPx || !row.heightPx) throw new AppError('bad_input', 'That upload is not a plan drawing.', { field: 'uploadId' });
+  return toUploadSummary(row);
+}

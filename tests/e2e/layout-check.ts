@@ -16,17 +16,32 @@ export async function layoutProblems(page: Page, scope: Locator): Promise<Proble
       const style = getComputedStyle(element);
       return box.width > 0 && box.height > 0 && style.visibility !== 'hidden' && style.display !== 'none';
     };
+    // What of an element shows: its box cut by every ancestor that clips (a scrolled side panel
+    // hides what is scrolled out of it; that part is not on the screen to overlap anything).
+    const shownBox = (element: Element) => {
+      const box = element.getBoundingClientRect();
+      let left = box.left; let top = box.top; let right = box.right; let bottom = box.bottom;
+      for (let parent = element.parentElement; parent; parent = parent.parentElement) {
+        const style = getComputedStyle(parent);
+        if (style.overflowX === 'visible' && style.overflowY === 'visible') continue;
+        const clip = parent.getBoundingClientRect();
+        left = Math.max(left, clip.left); top = Math.max(top, clip.top); right = Math.min(right, clip.right); bottom = Math.min(bottom, clip.bottom);
+      }
+      return { left, top, right, bottom };
+    };
+    const onScreen = (element: Element) => { const box = shownBox(element); return box.right - box.left > 1 && box.bottom - box.top > 1; };
     // Controls, marks and short labels: none may overlap another that it does not contain.
     const pieces = [...root.querySelectorAll('button, a, input, select, textarea, label, [data-testid="revision-state"], [data-testid="waiting-marker"], th, h1, h2, h3')]
       .filter(visible)
+      .filter(onScreen)
       .filter((element) => !element.closest('[aria-hidden="true"], .konvajs-content'));
     for (let i = 0; i < pieces.length; i += 1) {
       for (let j = i + 1; j < pieces.length; j += 1) {
         const a = pieces[i];
         const b = pieces[j];
         if (a.contains(b) || b.contains(a)) continue;
-        const ra = a.getBoundingClientRect();
-        const rb = b.getBoundingClientRect();
+        const ra = shownBox(a);
+        const rb = shownBox(b);
         const overlapX = Math.min(ra.right, rb.right) - Math.max(ra.left, rb.left);
         const overlapY = Math.min(ra.bottom, rb.bottom) - Math.max(ra.top, rb.top);
         if (overlapX > 1 && overlapY > 1) problems.push({ kind: 'overlap', what: `${name(a)} and ${name(b)}` });

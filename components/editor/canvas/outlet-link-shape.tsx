@@ -25,7 +25,7 @@ const SUFFIX: Record<OutletLink['kind'], string> = {
   unlinked: ' · no duct end',
 };
 
-const FONT_PX = 9;
+const FONT_PX = 11;
 const PADDING_PX = 1.5;
 
 /** Below this many screen pixels the outlet sits on its end and needs no leader. */

@@ -19,6 +19,10 @@ import { SegmentLine } from './segment-line';
 import { PlaceHighlight, type PlanPlace } from './place-highlight';
 import { endNamePlace, END_NAME_FONT_PX } from './end-word-place';
 import { TerminationGlyph } from './termination-glyph';
+import { segmentWords, wordObstacle } from './segment-words';
+import type { DuctLine } from './box-clear';
+import { formatLength, type UnitSystem } from '@/lib/plan/units';
+import type { Section } from '@/lib/plan/document';
 import { useRoomDrag } from './use-room-drag';
 import { GRID_AREA_PX, openingArea } from './opening-area';
 import { fitView, screenToPlan, viewAfterResize, zoomAt, type View } from './view';
@@ -33,8 +37,11 @@ export interface PlanCanvasProps {
   widthPx: number;
   heightPx: number;
   background: { url: string; widthPx: number; heightPx: number } | null;
-  gridSpacingPx: number;
+  /** The drawing grid: step and origin, plan pixels. */
+  grid: { spacingPx: number; origin: Point | null };
   metresPerPixel: number;
+  /** Sizes on the drawing in these units (SI when absent). */
+  unitSystem?: UnitSystem;
   selection: Selection;
   editable: boolean;
   panning: boolean;
@@ -57,6 +64,18 @@ export interface PlanCanvasProps {
 }
 
 const ZOOM_STEP = 1.15;
+/** Thinnest a duct is drawn, screen px, however far out the view is zoomed. */
+const MIN_DUCT_SCREEN_PX = 2;
+
+/** Across the duct on the plan: a round duct's diameter, a rectangular one's width. */
+function planWidthM(section: Section): number {
+  return section.shape === 'round' ? section.diameterM : section.widthM;
+}
+
+function sectionWords(section: Section, system: UnitSystem): string {
+  const size = (metres: number) => formatLength(metres, system, 'section');
+  return section.shape === 'round' ? `Ø ${size(section.diameterM)}` : `${size(section.widthM).replace(/ (mm|in)$/, '')} × ${size(section.heightM)}`;
+}
 const ignoreRoomDrag = () => {};
 
 function targetOf(event: Konva.KonvaEventObject<MouseEvent>): CanvasTarget {
@@ -128,22 +147,34 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   const startNodes = useMemo(() => new Set(doc.runs.map((run) => run.startNodeId)), [doc.runs]);
   const labels = useMemo(() => planLabels(doc), [doc]);
 
-  const sectionWidthPx = useCallback((sizeM: number) => Math.max(2, Math.min(9, (sizeM / props.metresPerPixel) * view.scale)), [props.metresPerPixel, view.scale]);
+  // Drawn to scale: the duct's width on the plan, in screen pixels.
+  const sectionWidthPx = useCallback((sizeM: number) => Math.max(MIN_DUCT_SCREEN_PX, (sizeM / props.metresPerPixel) * view.scale), [props.metresPerPixel, view.scale]);
+  const unitSystem = props.unitSystem ?? 'si';
 
   const segmentLine = useCallback((segment: PlanDocument['segments'][number], at: ReadonlyMap<string, { x: number; y: number }>) => {
     const from = at.get(segment.from);
     const to = at.get(segment.to);
     if (!from || !to) return null;
-    const sizeM = segment.section.shape === 'round' ? segment.section.diameterM : Math.max(segment.section.widthM, segment.section.heightM);
     return (
-      <SegmentLine key={segment.id} id={segment.id} x1={from.x} y1={from.y} x2={to.x} y2={to.y} widthPx={sectionWidthPx(sizeM)}
-        selected={selectedSegments.has(segment.id)} onPath={onPath.has(segment.id)} lined={Boolean(segment.lining)} scale={view.scale} label={labels.segments[segment.id]} />
+      <SegmentLine key={segment.id} id={segment.id} x1={from.x} y1={from.y} x2={to.x} y2={to.y} widthPx={sectionWidthPx(planWidthM(segment.section))}
+        selected={selectedSegments.has(segment.id)} onPath={onPath.has(segment.id)} lined={Boolean(segment.lining)} scale={view.scale} label={labels.segments[segment.id]}
+        size={sectionWords(segment.section, unitSystem)} />
     );
-  }, [sectionWidthPx, selectedSegments, onPath, view.scale, labels]);
+  }, [sectionWidthPx, selectedSegments, onPath, view.scale, labels, unitSystem]);
 
   // Everything that stays still during a drag, built once per document, selection or zoom.
   const staticShapes = useMemo(() => {
     const glyphs: ReactNode[] = [];
+    // the ducts and their words, as obstacles for the words at the ends
+    const ducts = doc.segments.flatMap((segment) => {
+      const from = positions.get(segment.from);
+      const to = positions.get(segment.to);
+      if (!from || !to) return [];
+      const widthPx = sectionWidthPx(planWidthM(segment.section));
+      const words = segmentWords(from.x, from.y, to.x, to.y, widthPx, view.scale, labels.segments[segment.id], sectionWords(segment.section, unitSystem));
+      const wordLines = [words.label, words.size].flatMap((box) => (box ? [wordObstacle(box, view.scale)] : []));
+      return [{ id: segment.id, line: { x1: from.x, y1: from.y, x2: to.x, y2: to.y, halfWidth: widthPx / 2 / view.scale } satisfies DuctLine, wordLines }];
+    });
     for (const run of doc.runs) {
       for (const [nodeId, termination] of Object.entries(run.terminations)) {
         const node = positions.get(nodeId);
@@ -151,11 +182,17 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         const other = segment && positions.get(segment.from === nodeId ? segment.to : segment.from);
         if (!node || !other || nodeId === dragNodeId) continue;
         const angleRad = Math.atan2(node.y - other.y, node.x - other.x);
-        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={angleRad} termination={termination} scale={view.scale} />);
+        const halfWidthPx = sectionWidthPx(planWidthM(segment.section)) / 2;
         const endLabel = labels.nodes[nodeId];
+        const namePlace = endLabel ? endNamePlace(node, angleRad, endLabel.length, view.scale, halfWidthPx) : null;
+        const belowName = namePlace && endLabel
+          ? { x: namePlace.x, y: namePlace.y + (END_NAME_FONT_PX * 1.3) / view.scale, centreX: namePlace.x + (endLabel.length * END_NAME_FONT_PX * 0.6) / 2 / view.scale }
+          : null;
+        glyphs.push(<TerminationGlyph key={`t${nodeId}`} x={node.x} y={node.y} angleRad={angleRad} termination={termination} scale={view.scale}
+          ductHalfWidthPx={halfWidthPx} otherDucts={ducts.flatMap((duct) => (duct.id === segment.id ? duct.wordLines : [duct.line, ...duct.wordLines]))} belowName={belowName} />);
         if (endLabel) {
           // beyond the end, along the segment's direction
-          const place = endNamePlace(node, angleRad, endLabel.length, view.scale);
+          const place = namePlace!;
           glyphs.push(<Text key={`l${nodeId}`} x={place.x} y={place.y} text={endLabel} fontSize={END_NAME_FONT_PX / view.scale}
             fontFamily="IBM Plex Mono, monospace" fill="#5d626b" listening={false} name="end-label" />);
         }
@@ -170,7 +207,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         )))}
       </>
     );
-  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale, labels]);
+  }, [doc, positions, activeSegmentIds, dragNodeId, segmentLine, selectedNodes, startNodes, view.scale, labels, sectionWidthPx, unitSystem]);
 
   const toPlan = (stage: Konva.Stage | null): Point | null => {
     const pointer = stage?.getPointerPosition();
@@ -256,7 +293,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       <Layer listening={false}>
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
-        <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.gridSpacingPx} scale={view.scale} />
+        <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.grid.spacingPx} origin={props.grid.origin} scale={view.scale} />
       </Layer>
       <Layer>
         {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (

@@ -25,14 +25,14 @@ export const RoomShape = memo(function RoomShape({ room, metresPerPixel, selecte
       <Rect id={`room:${room.id}`} name="room" x={rect.x} y={rect.y} width={rect.width} height={rect.height}
         fill={selected ? 'rgba(45,106,150,0.08)' : 'rgba(37,40,45,0.03)'} stroke={selected ? '#2d6a96' : '#5d626b'}
         strokeWidth={(selected ? 2 : 1) / scale} dash={[8 / scale, 4 / scale]} perfectDrawEnabled={false} />
-      <Text x={rect.x} y={rect.y + rect.height + 4 / scale} text={label} fontSize={11 / scale} lineHeight={1.25} fontFamily="IBM Plex Sans, sans-serif"
+      <Text x={rect.x} y={rect.y + rect.height + 4 / scale} text={label} fontSize={12 / scale} lineHeight={1.25} fontFamily="IBM Plex Sans, sans-serif"
         fill={flagged ? '#8a3d12' : '#25282d'} listening={false} />
       {listeners.map((listener) => {
         const at = roomPointPx(room, listener, metresPerPixel);
         return (
           <Group key={listener.id}>
             <Circle x={at.x} y={at.y} radius={marker} stroke="#25282d" strokeWidth={1.5 / scale} listening={false} />
-            <Text x={at.x + marker * 1.4} y={at.y - marker} text={listeners.length > 1 ? `listener ${listener.name}` : 'listener'} fontSize={9 / scale} fill="#5d626b" listening={false} />
+            <Text x={at.x + marker * 1.4} y={at.y - marker} text={listeners.length > 1 ? `listener ${listener.name}` : 'listener'} fontSize={11 / scale} fill="#5d626b" listening={false} />
           </Group>
         );
       })}

@@ -4,6 +4,7 @@ import { useId, useRef, useState } from 'react';
 import { fanSpeedSoundPowerChangeDb } from '@/lib/acoustic';
 import { parseFanSpectrumCsv, type Fan } from '@/lib/plan';
 import { NumberInput } from './number-input';
+import { changeFixed } from '@/lib/signed-number';
 
 /** A spectrum file larger than this is not a fan's eight bands (product rule). */
 const MAX_CSV_BYTES = 64 * 1024;
@@ -39,7 +40,7 @@ export function FanNoiseFields({ fan, editable, onFan, onSpectrum }: FanNoiseFie
             <NumberInput label="Highest speed" unit="rpm" value={fan.maxRpm ?? null} min={1} max={10000} allowEmpty onCommit={(maxRpm) => onFan({ ...fan, maxRpm })} />
           </div>
           {top !== null && top !== fan.rpm && (
-            <p className="num text-xs text-graphite-500">The noise path is worked at {top} rpm: {fanSpeedSoundPowerChangeDb(fan.rpm, top) >= 0 ? '+' : ''}{fanSpeedSoundPowerChangeDb(fan.rpm, top).toFixed(1)} dB on the sound power given at {fan.rpm} rpm (fan laws, 50 log n₂/n₁).</p>
+            <p className="num text-xs text-graphite-500">The noise path is worked at {top} rpm: {changeFixed(fanSpeedSoundPowerChangeDb(fan.rpm, top), 1)} dB on the sound power given at {fan.rpm} rpm (fan laws, 50 log n₂/n₁).</p>
           )}
         </>
       )}

@@ -2,6 +2,7 @@
 
 import { POSITION_STEP_M } from '@/lib/analysis/answer-precision';
 import type { RunResult } from '@/lib/plans/results';
+import { formatSpeed, type UnitSystem } from '@/lib/plan/units';
 import { EchoChart } from '../results/echo-chart';
 import { ReflectionTable } from '../results/reflection-table';
 import { ResonanceTable } from '../results/resonance-table';
@@ -16,6 +17,7 @@ interface ResultsPanelProps {
   formatPosition: (metres: number) => string;
   /** Stable labels of the plan's points, for naming where each reflection happens. */
   nodeLabels?: Readonly<Record<string, string>>;
+  unitSystem?: UnitSystem;
 }
 
 /** Within this distance, m, a reflection is at the path point: both arrive rounded to 0.1 mm, each on its own. */
@@ -31,7 +33,7 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 }
 
 // The chosen run's results: cut-off and warnings, resonances, reflections, echo chart.
-export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition, nodeLabels }: ResultsPanelProps) {
+export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition, nodeLabels, unitSystem = 'si' }: ResultsPanelProps) {
   if (error) return <p role="alert" className="text-sm text-risk-ink">The results could not be computed: {error}</p>;
   if (!result) return <p className="text-sm text-graphite-500">{loading ? 'Computing…' : 'Draw a run to see its resonances here: pick Draw (D), click at the fan end, then at each bend.'}</p>;
   if (result.problem) return <p role="status" className="rounded border border-risk bg-risk-soft p-2 text-sm text-risk-ink"><span className="font-semibold">Cannot analyse {result.name}: </span>{result.problem}</p>;
@@ -47,7 +49,7 @@ export function ResultsPanel({ result, loading, stale, error, selectedOrder, onS
         <dt className="text-graphite-500">Length along path</dt><dd>{formatPosition(analysis.lengthM)}</dd>
         <dt className="text-graphite-500">Plane-wave cut-off</dt><dd>{analysis.cutoffHz.toFixed(0)} Hz</dd>
         <dt className="text-graphite-500">End corrections</dt><dd>{formatPosition(analysis.endCorrectionM.start)} · {formatPosition(analysis.endCorrectionM.end)}</dd>
-        <dt className="text-graphite-500">Speed of sound</dt><dd>{analysis.speedOfSoundMps.toFixed(1)} m/s</dd>
+        <dt className="text-graphite-500">Speed of sound</dt><dd>{formatSpeed(analysis.speedOfSoundMps, unitSystem)}</dd>
         {result.fanTonesHz.length > 0 && (<><dt className="text-graphite-500">Fan tones</dt><dd>{result.fanTonesHz.map((hz) => hz.toFixed(0)).join(', ')} Hz</dd></>)}
       </dl>
       {analysis.warnings.length > 0 && (

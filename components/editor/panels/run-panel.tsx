@@ -2,7 +2,9 @@
 
 import { useEffect, useState } from 'react';
 import type { Fan, PlanRun, Wall } from '@/lib/plan';
+import type { UnitSystem } from '@/models/user';
 import { NumberInput } from './number-input';
+import { TemperatureInput } from './temperature-input';
 import { SoundPowerField } from '../rooms/sound-power-field';
 import { FanNoiseFields } from './fan-noise-fields';
 import { WallsField } from './walls-field';
@@ -10,6 +12,7 @@ import { WallsField } from './walls-field';
 interface RunPanelProps {
   run: PlanRun;
   editable: boolean;
+  unitSystem: UnitSystem;
   onChange: (changes: { name?: string; temperatureC?: number; walls?: Wall | null; fan?: Fan | null; fanOfRunId?: string | null; fanSoundPowerDb?: number[] | null }) => void;
   /** Runs whose fan this one may share (other runs with a fan of their own). */
   fanOwners: PlanRun[];
@@ -18,7 +21,7 @@ interface RunPanelProps {
 }
 
 // The run as a whole: name, air temperature, and the fan whose blade-pass tone matters.
-export function RunPanel({ run, editable, onChange, onRenumber, fanOwners }: RunPanelProps) {
+export function RunPanel({ run, editable, unitSystem, onChange, onRenumber, fanOwners }: RunPanelProps) {
   const sharedOwner = run.fanOfRunId ? fanOwners.find((owner) => owner.id === run.fanOfRunId) ?? null : null;
   const [name, setName] = useState(run.name);
   useEffect(() => setName(run.name), [run.name]);
@@ -30,8 +33,8 @@ export function RunPanel({ run, editable, onChange, onRenumber, fanOwners }: Run
         <input id="run-name" className="field-input mt-0.5 py-1" value={name} onChange={(event) => setName(event.target.value)}
           onBlur={() => { if (name.trim() && name !== run.name) onChange({ name: name.trim() }); }} />
       </div>
-      <NumberInput label="Air temperature" unit="°C" value={run.temperatureC} min={-40} max={60} onCommit={(value) => value !== null && onChange({ temperatureC: value })} />
-      <p className="text-xs text-graphite-500">Flags allow for the supply air swinging ±5 °C about this, and the fan&apos;s speed range (±2 % belt slip when none is entered).</p>
+      <TemperatureInput label="Air temperature" valueC={run.temperatureC} unitSystem={unitSystem} onCommit={(temperatureC) => onChange({ temperatureC })} />
+      <p className="text-xs text-graphite-500">Flags allow for the supply air swinging {unitSystem === 'si' ? '±5 °C' : '±9 °F'} about this, and the fan&apos;s speed range (±2 % belt slip when none is entered).</p>
       <WallsField label="Walls of its segments" wall={run.walls ?? null} inheritedWords="Sheet metal (the default)" onChange={(walls) => onChange({ walls })} />
       {fanOwners.length > 0 && (
         <div>

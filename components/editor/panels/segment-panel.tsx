@@ -48,11 +48,11 @@ export function SegmentPanel({ document: doc, segment, label, metresPerPixel, un
         </div>
       </div>
       {section.shape === 'round' ? (
-        <LengthInput label="Diameter" kind="section" unitSystem={unitSystem} valueM={section.diameterM} onCommit={(value) => value && onSection({ shape: 'round', diameterM: value })} />
+        <LengthInput label="Diameter" kind="section" use="duct-size" unitSystem={unitSystem} valueM={section.diameterM} onCommit={(value) => value && onSection({ shape: 'round', diameterM: value })} />
       ) : (
         <div className="grid grid-cols-2 gap-2">
-          <LengthInput label="Width" kind="section" unitSystem={unitSystem} valueM={section.widthM} onCommit={(value) => value && onSection({ ...section, widthM: value })} />
-          <LengthInput label="Height" kind="section" unitSystem={unitSystem} valueM={section.heightM} onCommit={(value) => value && onSection({ ...section, heightM: value })} />
+          <LengthInput label="Width" kind="section" use="duct-size" unitSystem={unitSystem} valueM={section.widthM} onCommit={(value) => value && onSection({ ...section, widthM: value })} />
+          <LengthInput label="Height" kind="section" use="duct-size" unitSystem={unitSystem} valueM={section.heightM} onCommit={(value) => value && onSection({ ...section, heightM: value })} />
         </div>
       )}
       <div className="space-y-2">
@@ -75,7 +75,7 @@ export function SegmentPanel({ document: doc, segment, label, metresPerPixel, un
         </label>
         {segment.lining && (
           <div className="grid grid-cols-2 gap-2">
-            <LengthInput label="Lining thickness" kind="section" unitSystem={unitSystem} valueM={segment.lining.thicknessM} onCommit={(value) => value && onLining({ ...segment.lining!, thicknessM: value })} />
+            <LengthInput label="Lining thickness" kind="section" use="lining" unitSystem={unitSystem} valueM={segment.lining.thicknessM} onCommit={(value) => value && onLining({ ...segment.lining!, thicknessM: value })} />
             <NumberInput label="Absorption α (blank: by band)" value={segment.lining.absorption ?? null} min={0} max={1} allowEmpty
               onCommit={(value) => {
                 const { absorption: _old, ...rest } = segment.lining!;

@@ -2,10 +2,15 @@
 
 import type { Echo } from '@/lib/acoustic';
 import { echoPolyline } from './echo-geometry';
+import { spreadLabels } from '../rooms/chart-frame';
+import { signedFixed } from '@/lib/signed-number';
 
 const WIDTH = 320;
 const HEIGHT = 260;
 const MARGIN = { left: 52, right: 12, top: 18, bottom: 8 };
+const LABEL_FONT_PX = 8;
+/** Labels of arrivals close in time stand at least this far apart, px (the font's height and a little). */
+const LABEL_GAP_PX = 9.5;
 
 // Space-time diagram of the reflections seen from the start end: position along the run
 // across, time down. Upright reflections solid, inverted ones dashed, each labelled.
@@ -15,6 +20,11 @@ export function EchoChart({ echoes, lengthM, maxEchoes = 10 }: { echoes: Echo[];
   const lastS = shown[shown.length - 1].delayS;
   const x = (positionM: number) => MARGIN.left + (positionM / lengthM) * (WIDTH - MARGIN.left - MARGIN.right);
   const y = (timeS: number) => MARGIN.top + (timeS / lastS) * (HEIGHT - MARGIN.top - MARGIN.bottom);
+  const polylines = shown.map((echo) => echoPolyline(echo, lengthM));
+  // each label beside its arrival, moved down or up just enough to clear its neighbours; a short
+  // leader joins a moved label to its arrival
+  const tails = polylines.map((points) => points[points.length - 1]);
+  const labelYs = spreadLabels(tails.map((tail) => y(tail.timeS) - 2), LABEL_GAP_PX, MARGIN.top + LABEL_FONT_PX, HEIGHT);
   return (
     <figure>
       <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} className="w-full" role="img" aria-label={`Echo chart: ${shown.length} arrivals back at the start end, the last after ${(lastS * 1000).toFixed(1)} ms`}>
@@ -24,13 +34,15 @@ export function EchoChart({ echoes, lengthM, maxEchoes = 10 }: { echoes: Echo[];
         <text x={x(lengthM)} y={12} fontSize="9" textAnchor="end" fill="#5d626b">end {lengthM.toFixed(2)} m</text>
         {[0, 0.5, 1].map((fraction) => (
           <text key={fraction} x={MARGIN.left - 4} y={y(lastS * fraction) + 3} fontSize="8" textAnchor="end" fill="#5d626b" className="num">
-            {(lastS * fraction * 1000).toFixed(1)} ms
+            {signedFixed(lastS * fraction * 1000, 1)} ms
           </text>
         ))}
         {shown.map((echo, index) => {
-          const points = echoPolyline(echo, lengthM);
+          const points = polylines[index];
           const inverted = echo.amplitude < 0;
-          const tail = points[points.length - 1];
+          const tail = tails[index];
+          const labelY = labelYs[index];
+          const moved = Math.abs(labelY - (y(tail.timeS) - 2)) > 1;
           return (
             <g key={index} data-testid="echo-line" data-inverted={inverted}>
               <polyline
@@ -41,7 +53,8 @@ export function EchoChart({ echoes, lengthM, maxEchoes = 10 }: { echoes: Echo[];
                 strokeDasharray={inverted ? '4 3' : undefined}
                 opacity={Math.max(0.35, Math.min(1, Math.abs(echo.amplitude) * 2))}
               />
-              <text x={x(tail.positionM) + 3} y={y(tail.timeS) - 2} fontSize="8" fill="#25282d" className="num">
+              {moved && <line x1={x(tail.positionM)} y1={y(tail.timeS)} x2={x(tail.positionM) + 10} y2={labelY - 3} stroke="#a3a7ae" strokeWidth={0.5} />}
+              <text x={x(tail.positionM) + (moved ? 11 : 3)} y={labelY} fontSize={LABEL_FONT_PX} fill="#25282d" className="num" data-testid="echo-label">
                 {inverted ? '−' : '+'}{Math.abs(echo.amplitude).toFixed(2)}
               </text>
             </g>

@@ -6,6 +6,7 @@ import type { PlanDocument } from '@/lib/plan/document';
 import type { PlanLabels } from '@/lib/plan/labels';
 import { OUTLET_MOUNTING_WORDS, outletReflectionLosses } from '@/lib/plan/outlet-reflection-loss';
 import { formatLength, type UnitSystem } from '@/lib/plan/units';
+import { signedFixed } from '@/lib/signed-number';
 
 // The end reflection loss at each outlet of the chosen run, by octave band, worked from the drawing as it is now.
 export function OutletReflectionLossTable({ document, runId, labels, unitSystem }: { document: PlanDocument; runId: string; labels: PlanLabels; unitSystem: UnitSystem }) {
@@ -29,7 +30,7 @@ export function OutletReflectionLossTable({ document, runId, labels, unitSystem 
                     <span className="num">{outlet.label}</span>
                     <span className="block text-graphite-500">Ø {formatLength(outlet.diameterM, unitSystem, 'section')}, {OUTLET_MOUNTING_WORDS[outlet.mounting]}{outlet.rooms.length > 0 ? ` · ${outlet.rooms.join(', ')}` : ''}</span>
                   </th>
-                  {outlet.erlDb.map((db, index) => <td key={OCTAVE_BANDS_HZ[index]} className="num py-1 pr-1 text-right">{db.toFixed(1)}</td>)}
+                  {outlet.erlDb.map((db, index) => <td key={OCTAVE_BANDS_HZ[index]} className="num py-1 pr-1 text-right">{signedFixed(db, 1)}</td>)}
                 </tr>
               ))}
             </tbody>

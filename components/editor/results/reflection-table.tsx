@@ -2,6 +2,7 @@
 
 import type { Reflection } from '@/lib/acoustic';
 import { reflectionKindWords } from '@/lib/plan/reflection-words';
+import { signedFixed } from '@/lib/signed-number';
 
 // |R| per octave band at each discontinuity, with the phase in degrees on hover and in words for readers.
 export function ReflectionTable({ reflections, formatPosition, placeName }: { reflections: Reflection[]; formatPosition: (metres: number) => string; placeName?: (atM: number, kind: string) => string | null }) {
@@ -25,7 +26,7 @@ export function ReflectionTable({ reflections, formatPosition, placeName }: { re
               {reflection.bands.map((band) => {
                 const degrees = (band.phaseRad * 180) / Math.PI;
                 return (
-                  <td key={band.hz} className="num py-1 pr-1 text-right" title={`|R| ${band.magnitude.toFixed(3)}, phase ${degrees.toFixed(0)}°`}>
+                  <td key={band.hz} className="num py-1 pr-1 text-right" title={`|R| ${band.magnitude.toFixed(3)}, phase ${signedFixed(degrees, 0)}°`}>
                     {Math.abs(degrees) > 90 ? '−' : ''}{band.magnitude.toFixed(2)}
                   </td>
                 );

@@ -1,5 +1,6 @@
 // A flagged quantity in words: what the run adds at the tone, the resonance and the interval the tone sweeps, or a band level.
 import type { FlaggedQuantity, TreatmentEffect } from '@/lib/acoustic';
+import { signedFixed } from '@/lib/signed-number';
 
 /** A signed figure with a true minus sign: "+3.2", "−1.4". */
 export function formatSigned(value: number, digits = 1): string {
@@ -9,7 +10,7 @@ export function formatSigned(value: number, digits = 1): string {
 
 export function formatQuantity(quantity: FlaggedQuantity): string {
   if (quantity.levelDb !== undefined) {
-    return `${quantity.levelDb.toFixed(1)} dB${quantity.criterionDb !== undefined ? ` (criterion ${quantity.criterionDb.toFixed(1)} dB)` : ''}`;
+    return `${signedFixed(quantity.levelDb, 1)} dB${quantity.criterionDb !== undefined ? ` (criterion ${signedFixed(quantity.criterionDb, 1)} dB)` : ''}`;
   }
   const parts: string[] = [];
   if (quantity.gainDb !== undefined) parts.push(`the run adds ${formatSigned(quantity.gainDb)} dB`);
@@ -30,6 +31,6 @@ export function formatEffect(effect: TreatmentEffect | undefined): string {
   }
   if (effect.insertionLossDb) parts.push(`insertion loss at the tone ${formatSigned(effect.insertionLossDb[0])} to ${formatSigned(effect.insertionLossDb[1])} dB across the envelope`);
   if (effect.sidePeakDb !== undefined && effect.sidePeakHz !== undefined) parts.push(`side peak ${formatSigned(effect.sidePeakDb)} dB at ${effect.sidePeakHz.toFixed(1)} Hz`);
-  if (effect.bandLossDb) parts.push(`loss by band: ${effect.bandLossDb.map((lossDb, band) => `${BAND_NAMES[band]} ${lossDb.toFixed(1)}`).join(' · ')} dB`);
+  if (effect.bandLossDb) parts.push(`loss by band: ${effect.bandLossDb.map((lossDb, band) => `${BAND_NAMES[band]} ${signedFixed(lossDb, 1)}`).join(' · ')} dB`);
   return parts.join('; ');
 }

@@ -9,6 +9,7 @@ import { RoomList } from '../rooms/room-list';
 import { RiskList } from './risk-list';
 import { TreatmentList } from './treatment-list';
 import { TreatmentOptionsPanel } from './treatment-options';
+import { MIN_DRAWER_HEIGHT_PX, useDrawerHeight } from './use-drawer-height';
 
 type Tab = 'risks' | 'rooms' | 'treatments';
 
@@ -34,7 +35,8 @@ interface RiskDrawerProps {
 }
 
 // The bottom drawer: every risk flag across the plan, the rooms, and the chosen treatments. Its
-// height is fixed while open, so the canvas above keeps its size whatever the lists hold.
+// height does not follow what the lists hold, so the canvas above keeps its size; the person
+// drags its top edge (or uses the arrow keys on it) to make it taller or shorter, and the size is remembered.
 export function RiskDrawer(props: RiskDrawerProps) {
   // Until someone opens or hides it, the drawer is open only when there is something in it.
   const [chosenOpen, setOpen] = useState<boolean | null>(null);
@@ -47,9 +49,15 @@ export function RiskDrawer(props: RiskDrawerProps) {
     { name: 'rooms', label: `Rooms (${props.rooms.length})` },
     { name: 'treatments', label: `Treatments (${props.treatments.length})` },
   ];
+  const size = useDrawerHeight();
   const choose = (flag: PlacedFlag, option: TreatmentOption) => { props.onChoose(flag, option); setOpenFlag(null); setTab('treatments'); };
   return (
-    <section aria-label="Rooms and risks" className="shrink-0 border-t border-graphite-100 bg-paper-raised">
+    <section aria-label="Rooms and risks" className="relative shrink-0 border-t border-graphite-100 bg-paper-raised">
+      {open && (
+        <div role="separator" aria-orientation="horizontal" aria-label="Drawer height: drag or use the arrow keys" tabIndex={0}
+          aria-valuemin={MIN_DRAWER_HEIGHT_PX} aria-valuemax={size.maxPx} aria-valuenow={size.heightPx} data-testid="drawer-resize"
+          className="absolute inset-x-0 -top-1.5 z-10 h-3 cursor-row-resize touch-none focus-visible:bg-select/30 hover:bg-select/20" {...size.handle} />
+      )}
       <div className="flex items-center gap-1 px-3 pt-1" role="tablist">
         {tabs.map((candidate) => (
           <button key={candidate.name} type="button" role="tab" aria-selected={open && tab === candidate.name}
@@ -62,7 +70,7 @@ export function RiskDrawer(props: RiskDrawerProps) {
         <button type="button" className="btn-quiet ml-auto px-2 py-0.5 text-xs" aria-expanded={open} onClick={() => setOpen(!open)}>{open ? 'Hide' : 'Show'}</button>
       </div>
       {open && (
-        <div className="h-56 space-y-3 overflow-y-auto px-4 py-3" role="tabpanel">
+        <div className="space-y-3 overflow-y-auto px-4 py-3" role="tabpanel" style={{ height: size.heightPx }} data-testid="drawer-body">
           {props.error && <p role="alert" className="text-sm text-risk-ink">{props.error}</p>}
           {tab === 'risks' && (props.loading && !props.flags ? <p className="text-sm text-graphite-500">Checking the plan for risks…</p> : (
             <>

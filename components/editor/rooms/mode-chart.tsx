@@ -1,12 +1,17 @@
 'use client';
 
 import type { RoomMode } from '@/lib/acoustic';
-import { CHART, COOL, INK, linearScale, MUTED, RISK, ticks } from './chart-frame';
+import { CHART, COOL, frequencyTickText, INK, logScale, MUTED, octaveTicks, RISK } from './chart-frame';
 
 const MODE_HEIGHT = { axial: 56, tangential: 38, oblique: 20 } as const;
 const HEIGHT = 120;
 /** The chart reaches a little past the highest fan tone, so its labels fit. */
 const TONE_MARGIN = 1.15;
+/** The axis starts an octave-third below the lowest thing drawn, and never below 10 Hz. */
+const LOW_MARGIN = 1.25;
+const LOWEST_HZ = 10;
+/** Fan-tone labels closer than this, px, are left off (the triangles stay). */
+const TONE_LABEL_GAP_PX = 34;
 
 interface ModeChartProps {
   modes: RoomMode[];
@@ -17,26 +22,38 @@ interface ModeChartProps {
 
 // Room modes (tall: axial, middle: tangential, short: oblique) above the axis up to the Schroeder
 // frequency, a hatched band above it where they overlap; duct resonances (circles) and fan tones
-// (triangles) below it, all on one frequency axis.
+// (triangles) below it, all on one logarithmic frequency axis (each octave the same width, so the
+// low modes that matter most are not squeezed into the first few pixels).
 export function ModeChart({ modes, resonancesHz, fanTonesHz, schroederHz }: ModeChartProps) {
   const maxHz = Math.max(...modes.map((mode) => mode.frequencyHz), ...fanTonesHz.map((hz) => hz * TONE_MARGIN), 50);
-  const x = linearScale([0, maxHz], [CHART.left, CHART.width - CHART.right]);
+  const lowest = Math.min(...modes.map((mode) => mode.frequencyHz), ...resonancesHz.filter((hz) => hz > 0), ...fanTonesHz.filter((hz) => hz > 0), maxHz);
+  const minHz = Math.max(LOWEST_HZ, lowest / LOW_MARGIN);
+  const x = logScale([minHz, maxHz], [CHART.left, CHART.width - CHART.right]);
   const axisY = CHART.top + 62;
-  const shown = (hz: number) => hz > 0 && hz <= maxHz;
+  const shown = (hz: number) => hz >= minHz && hz <= maxHz;
+  // fan-tone labels that would run into the one before are left off
+  const toneLabels = fanTonesHz.filter(shown).reduce<{ lastPx: number; keep: boolean[] }>((acc, hz) => {
+    const keep = x(hz) - acc.lastPx >= TONE_LABEL_GAP_PX;
+    return { lastPx: keep ? x(hz) : acc.lastPx, keep: [...acc.keep, keep] };
+  }, { lastPx: -Infinity, keep: [] }).keep;
   const distinct = modes.filter((mode) => mode.frequencyHz <= schroederHz);
   return (
     <figure>
       <svg viewBox={`0 0 ${CHART.width} ${HEIGHT}`} className="w-full" role="img"
-        aria-label={`Mode chart to ${maxHz.toFixed(0)} Hz: ${distinct.length} distinct room modes, ${resonancesHz.filter(shown).length} duct resonances, ${fanTonesHz.filter(shown).length} fan tones`}>
+        aria-label={`Mode chart from ${minHz.toFixed(0)} to ${maxHz.toFixed(0)} Hz on a logarithmic axis: ${distinct.length} distinct room modes, ${resonancesHz.filter(shown).length} duct resonances, ${fanTonesHz.filter(shown).length} fan tones`}>
         <line x1={CHART.left} y1={axisY} x2={CHART.width - CHART.right} y2={axisY} stroke={MUTED} />
         <defs>
           <pattern id="overlap-hatch" width="4" height="4" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
             <line x1="0" y1="0" x2="0" y2="4" stroke={MUTED} strokeWidth="0.6" />
           </pattern>
         </defs>
-        {ticks(0, maxHz).map((hz) => (
-          <text key={hz} x={x(hz)} y={HEIGHT - 4} fontSize="8" textAnchor="middle" fill={MUTED} className="num">{hz} Hz</text>
+        {octaveTicks(minHz, maxHz).map((hz) => (
+          <g key={hz}>
+            <line x1={x(hz)} y1={axisY} x2={x(hz)} y2={axisY + 3} stroke={MUTED} />
+            <text x={x(hz)} y={HEIGHT - 4} fontSize="8" textAnchor="middle" fill={MUTED} className="num" data-testid="mode-chart-tick">{frequencyTickText(hz)}</text>
+          </g>
         ))}
+        <text x={CHART.width - CHART.right} y={HEIGHT - 14} fontSize="8" textAnchor="end" fill={MUTED}>Hz</text>
         {shown(schroederHz) && (
           <g>
             <rect x={x(schroederHz)} y={axisY - MODE_HEIGHT.axial} width={x(maxHz) - x(schroederHz)} height={MODE_HEIGHT.axial} fill="url(#overlap-hatch)" opacity={0.5} />
@@ -60,7 +77,7 @@ export function ModeChart({ modes, resonancesHz, fanTonesHz, schroederHz }: Mode
         {fanTonesHz.filter(shown).map((hz, index) => (
           <g key={index}>
             <polygon points={`${x(hz)},${axisY + 16} ${x(hz) - 4},${axisY + 24} ${x(hz) + 4},${axisY + 24}`} fill={RISK}><title>{`fan tone ${hz.toFixed(1)} Hz`}</title></polygon>
-            <text x={x(hz) + 5} y={axisY + 24} fontSize="8" fill={RISK} className="num">{index === 0 ? 'blade pass' : `${index + 1}×`}</text>
+            {toneLabels[index] && <text x={x(hz) + 5} y={axisY + 24} fontSize="8" fill={RISK} className="num">{index === 0 ? 'blade pass' : `${index + 1}×`}</text>}
           </g>
         ))}
       </svg>

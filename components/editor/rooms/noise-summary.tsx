@@ -2,6 +2,7 @@
 
 import type { RoomNoise } from '@/lib/plans/noise-path/room-noise';
 import { bandWords, correctionWords } from '@/lib/plans/noise-path/path-tables';
+import { signedFixed } from '@/lib/signed-number';
 
 // Each listener's ratings and least margin in one compact table for the room panel; the full path tables
 // open on a sheet over the canvas.
@@ -29,8 +30,8 @@ export function NoiseSummary({ noise, onShowTables }: { noise: RoomNoise; onShow
               <tr key={listener.listenerId} className="border-b border-graphite-100" data-testid="listener-summary">
                 <th scope="row" className="py-1 pr-2 text-left font-normal">{listener.name}{listener.listenerId === noise.worstListenerId && noise.listeners.length > 1 ? ' (the worst)' : ''}</th>
                 <td className="num py-1 pr-2 text-right">{listener.nc.toFixed(0)}</td>
-                <td className="num py-1 pr-2 text-right">{listener.nr.toFixed(1)}</td>
-                <td className="num py-1 pr-2 text-right">{listener.dba.toFixed(1)}</td>
+                <td className="num py-1 pr-2 text-right">{signedFixed(listener.nr, 1)}</td>
+                <td className="num py-1 pr-2 text-right">{signedFixed(listener.dba, 1)}</td>
                 <td className="py-1 pr-2 text-right">{bandWords(listener.governingHz)}</td>
                 <td className={`num py-1 text-right ${least < 0 ? 'text-risk-ink' : ''}`}>{least < 0 ? `${(-least).toFixed(1)} dB above` : `${least.toFixed(1)} dB below`}</td>
               </tr>

@@ -2,6 +2,7 @@
 
 import type { ImageSource } from '@/lib/acoustic';
 import { CHART, INK, linearScale, MUTED, ticks } from './chart-frame';
+import { signedFixed } from '@/lib/signed-number';
 
 const FLOOR_DB = -30;
 
@@ -22,7 +23,7 @@ export function Reflectogram({ images }: { images: ImageSource[] }) {
       <svg viewBox={`0 0 ${CHART.width} ${CHART.height}`} className="w-full" role="img" aria-label={`Reflectogram: ${images.length - 1} reflections within ${lastMs.toFixed(1)} ms of the direct sound`}>
         <line x1={CHART.left} y1={y(FLOOR_DB)} x2={CHART.width - CHART.right} y2={y(FLOOR_DB)} stroke={MUTED} />
         {ticks(0, lastMs).map((ms) => <text key={ms} x={x(ms)} y={CHART.height - 8} fontSize="8" textAnchor="middle" fill={MUTED} className="num">{ms} ms</text>)}
-        {[0, -10, -20, -30].map((db) => <text key={db} x={CHART.left - 4} y={y(db) + 3} fontSize="8" textAnchor="end" fill={MUTED} className="num">{db} dB</text>)}
+        {[0, -10, -20, -30].map((db) => <text key={db} x={CHART.left - 4} y={y(db) + 3} fontSize="8" textAnchor="end" fill={MUTED} className="num">{signedFixed(db, 0)} dB</text>)}
         {arrivals.map(({ image, levelDb }, index) => {
           const cx = x(image.delayAfterDirectS * 1000);
           const cy = y(levelDb);
@@ -30,7 +31,7 @@ export function Reflectogram({ images }: { images: ImageSource[] }) {
             <g key={index} data-testid="arrival">
               <line x1={cx} y1={y(FLOOR_DB)} x2={cx} y2={cy} stroke={INK} strokeWidth={0.7} />
               {image.order === 0 ? <rect x={cx - 3} y={cy - 3} width={6} height={6} fill={INK} /> : <circle cx={cx} cy={cy} r={2.5} fill={image.order === 1 ? INK : 'white'} stroke={INK} />}
-              <title>{`${image.order === 0 ? 'direct sound' : `${image.order}. order: ${image.surfacesHit.join(', ')}`}; ${(image.delayAfterDirectS * 1000).toFixed(1)} ms, ${levelDb.toFixed(1)} dB`}</title>
+              <title>{`${image.order === 0 ? 'direct sound' : `${image.order}. order: ${image.surfacesHit.join(', ')}`}; ${(image.delayAfterDirectS * 1000).toFixed(1)} ms, ${signedFixed(levelDb, 1)} dB`}</title>
             </g>
           );
         })}

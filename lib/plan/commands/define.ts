@@ -27,7 +27,8 @@ export type CommandName =
   | 'move-room'
   | 'delete-room'
   | 'add-treatment'
-  | 'remove-treatment';
+  | 'remove-treatment'
+  | 'set-grid-origin';
 
 export interface CommandResult {
   readonly doc: PlanDocument;

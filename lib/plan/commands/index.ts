@@ -13,6 +13,7 @@ import { setInserts, setLengthOverride, setLining, setSection, setWall } from '.
 import { splitSegment } from './split-segment';
 import { addRoom, deleteRoom, moveRoom, updateRoom } from './rooms';
 import { addTreatment, removeTreatment } from './treatments';
+import { setGridOrigin } from './grid-origin';
 
 export const COMMANDS = {
   'draw-segment': drawSegment,
@@ -35,6 +36,7 @@ export const COMMANDS = {
   'delete-room': deleteRoom,
   'add-treatment': addTreatment,
   'remove-treatment': removeTreatment,
+  'set-grid-origin': setGridOrigin,
 } as const satisfies { [Name in CommandName]: { name: Name } };
 
 export type CommandArgs<Name extends CommandName> = Parameters<(typeof COMMANDS)[Name]['perform']>[2];
@@ -66,6 +68,7 @@ export type { SetSectionArgs, SetLiningArgs, SetLengthOverrideArgs, SetInsertsAr
 export type { SetTerminationArgs, SetRunPropertiesArgs, ChooseEndArgs, RenumberRunArgs } from './run-properties';
 export type { AddRoomArgs, UpdateRoomArgs, MoveRoomArgs, DeleteRoomArgs } from './rooms';
 export type { AddTreatmentArgs, RemoveTreatmentArgs } from './treatments';
+export type { SetGridOriginArgs } from './grid-origin';
 export { applyPlanChange } from './treatments';
 export { KEY_BINDINGS, matchKeyBinding } from './key-bindings';
 export type { EditorAction, KeyBinding, KeyPress } from './key-bindings';

@@ -12,6 +12,7 @@ export type EditorAction =
   | 'tool-room'
   | 'tool-pan'
   | 'tool-scale'
+  | 'tool-origin'
   | 'cancel';
 
 export interface KeyBinding {
@@ -29,6 +30,7 @@ export const KEY_BINDINGS: readonly KeyBinding[] = [
   { keys: 'R', action: 'tool-room', description: 'Draw a room from two opposite corners' },
   { keys: 'H', action: 'tool-pan', description: 'Pan: drag to move around the plan' },
   { keys: 'K', action: 'tool-scale', description: 'Set the scale from two points and their real distance' },
+  { keys: 'G', action: 'tool-origin', description: 'Start the grid at a point you click' },
   { keys: 'Delete', action: 'delete-selection', description: 'Delete the selection' },
   { keys: 'Backspace', action: 'delete-selection', description: 'Delete the selection' },
   { keys: 'Ctrl+Z', action: 'undo', description: 'Undo' },

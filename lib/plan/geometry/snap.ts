@@ -14,6 +14,8 @@ export interface SnapOptions {
   angleStepDeg?: number | null;
   /** Grid spacing in pixels; null or 0 turns grid snapping off. */
   gridSpacingPx?: number | null;
+  /** Where the grid starts (a line crossing), plan pixels; the plan's corner when absent. */
+  gridOrigin?: Point | null;
 }
 
 export type SnapTarget =
@@ -29,9 +31,14 @@ export interface SnapResult {
 
 export const DEFAULT_NODE_RADIUS_PX = 8;
 
-export function snapToGrid(point: Point, spacingPx: number): Point {
+/** The nearest grid crossing; the grid's lines pass through the origin (default the plan's corner). */
+export function snapToGrid(point: Point, spacingPx: number, origin: Point | null = null): Point {
   if (!(spacingPx > 0)) return point;
-  return { x: Math.round(point.x / spacingPx) * spacingPx, y: Math.round(point.y / spacingPx) * spacingPx };
+  const start = origin ?? { x: 0, y: 0 };
+  return {
+    x: start.x + Math.round((point.x - start.x) / spacingPx) * spacingPx,
+    y: start.y + Math.round((point.y - start.y) / spacingPx) * spacingPx,
+  };
 }
 
 /**
@@ -63,6 +70,6 @@ export function snapPoint(point: Point, options: SnapOptions = {}): SnapResult {
     const snapped = snapToAngle(point, anchor, options.angleStepDeg, grid);
     return { point: snapped.point, target: { kind: 'angle', angleDeg: snapped.angleDeg, onGrid: grid !== null } };
   }
-  if (grid !== null) return { point: snapToGrid(point, grid), target: { kind: 'grid' } };
+  if (grid !== null) return { point: snapToGrid(point, grid, options.gridOrigin ?? null), target: { kind: 'grid' } };
   return { point, target: { kind: 'none' } };
 }

@@ -17,7 +17,7 @@ export interface Finish {
  * against the product's own test data. Those tables stop at 125 Hz and 4 kHz; the 63 Hz and 8 kHz
  * values repeat the nearest band (product rule), which is a guess.
  */
-const FROM_MEMORY = 'From memory: typical textbook-table values, 125 Hz to 4 kHz; 63 Hz and 8 kHz repeat the nearest band. Check against the product data.';
+const FROM_MEMORY = 'Typical values for this kind of finish, not one product’s: check them against the maker’s published data. 63 Hz and 8 kHz repeat the nearest band.';
 
 /** Builds the 8 bands from the six printed ones by repeating the end bands. */
 const bands = (hz125: number, hz250: number, hz500: number, hz1k: number, hz2k: number, hz4k: number): readonly number[] =>

@@ -1,7 +1,8 @@
 // Lengths typed in any unit ("300 mm", "12 in", "1 ft 6 in", "1' 6\"", "6 1/2 in"), read with mathjs units,
 // and lengths shown in SI or imperial. Inside the model everything is metres.
 // A comma is a decimal separator ("1,5 m" = 1.5 m); a comma followed by exactly three digits
-// ("1,500") is refused as ambiguous, and so is a text with both a comma and a point.
+// ("1,500") is refused as ambiguous, and so is a text with both a comma and a point. Digits may
+// be grouped in threes with a plain, thin or no-break space ("10 000 mm", "10\u2009000 mm").
 import { unit as mathUnit } from 'mathjs';
 
 export type LengthUnit = 'm' | 'mm' | 'ft' | 'in';
@@ -53,8 +54,15 @@ function readTerms(text: string): Term[] | string {
   return terms;
 }
 
+// Groups of three digits after a space of any width ("10 000", "1 250 000"), not a fraction ("6 1/2").
+const DIGIT_GROUPS = /(^|[^\d.,])(\d{1,3}(?:[ \u00a0\u2009\u202f]\d{3})+)(?![\d/])/g;
+
+function joinDigitGroups(text: string): string {
+  return text.replace(DIGIT_GROUPS, (_match, before: string, grouped: string) => `${before}${grouped.replace(/[ \u00a0\u2009\u202f]/g, '')}`);
+}
+
 function normalise(text: string): string | { message: string } {
-  let result = text.trim().toLowerCase().replace(/[″“”]/g, '"').replace(/[′’‘]/g, "'");
+  let result = joinDigitGroups(text.trim().toLowerCase().replace(/[″“”]/g, '"').replace(/[′’‘]/g, "'").replace(/\u2212/g, '-'));
   if (result === '') return { message: 'Type a length, for example 300 mm, 2.5 m, 12 in or 1 ft 6 in.' };
   if (/^-|\s-\s*\d/.test(result)) return { message: 'A length cannot be negative.' };
   if (result.includes(',')) {
@@ -72,6 +80,12 @@ function formatNumber(value: number, maxDecimals: number): string {
 /** The value in SI as a person would say it: mm below 1 m, otherwise m. */
 function describeSi(valueM: number): string {
   return valueM < 1 ? `${formatNumber(valueM * 1000, 2)} mm` : `${formatNumber(valueM, 4)} m`;
+}
+
+/** The unit a bare number is read in: SI sections mm, runs m; imperial sections in, runs ft. */
+export function defaultLengthUnit(system: UnitSystem, kind: LengthKind): LengthUnit {
+  if (system === 'si') return kind === 'section' ? 'mm' : 'm';
+  return kind === 'section' ? 'in' : 'ft';
 }
 
 export function parseLength(text: string, options: ParseLengthOptions): ParsedLength {
@@ -111,6 +125,8 @@ export function parseLength(text: string, options: ParseLengthOptions): ParsedLe
 const METRES_PER_INCH = 0.0254;
 const QUARTERS_PER_FOOT = 48;
 const FRACTIONS = ['', ' 1/4', ' 1/2', ' 3/4'];
+/** 0.001 in = 0.0254 mm: within 0.013 mm, so 0.1 mm shown in SI comes back unchanged. */
+const SECTION_INCH_DECIMALS = 3;
 
 /** Feet and inches to the nearest 1/4 in: "12 ft 3 1/4 in", "6 1/2 in" under a foot. */
 function feetAndInches(valueM: number): string {
@@ -123,10 +139,20 @@ function feetAndInches(valueM: number): string {
 
 /**
  * SI: run lengths in m with 2 decimals, sections in mm (to 0.1 mm).
- * Imperial: run lengths in ft-in to the nearest 1/4 in, sections in inches (to 0.01 in).
+ * Imperial: run lengths in ft-in to the nearest 1/4 in, sections in inches to 0.001 in, so a
+ * whole millimetre shown in inches reads back to the same millimetre (23.622 in, not 23.62 in).
  */
 export function formatLength(valueM: number, system: UnitSystem, kind: LengthKind): string {
   if (!Number.isFinite(valueM)) return '—';
   if (system === 'si') return kind === 'run' ? `${valueM.toFixed(2)} m` : `${formatNumber(valueM * 1000, 1)} mm`;
-  return kind === 'run' ? feetAndInches(valueM) : `${formatNumber(valueM / METRES_PER_INCH, 2)} in`;
+  return kind === 'run' ? feetAndInches(valueM) : `${formatNumber(valueM / METRES_PER_INCH, SECTION_INCH_DECIMALS)} in`;
+}
+
+/**
+ * What a length field keeps when the person commits text: the value it holds when the text reads
+ * as the value already shown (retyping "23.622 in" leaves 600 mm exactly 600 mm), else the reading.
+ */
+export function keptLength(readM: number, currentM: number | null, system: UnitSystem, kind: LengthKind): number {
+  if (currentM === null) return readM;
+  return formatLength(readM, system, kind) === formatLength(currentM, system, kind) ? currentM : readM;
 }

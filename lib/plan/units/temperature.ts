@@ -14,12 +14,12 @@ export function celsiusToFahrenheit(valueC: number): number {
   return valueC * 1.8 + 32;
 }
 
-const TEMPERATURE = /^\s*([+-]?\d+(?:[.,]\d+)?)\s*(?:°\s*)?(c|f|degc|degf|celsius|fahrenheit)?\s*$/i;
+const TEMPERATURE = /^\s*([+\-\u2212]?\d+(?:[.,]\d+)?)\s*(?:°\s*)?(c|f|degc|degf|celsius|fahrenheit)?\s*$/i;
 
 export function parseTemperature(text: string, options: { defaultUnit: TemperatureUnit }): ParsedTemperature {
   const match = TEMPERATURE.exec(text);
   if (!match) return { ok: false, message: `"${text.trim()}" is not a temperature; type for example 20 °C or 68 °F.` };
-  const value = Number(match[1].replace(',', '.'));
+  const value = Number(match[1].replace(',', '.').replace('\u2212', '-'));
   const unitText = (match[2] ?? options.defaultUnit).toLowerCase();
   const unit: TemperatureUnit = unitText.startsWith('f') || unitText === 'degf' ? 'F' : 'C';
   const valueC = unit === 'C' ? value : fahrenheitToCelsius(value);
@@ -31,5 +31,6 @@ export function parseTemperature(text: string, options: { defaultUnit: Temperatu
 /** One decimal, in °C (SI) or °F (imperial). */
 export function formatTemperature(valueC: number, system: UnitSystem): string {
   if (!Number.isFinite(valueC)) return '—';
-  return system === 'si' ? `${valueC.toFixed(1)} °C` : `${celsiusToFahrenheit(valueC).toFixed(1)} °F`;
+  const shown = system === 'si' ? valueC : celsiusToFahrenheit(valueC);
+  return `${shown.toFixed(1).replace('-', '\u2212')} °${system === 'si' ? 'C' : 'F'}`;
 }

@@ -14,7 +14,13 @@ import { otherFields } from './words';
 
 export type { ChangeArea, DocumentChange } from './types';
 
-const DESCRIBED_DOCUMENT: readonly (keyof PlanDocument)[] = ['schemaVersion', 'nodes', 'segments', 'runs', 'rooms', 'treatments'];
+const DESCRIBED_DOCUMENT: readonly (keyof PlanDocument)[] = ['schemaVersion', 'nodes', 'segments', 'runs', 'rooms', 'treatments', 'gridOrigin'];
+
+/** Where the grid starts, measured on the plan from the drawing's top-left corner. */
+function gridOriginWords(origin: PlanDocument['gridOrigin'], metresPerPixel: number, units: UnitSystem): string {
+  if (!origin) return 'the drawing’s corner';
+  return `${formatLength(origin.x * metresPerPixel, units, 'run')} across, ${formatLength(origin.y * metresPerPixel, units, 'run')} down`;
+}
 
 function scaleWords(metresPerPixel: number, units: UnitSystem): string {
   return `1 px = ${formatLength(metresPerPixel, units, 'section')}`;
@@ -34,6 +40,8 @@ export function documentChanges(
   if (before.document.schemaVersion !== after.document.schemaVersion) {
     lines.push({ area: 'plan', subject: 'Plan', what: 'Document format', before: `version ${before.document.schemaVersion}`, after: `version ${after.document.schemaVersion}` });
   }
+  const [originBefore, originAfter] = [gridOriginWords(before.document.gridOrigin, before.metresPerPixel, units), gridOriginWords(after.document.gridOrigin, after.metresPerPixel, units)];
+  if (originBefore !== originAfter) lines.push({ area: 'plan', subject: 'Plan', what: 'Grid origin', before: originBefore, after: originAfter });
   for (const other of otherFields(before.document, after.document, DESCRIBED_DOCUMENT)) {
     lines.push({ area: 'plan', subject: 'Plan', what: other.field, before: other.before, after: other.after });
   }

@@ -62,6 +62,7 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/plans/[planId]/treatments/evaluate': 'analysis.run',
   'POST /api/v1/plans/[planId]/background': 'plan.edit',
   'DELETE /api/v1/plans/[planId]/background': 'plan.edit',
+  'PUT /api/v1/plans/[planId]/background': 'plan.edit',
   'GET /api/v1/uploads/[uploadId]': 'plan.read',
   'DELETE /api/v1/team/members/[memberId]': 'members.manage',
   'GET /api/v1/plans/[planId]/revisions': 'plan.read',

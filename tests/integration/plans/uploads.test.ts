@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { POST as uploadBackground } from '@/app/api/v1/plans/[planId]/background/route';
+import { POST as uploadBackground, PUT as restoreBackground } from '@/app/api/v1/plans/[planId]/background/route';
 import { GET as getUpload } from '@/app/api/v1/uploads/[uploadId]/route';
 import { sequelize } from '@/lib/db';
 import { createPlan } from '@/lib/plans/data';
@@ -107,5 +107,32 @@ describe('plan backgrounds', () => {
     const answer = await upload('huge.png', big, 'image/png');
     expect(answer.status).toBe(413);
     expect(answer.body.error?.message).toContain('over 20 MB');
+  });
+});
+
+describe('undoing a drawing upload (product behaviour, no outside source)', () => {
+  async function restore(uploadId: string | null, role: 'acoustician' | 'viewer' = 'acoustician') {
+    const request = new Request(`http://localhost/api/v1/plans/${planId}/background`, {
+      method: 'PUT', headers: { cookie: await team.cookieFor(role), host: 'localhost', 'content-type': 'application/json' }, body: JSON.stringify({ uploadId }),
+    });
+    const response = await restoreBackground(request, { params: Promise.resolve({ planId }) });
+    return { status: response.status, body: (await response.json()) as { background?: { id: string } | null; error?: { code: string; field?: string } } };
+  }
+
+  it('puts back the earlier drawing, or none; refuses another team\'s upload and a reader', async () => {
+    const first = await upload('first.png', tinyPng(20, 10), 'image/png');
+    const second = await upload('second.png', tinyPng(30, 10), 'image/png');
+    expect((await Plan.findByPk(planId))?.backgroundUploadId).toBe(second.body.upload!.id);
+    const back = await restore(first.body.upload!.id);
+    expect(back.status).toBe(200);
+    expect((await Plan.findByPk(planId))?.backgroundUploadId).toBe(first.body.upload!.id);
+    expect((await restore(null)).status).toBe(200);
+    expect((await Plan.findByPk(planId))?.backgroundUploadId).toBeNull();
+
+    const other = await createTestTeam('uploads-other');
+    const foreign = await Upload.create({ teamId: other.team.id, uploadedById: other.members.acoustician.id, storageKey: 'teams/x/plans/y', fileName: 'theirs.png', contentType: 'image/png', bytes: 1, sha256: '0'.repeat(64), widthPx: 10, heightPx: 10 });
+    expect(await restore(foreign.id)).toMatchObject({ status: 404, body: { error: { code: 'not_found', field: 'uploadId' } } });
+    expect((await restore(first.body.upload!.id, 'viewer')).status).toBe(403);
+    expect((await Plan.findByPk(planId))?.backgroundUploadId).toBeNull();
   });
 });

@@ -78,6 +78,7 @@ describe('documentChanges', () => {
       outlets: () => ({ ...withTreatment, outlets: [{ legacy: true }] }),
       listeners: () => ({ ...withTreatment, listeners: [{ legacy: true }] }),
       treatments: () => ({ ...withTreatment, treatments: [] }),
+      gridOrigin: () => ({ ...withTreatment, gridOrigin: { x: 120, y: 40 } }),
     },
     segments: {
       id: () => ({ ...withTreatment, segments: withTreatment.segments.map((segment) => (segment.id === 'riser' ? { ...segment, id: 'riser-2' } : segment)) }),

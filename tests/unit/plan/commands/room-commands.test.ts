@@ -114,8 +114,8 @@ describe('finish library', () => {
     for (const finish of FINISHES) {
       expect(finish.absorption).toHaveLength(8);
       for (const value of finish.absorption) expect(value >= 0 && value <= 1).toBe(true);
-      // the values are written from memory (typical textbook-table values), and the source says so
-      expect(finish.source).toMatch(/^From memory/);
+      // the values are written from memory (typical textbook-table values); the person is told plainly to check them
+      expect(finish.source).toMatch(/^Typical values .*check them against the maker’s published data/);
     }
     expect(new Set(FINISHES.map((finish) => finish.id)).size).toBe(FINISHES.length);
   });

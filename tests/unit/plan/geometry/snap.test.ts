@@ -8,6 +8,12 @@ describe('snapping', () => {
     expect(snapPoint({ x: 23, y: 38 }, { gridSpacingPx: 10 })).toEqual({ point: { x: 20, y: 40 }, target: { kind: 'grid' } });
   });
 
+  it('a grid with an origin has its lines through the origin (worked by hand)', () => {
+    // Lines at 3 + 10k and 7 + 10k: 23 → 23, 38 → 37.
+    expect(snapToGrid({ x: 23, y: 38 }, 10, { x: 3, y: 7 })).toEqual({ x: 23, y: 37 });
+    expect(snapPoint({ x: -9, y: 1 }, { gridSpacingPx: 10, gridOrigin: { x: 3, y: 7 } }).point).toEqual({ x: -7, y: -3 });
+  });
+
   it('projects onto 0/45/90° rays from the anchor', () => {
     const horizontal = snapToAngle({ x: 100, y: 7 }, { x: 0, y: 0 }, 45);
     expect(horizontal.angleDeg).toBe(0);

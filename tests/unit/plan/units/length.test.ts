@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatLength, parseLength } from '@/lib/plan/units';
+import { defaultLengthUnit, formatLength, gridStepM, keptLength, parseLength, plausibilityWarning } from '@/lib/plan/units';
 
 // Exact definitions: 1 in = 25.4 mm and 1 ft = 12 in = 0.3048 m (international yard and pound agreement, 1959;
 // NIST SP 811, appendix B). Results are rounded to the picometre, so these compare exactly.
@@ -71,7 +71,7 @@ describe('formatLength', () => {
     expect(formatLength(6.5 * IN_M, 'imperial', 'run')).toBe('6 1/2 in');
     expect(formatLength(FT_M * 2 + 11.9 * IN_M, 'imperial', 'run')).toBe('3 ft 0 in');
     expect(formatLength(10 * IN_M, 'imperial', 'section')).toBe('10 in');
-    expect(formatLength(0.25, 'imperial', 'section')).toBe('9.84 in');
+    expect(formatLength(0.25, 'imperial', 'section')).toBe('9.843 in'); // 250 / 25.4 = 9.8425…
   });
 
   it('what it shows reads back to the same rounded value', () => {
@@ -80,5 +80,73 @@ describe('formatLength', () => {
       const read = parseLength(shown, { defaultUnit: 'ft' });
       expect(read.ok && Math.abs(read.valueM - valueM) <= IN_M / 8).toBe(true);
     }
+  });
+});
+
+describe('digit grouping and the default unit', () => {
+  it('reads digits grouped in threes with a plain, thin, narrow or no-break space', () => {
+    expect(valueOf('10 000 mm')).toBe(10);
+    expect(valueOf('10\u2009000 mm')).toBe(10);
+    expect(valueOf('10\u202f000 mm')).toBe(10);
+    expect(valueOf('10\u00a0000 mm')).toBe(10);
+    expect(valueOf('1 250 000', 'mm')).toBe(1250);
+    expect(valueOf('12 500,5 mm')).toBe(12.5005);
+    // Mixed numbers and feet-and-inches are not digit groups.
+    expect(valueOf('6 1/2 in')).toBe(0.1651);
+    expect(valueOf('1 ft 6 in')).toBe(0.4572);
+  });
+
+  it('a bare number is read in the field\'s unit for the person\'s system', () => {
+    expect(defaultLengthUnit('si', 'section')).toBe('mm');
+    expect(defaultLengthUnit('si', 'run')).toBe('m');
+    expect(defaultLengthUnit('imperial', 'section')).toBe('in');
+    expect(defaultLengthUnit('imperial', 'run')).toBe('ft');
+    expect(valueOf('12', defaultLengthUnit('si', 'run'))).toBe(12);
+    expect(valueOf('12', defaultLengthUnit('imperial', 'run'))).toBe(3.6576); // 12 × 0.3048 m
+  });
+
+  it('reads a typographic minus as a minus (and refuses the negative length)', () => {
+    expect(valueOf('\u22123 m')).toBe('A length cannot be negative.');
+  });
+});
+
+describe('the imperial round trip', () => {
+  it('retyping the shown inches gives back the exact millimetre', () => {
+    // 600 mm = 23.622047… in (600 / 25.4); shown to 0.001 in, read back and kept.
+    const shown = formatLength(0.6, 'imperial', 'section');
+    expect(shown).toBe('23.622 in');
+    const read = parseLength(shown, { defaultUnit: 'in' });
+    expect(read.ok && formatLength(read.valueM, 'si', 'section')).toBe('600 mm');
+    expect(read.ok && keptLength(read.valueM, 0.6, 'imperial', 'section')).toBe(0.6);
+  });
+
+  it('a different value typed is taken as read', () => {
+    const read = parseLength('24 in', { defaultUnit: 'in' });
+    expect(read.ok && keptLength(read.valueM, 0.6, 'imperial', 'section')).toBe(0.6096); // 24 × 25.4 mm
+  });
+
+  it('every whole millimetre from 50 to 2500 shown in inches reads back to the same millimetre', () => {
+    for (let millimetres = 50; millimetres <= 2500; millimetres += 1) {
+      const read = parseLength(formatLength(millimetres / 1000, 'imperial', 'section'), { defaultUnit: 'in' });
+      expect(read.ok && Math.round(read.valueM * 1e4) / 10).toBe(millimetres);
+    }
+  });
+});
+
+describe('plausibility warnings (common practice, no source: duct 50 mm to 2.5 m, liner 6 to 100 mm)', () => {
+  it('warns about a 5 m duct and a 2 mm duct but not a 250 mm one', () => {
+    expect(plausibilityWarning(5, 'duct-size', 'si')).toMatch(/^5000 mm is larger than ducts are usually made/);
+    expect(plausibilityWarning(0.002, 'duct-size', 'si')).toMatch(/^2 mm is smaller than ducts are usually made/);
+    expect(plausibilityWarning(0.25, 'duct-size', 'si')).toBeNull();
+    expect(plausibilityWarning(0.025, 'lining', 'si')).toBeNull();
+    expect(plausibilityWarning(0.3, 'lining', 'imperial')).toMatch(/^11.811 in is larger than duct linings/);
+  });
+});
+
+describe('grid steps', () => {
+  it('are round in each system: 0.5 m, and 1 ft = 0.3048 m exactly', () => {
+    expect(gridStepM('si')).toBe(0.5);
+    expect(gridStepM('imperial')).toBe(FT_M);
+    expect(formatLength(gridStepM('imperial'), 'imperial', 'run')).toBe('1 ft 0 in');
   });
 });

@@ -22,11 +22,11 @@ describe('words at a duct end', () => {
     it(`pointing ${degrees}°: name, termination word and outlet word stand apart and off the duct`, () => {
       const awayRad = (degrees * Math.PI) / 180;
       const nameAt = endNamePlace(end, awayRad, 'A12 end'.length, 1);
-      const name: Box = { ...nameAt, width: 7 * 6, height: END_NAME_FONT_PX };
-      const terminationAt = endWordPlace(end, awayRad, 'left', 'open, flanged'.length, 10, 0, 1);
-      const termination: Box = { ...terminationAt, width: 13 * 0.56 * 10, height: 12 };
-      const outletAt = endWordPlace(end, awayRad, 'right', 'outlet 2'.length, 9, 1.5, 1);
-      const outlet: Box = { ...outletAt, width: 8 * 0.56 * 9 + 3, height: 9 * 1.2 + 3 };
+      const name: Box = { ...nameAt, width: 7 * 0.6 * END_NAME_FONT_PX, height: END_NAME_FONT_PX };
+      const terminationAt = endWordPlace(end, awayRad, 'left', 'open, flanged'.length, 12, 0, 1);
+      const termination: Box = { ...terminationAt, width: 13 * 0.56 * 12, height: 12 * 1.2 };
+      const outletAt = endWordPlace(end, awayRad, 'right', 'outlet 2'.length, 11, 1.5, 1);
+      const outlet: Box = { ...outletAt, width: 8 * 0.56 * 11 + 3, height: 11 * 1.2 + 3 };
       expect(overlaps(name, termination)).toBe(false);
       expect(overlaps(name, outlet)).toBe(false);
       expect(overlaps(termination, outlet)).toBe(false);

@@ -2,7 +2,8 @@ import { auditActorOf } from '@/lib/audit/record';
 import { AppError } from '@/lib/errors';
 import { json, route } from '@/lib/http/route';
 import { getPlan, setPlanBackground } from '@/lib/plans/data';
-import { MAX_UPLOAD_BYTES, storePlanBackground } from '@/lib/uploads/data';
+import { planBackgroundSchema } from '@/lib/plans/schemas';
+import { MAX_UPLOAD_BYTES, requirePlanDrawing, storePlanBackground } from '@/lib/uploads/data';
 
 type Params = { planId: string };
 
@@ -20,6 +21,15 @@ export const POST = route<Params>({ access: 'plan.edit', maxBodyBytes: MAX_UPLOA
   const upload = await storePlanBackground(team!.teamId, actor!.user.id, file.name, new Uint8Array(await file.arrayBuffer()));
   await setPlanBackground(team!.teamId, auditActorOf(actor!), params.planId, upload.id);
   return json({ upload }, 201);
+});
+
+// Undo an upload: back to the drawing the plan had before (an earlier upload of this team), or to none.
+export const PUT = route<Params>({ access: 'plan.edit', maxBodyBytes: 1024 }, async ({ team, actor, params, readJson }) => {
+  await getPlan(team!.teamId, params.planId);
+  const { uploadId } = await readJson(planBackgroundSchema);
+  const upload = uploadId === null ? null : await requirePlanDrawing(team!.teamId, uploadId);
+  await setPlanBackground(team!.teamId, auditActorOf(actor!), params.planId, upload?.id ?? null);
+  return json({ background: upload });
 });
 
 // Back to a blank grid.
