@@ -34,7 +34,7 @@ async function closeRoom(page: Page): Promise<void> {
 /** The margins at the first listener (L1). */
 async function margins(page: Page): Promise<number[]> {
   const cells = await page.getByTestId('path-margin').first().locator('td').allInnerTexts();
-  return cells.map(Number);
+  return cells.map((text) => Number(text.replace('−', '-'))); // displayed with a true minus sign
 }
 
 test('fan spectrum in, path table and spectrum out; a silencer raises the margin and clears a level flag; a viewer reads it', async ({ page, browser }, testInfo) => {

@@ -26,7 +26,7 @@ test('a fan tone meeting a resonance of the run feeding a room is flagged with i
   await drawer.getByRole('tab', { name: /^Rooms/ }).click();
   await drawer.getByRole('button', { name: 'Open Recital room' }).click();
   const roomPanel = page.getByTestId('room-panel');
-  await expect(roomPanel.getByRole('img', { name: /^Mode chart to/ })).toBeVisible();
+  await expect(roomPanel.getByRole('img', { name: /^Mode chart from/ })).toBeVisible();
   await expect(roomPanel.getByRole('img', { name: /^Reflectogram/ })).toBeVisible();
   await expect(roomPanel.getByRole('img', { name: /^Spectrum against NC 25/ })).toBeVisible();
   await roomPanel.getByTestId('room-results').screenshot({ path: testInfo.outputPath('room-results.png') });
@@ -94,7 +94,7 @@ test('the Room tool draws a room at the plan scale and its form takes any unit',
   await page.getByLabel("Corner from the plan's left").fill('2 m');
   await page.getByLabel("Corner from the plan's left").press('Enter');
   await page.getByLabel('Floor').selectOption('carpet-on-concrete');
-  await expect(roomPanel.getByText(/From memory/).first()).toBeVisible();
+  await expect(roomPanel.getByText(/check them against the maker’s published data/).first()).toBeVisible();
   await waitForSaved(page);
   const saved = await Plan.findByPk(plan.id);
   const rooms = (saved?.document as ReturnType<typeof roomPlanDocument>).rooms;

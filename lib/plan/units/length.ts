@@ -148,11 +148,17 @@ export function formatLength(valueM: number, system: UnitSystem, kind: LengthKin
   return kind === 'run' ? feetAndInches(valueM) : `${formatNumber(valueM / METRES_PER_INCH, SECTION_INCH_DECIMALS)} in`;
 }
 
+/** Readings closer than this, relative, are the same length (rounding of the shown digits only). */
+const SAME_READING_RELATIVE = 1e-9;
+
 /**
  * What a length field keeps when the person commits text: the value it holds when the text reads
- * as the value already shown (retyping "23.622 in" leaves 600 mm exactly 600 mm), else the reading.
+ * as exactly the value already shown (retyping "23.622 in" leaves 600 mm exactly 600 mm), else the
+ * reading ("9 ft 10 in" over a shown "3.00 m" is 2.9972 m, though both show as 3.00 m).
  */
 export function keptLength(readM: number, currentM: number | null, system: UnitSystem, kind: LengthKind): number {
   if (currentM === null) return readM;
-  return formatLength(readM, system, kind) === formatLength(currentM, system, kind) ? currentM : readM;
+  const shown = parseLength(formatLength(currentM, system, kind), { defaultUnit: defaultLengthUnit(system, kind) });
+  if (!shown.ok) return readM;
+  return Math.abs(readM - shown.valueM) <= SAME_READING_RELATIVE * Math.max(Math.abs(readM), 1e-12) ? currentM : readM;
 }

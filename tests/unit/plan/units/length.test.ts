@@ -125,6 +125,13 @@ describe('the imperial round trip', () => {
     expect(read.ok && keptLength(read.valueM, 0.6, 'imperial', 'section')).toBe(0.6096); // 24 × 25.4 mm
   });
 
+  it('a value in other units that shows the same as the current one is still taken as typed', () => {
+    // 9 ft 10 in = 118 × 0.0254 m = 2.9972 m (international inch), shown as "3.00 m" like the 3 m it replaces
+    const read = parseLength('9 ft 10 in', { defaultUnit: 'm' });
+    expect(read.ok && formatLength(read.valueM, 'si', 'run')).toBe(formatLength(3, 'si', 'run'));
+    expect(read.ok && keptLength(read.valueM, 3, 'si', 'run')).toBeCloseTo(2.9972, 12);
+  });
+
   it('every whole millimetre from 50 to 2500 shown in inches reads back to the same millimetre', () => {
     for (let millimetres = 50; millimetres <= 2500; millimetres += 1) {
       const read = parseLength(formatLength(millimetres / 1000, 'imperial', 'section'), { defaultUnit: 'in' });
