@@ -13,17 +13,20 @@ import { call } from '../helpers/routes';
 
 afterAll(async () => { await closeComputePool(); await sequelize.close(); });
 
-/** Long enough to keep a worker busy for seconds: many short segments of changing size over a wide band. */
+/**
+ * Long enough to keep a worker busy for seconds: many short segments of changing size, rigid walls (the
+ * sharpest resonances) over a wide band, some 1,800 resonances: about 2 s of one thread here.
+ */
 const heavyRun = {
   segments: Array.from({ length: 2000 }, (_, index) => ({ lengthM: 0.2, section: { shape: 'round', diameterM: 0.1 + (index % 5) * 0.01 } })),
-  start: { kind: 'closed' }, end: { kind: 'open', flange: 'unflanged' }, maxHz: 400,
+  walls: { kind: 'rigid' }, start: { kind: 'closed' }, end: { kind: 'open', flange: 'unflanged' }, maxHz: 800,
 };
 
 describe('compute budget', () => {
   it('stops a job past its time limit with a 422 that says what to reduce, while health checks are answered meanwhile', async () => {
     expect((await call(health, 'GET', '/api/v1/health', {})).status).toBe(200); // the database connection is open
     let settled = false;
-    const job = compute({ kind: 'analyze-run', input: heavyRun }, { reduce: "the run's length", timeLimitMs: 1500 }).then(
+    const job = compute({ kind: 'analyze-run', input: heavyRun }, { reduce: "the run's length", timeLimitMs: 300 }).then(
       () => { settled = true; return null as unknown; },
       (error: unknown) => { settled = true; return error; },
     );
@@ -38,11 +41,11 @@ describe('compute budget', () => {
   });
 
   it('counts a job’s time limit from when it starts running, not while it waits for a thread', async () => {
-    // every thread busy with a job that will be stopped after 1.5 s
-    const blockers = Array.from({ length: COMPUTE_THREADS }, () => compute({ kind: 'analyze-run', input: heavyRun }, { reduce: 'x', timeLimitMs: 1500 }).catch((error: unknown) => error));
-    // a small run with a 1 s limit waits about 1.5 s for a thread, then runs in milliseconds
+    // every thread busy with a job that will be stopped after 0.8 s
+    const blockers = Array.from({ length: COMPUTE_THREADS }, () => compute({ kind: 'analyze-run', input: heavyRun }, { reduce: 'x', timeLimitMs: 800 }).catch((error: unknown) => error));
+    // a small run with a 0.4 s limit waits about 0.8 s for a thread, then runs in milliseconds
     const small = { segments: [{ lengthM: 2, section: { shape: 'round', diameterM: 0.2 } }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxHz: 300 };
-    const analysis = JSON.parse(await compute<string>({ kind: 'analyze-run', input: small }, { reduce: 'x', timeLimitMs: 1000 })) as { resonances: unknown[] };
+    const analysis = JSON.parse(await compute<string>({ kind: 'analyze-run', input: small }, { reduce: 'x', timeLimitMs: 400 })) as { resonances: unknown[] };
     expect(analysis.resonances.length).toBeGreaterThan(0);
     for (const stopped of await Promise.all(blockers)) expect((stopped as AppError).status).toBe(422);
   });
