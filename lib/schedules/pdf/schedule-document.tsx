@@ -23,9 +23,16 @@ export function ScheduleDocument({ content, createdAt }: { content: ScheduleCont
         <PageFrame content={content} />
         <PlanFigure content={content} />
       </Page>
+      {/* each run on pages of its own: the layout breaks each page's content into pages separately, so the
+          cost grows with the schedule's length rather than with its square */}
+      {content.runs.map((run, index) => (
+        <Page key={`${run.name}-${index}`} size="A4" style={styles.page} wrap>
+          <PageFrame content={content} />
+          <RunSection run={run} index={index} />
+        </Page>
+      ))}
       <Page size="A4" style={styles.page} wrap>
         <PageFrame content={content} />
-        {content.runs.map((run, index) => <RunSection key={`${run.name}-${index}`} run={run} index={index} />)}
         <RisksAndRooms content={content} />
         <OutletReflectionLoss content={content} />
         <RevisionHistory content={content} />
