@@ -48,6 +48,9 @@ function examples(f: Fixtures): Record<string, { body: unknown; params?: Record<
     'PATCH /api/v1/projects/[projectId]': { body: { version: 1, name: 'Renamed project', site: 'Quay 5', archived: false }, params: { projectId: f.projectId } },
     'POST /api/v1/projects/[projectId]/plans': { body: { name: 'Fuzzed plan' }, params: { projectId: f.projectId } },
     'PATCH /api/v1/plans/[planId]': { body: { detailsVersion: 1, name: 'Renamed plan', archived: false }, params: { planId: f.documentPlan.id } },
+    // Undoing an upload takes JSON; the upload itself is multipart, so every JSON body it gets is refused.
+    'PUT /api/v1/plans/[planId]/background': { body: { uploadId: null }, params: { planId: f.emptyPlanId } },
+    'POST /api/v1/plans/[planId]/background': { body: { uploadId: null }, params: { planId: f.emptyPlanId } },
     'PUT /api/v1/plans/[planId]/document': {
       body: { version: f.documentPlan.version, metresPerPixel: f.documentPlan.metresPerPixel, document: f.documentPlan.document },
       params: { planId: f.documentPlan.id },
