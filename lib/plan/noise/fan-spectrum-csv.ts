@@ -55,7 +55,7 @@ function readLevel(text: string, decimalComma: boolean): number | null {
   return Number(cleaned.replace(',', '.'));
 }
 
-const where = (cell: Cell) => `Row ${cell.row}, column ${cell.column}`;
+const where = (cell: Pick<Cell, 'row' | 'column'>) => `Row ${cell.row}, column ${cell.column}`;
 
 export function parseFanSpectrumCsv(text: string): FanSpectrumCsvResult {
   const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/);
@@ -72,12 +72,14 @@ export function parseFanSpectrumCsv(text: string): FanSpectrumCsvResult {
   const found = new Map<number, { levelDb: number; cell: Cell }>();
   const leftOut = new Set<number>();
 
-  const takeBand = (bandCell: Cell, levelCell: Cell | undefined): void => {
+  // levelPlace: where the band's level belongs, named when it is empty
+  const takeBand = (bandCell: Cell, levelCell: Cell | undefined, levelPlace: Pick<Cell, 'row' | 'column'>): void => {
+    if (bandCell.text === '') { errors.push(`${where(bandCell)}: is empty; give the band as 63, 125, … 8000 (or 1k, 2 kHz).`); return; }
     const hz = readFrequency(bandCell.text);
     if (hz === null) { errors.push(`${where(bandCell)}: "${bandCell.text}" is not a frequency; give the band as 63, 125, … 8000 (or 1k, 2 kHz).`); return; }
     if (OUTSIDE_BANDS_HZ.includes(hz)) { leftOut.add(hz); return; }
     if (!(BANDS_HZ as readonly number[]).includes(hz)) { errors.push(`${where(bandCell)}: ${hz} Hz is not an octave-band centre; use 63, 125, 250, 500, 1000, 2000, 4000 or 8000 Hz.`); return; }
-    if (!levelCell || levelCell.text === '') { errors.push(`${where(bandCell)}: the ${bandWords(hz)} band has no level beside it.`); return; }
+    if (!levelCell || levelCell.text === '') { errors.push(`${where(levelPlace)}: is empty; give the ${bandWords(hz)} band's level in dB.`); return; }
     const levelDb = readLevel(levelCell.text, decimalComma);
     if (levelDb === null) { errors.push(`${where(levelCell)}: "${levelCell.text}" is not a number of decibels for the ${bandWords(hz)} band${!decimalComma && levelCell.text.includes(',') ? ' (with commas between cells, write decimals with a point)' : ''}.`); return; }
     if (levelDb < MIN_LEVEL_DB || levelDb > MAX_LEVEL_DB) { errors.push(`${where(levelCell)}: ${levelDb} dB for the ${bandWords(hz)} band is outside ${MIN_LEVEL_DB} to ${MAX_LEVEL_DB} dB.`); return; }
@@ -98,18 +100,19 @@ export function parseFanSpectrumCsv(text: string): FanSpectrumCsvResult {
     const levels = rows[1];
     if (!levels) return { ok: false, errors: [`Row ${first[0].row} names the bands, but no row of levels follows it.`] };
     if (rows.length > 2) errors.push(`Row ${rows[2][0].row}: only one row of levels is read under the bands; remove the others or import them one at a time.`);
-    for (const bandCell of firstData) takeBand(bandCell, levels.find((cell) => cell.column === bandCell.column));
+    for (const bandCell of firstData) takeBand(bandCell, levels.find((cell) => cell.column === bandCell.column), { row: levels[0].row, column: bandCell.column });
   } else if (rows.length === 1) {
     // one row of eight levels, 63 Hz to 8 kHz
     layout = 'one row of levels, 63 Hz to 8 kHz';
-    const cells = isLabel(first[0]) ? first.slice(1) : first;
+    // eight cells are eight levels, even when the first is no number (it is named then, not skipped)
+    const cells = first.length !== BANDS_HZ.length && isLabel(first[0]) ? first.slice(1) : first;
     if (cells.length !== BANDS_HZ.length) return { ok: false, errors: [`Row ${first[0].row} has ${cells.length} values; a row without band names needs exactly 8, 63 Hz to 8 kHz in order.`] };
-    cells.forEach((cell, band) => takeBand({ ...cell, text: String(BANDS_HZ[band]) }, cell));
+    cells.forEach((cell, band) => takeBand({ ...cell, text: String(BANDS_HZ[band]) }, cell, cell));
   } else {
-    // one band per row: band, level (a first row of words is a header)
+    // one band per row: band, level (a first row of words only is a header; a number in it makes it a row of data)
     layout = 'one band per row';
-    const body = isLabel(first[0]) ? rows.slice(1) : rows;
-    for (const cells of body) takeBand(cells[0], cells[1]);
+    const body = first.every(isLabel) ? rows.slice(1) : rows;
+    for (const cells of body) takeBand(cells[0], cells[1], { row: cells[0].row, column: cells[0].column + 1 });
   }
 
   for (const hz of BANDS_HZ) if (!found.has(hz) && !errors.some((error) => error.includes(`the ${bandWords(hz)} band`))) errors.push(`The ${bandWords(hz)} band is missing.`);

@@ -40,7 +40,7 @@ describe('fan spectrum from CSV', () => {
     const loud = parseFanSpectrumCsv('63,184\n125,82\n250,79\n500,75\n1000,71\n2000,67\n4000,62\n8000,56');
     expect(loud.ok === false && loud.errors).toEqual(['Row 1, column 2: 184 dB for the 63 Hz band is outside -20 to 160 dB.']);
     const gap = parseFanSpectrumCsv('63,84\n125\n250,79\n500,75\n1000,71\n2000,67\n4000,62\n8000,56');
-    expect(gap.ok === false && gap.errors).toEqual(['Row 2, column 1: the 125 Hz band has no level beside it.']);
+    expect(gap.ok === false && gap.errors).toEqual(['Row 2, column 2: is empty; give the 125 Hz band\'s level in dB.']);
     const short = parseFanSpectrumCsv('84,82,79,75,71,67,62');
     expect(short.ok === false && short.errors).toEqual(['Row 1 has 7 values; a row without band names needs exactly 8, 63 Hz to 8 kHz in order.']);
     expect(parseFanSpectrumCsv('\n\n')).toEqual({ ok: false, errors: ['The file is empty: give the fan\'s sound power in eight octave bands, 63 Hz to 8 kHz.'] });
@@ -49,5 +49,26 @@ describe('fan spectrum from CSV', () => {
   it('with commas between cells, a decimal comma is refused with the reason', () => {
     const result = parseFanSpectrumCsv('63,"84,5"\n125,82\n250,79\n500,75\n1000,71\n2000,67\n4000,62\n8000,56');
     expect(result.ok === false && result.errors[0]).toBe('Row 1, column 2: "84,5" is not a number of decibels for the 63 Hz band (with commas between cells, write decimals with a point).');
+  });
+
+  it('a bad first cell is named, not taken for a header or a row label', () => {
+    const badBand = parseFanSpectrumCsv('6x,84\n125,82\n250,79\n500,75\n1000,71\n2000,67\n4000,62\n8000,56');
+    expect(badBand.ok === false && badBand.errors).toEqual(['Row 1, column 1: "6x" is not a frequency; give the band as 63, 125, … 8000 (or 1k, 2 kHz).', 'The 63 Hz band is missing.']);
+    const badLevel = parseFanSpectrumCsv('8x,82,79,75,71,67,62,56');
+    expect(badLevel.ok === false && badLevel.errors).toEqual(['Row 1, column 1: "8x" is not a number of decibels for the 63 Hz band.']);
+  });
+
+  it('names every bad cell of a file at once, by row and column, empty ones included', () => {
+    const result = parseFanSpectrumCsv('Hz,31.5,63,125,250,500,1k,2k,4k,8k\nLw,88,84,,79,7o,71,67,62,56\n');
+    expect(result.ok === false && result.errors).toEqual([
+      'Row 2, column 4: is empty; give the 125 Hz band\'s level in dB.',
+      'Row 2, column 6: "7o" is not a number of decibels for the 500 Hz band.',
+    ]);
+    const rows = parseFanSpectrumCsv('Band,Lw\n63,84\n,82\n250,abc\n500,75\n1000,71\n2000,67\n4000,62\n8000,56');
+    expect(rows.ok === false && rows.errors).toEqual([
+      'Row 3, column 1: is empty; give the band as 63, 125, … 8000 (or 1k, 2 kHz).',
+      'Row 4, column 2: "abc" is not a number of decibels for the 250 Hz band.',
+      'The 125 Hz band is missing.',
+    ]);
   });
 });
