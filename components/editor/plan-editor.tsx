@@ -218,7 +218,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
           )}
           {model.saveStatus === 'conflict' && <ConflictDialog message={model.notice ?? ''} onReload={reloadTheirs} onOverwrite={overwriteWithMine} />}
           {helpOpen && <HelpOverlay onClose={() => setHelpOpen(false)} />}
-          {openRoom && noiseSheetOpen && openRoomNoise && <NoiseSheet roomName={openRoom.name} tables={openRoomNoise} unitSystem={unitSystem} onClose={closeNoiseSheet} onPlace={setHighlightPlace} />}
+          {openRoom && noiseSheetOpen && openRoomNoise && <NoiseSheet planName={plan.name} roomName={openRoom.name} tables={openRoomNoise} unitSystem={unitSystem} onClose={closeNoiseSheet} onPlace={setHighlightPlace} />}
         </div>
         <aside className="w-[25rem] shrink-0 overflow-y-auto border-l border-graphite-100 bg-paper-raised p-4" aria-label={selectedSegment || selectedNode || openRoom ? 'Properties' : 'Results'}>
           {openRoom ? (
@@ -260,8 +260,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
               <ScheduleCsvControls document={doc} runId={activeRunId} runName={(activeRunId && findRun(doc, activeRunId)?.name) || 'run'} metresPerPixel={model.metresPerPixel} editable={editable}
                 onApply={(document) => dispatch({ type: 'apply', document, state: normalizeState(document, model.state) })} />
               <ResultsPanel result={activeResult} loading={results.isLoading} stale={stale} error={results.error ? results.error.message : null}
-                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} nodeLabels={labels.nodes} unitSystem={unitSystem} />
-              {activeRunId && <div className="mt-5"><OutletReflectionLossTable document={doc} runId={activeRunId} labels={labels} unitSystem={unitSystem} /></div>}
+                selectedOrder={selectedOrder} onSelectOrder={setSelectedOrder} formatPosition={formatPosition} nodeLabels={labels.nodes} unitSystem={unitSystem} planName={plan.name} />
+              {activeRunId && <div className="mt-5"><OutletReflectionLossTable document={doc} runId={activeRunId} labels={labels} unitSystem={unitSystem} planName={plan.name} /></div>}
               </>)}
             </div>
           )}

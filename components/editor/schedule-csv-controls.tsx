@@ -2,7 +2,9 @@
 
 import { useRef, useState } from 'react';
 import type { PlanDocument } from '@/lib/plan';
+import { csvFileName } from '@/lib/csv/file-name';
 import { applySchedule, parseScheduleCsv, scheduleToCsv, type ScheduleError } from '@/lib/plan/schedule-csv';
+import { downloadCsv } from './download-csv';
 
 interface ScheduleCsvControlsProps {
   document: PlanDocument;
@@ -22,13 +24,7 @@ export function ScheduleCsvControls({ document: doc, runId, runName, metresPerPi
   if (!runId) return null;
 
   function download() {
-    const csv = scheduleToCsv(doc, runId!, metresPerPixel);
-    const url = URL.createObjectURL(new Blob([csv], { type: 'text/csv;charset=utf-8' }));
-    const link = window.document.createElement('a');
-    link.href = url;
-    link.download = `${runName.replace(/[^\w.-]+/g, '-').toLowerCase() || 'run'}-schedule.csv`;
-    link.click();
-    URL.revokeObjectURL(url);
+    downloadCsv(csvFileName([runName || 'run'], 'schedule'), scheduleToCsv(doc, runId!, metresPerPixel));
   }
 
   async function importFile(file: File) {

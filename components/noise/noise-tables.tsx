@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { OCTAVE_BANDS_HZ } from '@/lib/acoustic';
 import { correctionWords, ratingWords, rowWords, type ListenerTable, type NoiseTables, type PathRow } from '@/lib/plans/noise-path/path-tables';
 import type { UnitSystem } from '@/lib/plan/units';
@@ -72,12 +73,14 @@ interface NoiseTablesViewProps {
   listenerId?: string;
   /** Told where an element row's element lies on the plan, for the editor to highlight it. */
   onPlace?: TableProps['onPlace'];
+  /** Shown under each listener's table, such as a download button (the editor's sheet). */
+  listenerAction?: (listener: ListenerTable) => ReactNode;
 }
 
 // A room's noise: each outlet's path from its fan (fan power, each element's loss, the power into the
 // room), then each listener's table (room correction per outlet, their energy sum, the criterion and the
 // margin, the governing band marked in words and a shape), the ratings and the cautions.
-export function NoiseTablesView({ tables, units, listenerId, onPlace }: NoiseTablesViewProps) {
+export function NoiseTablesView({ tables, units, listenerId, onPlace, listenerAction }: NoiseTablesViewProps) {
   const listeners = listenerId ? tables.listeners.filter((listener) => listener.listenerId === listenerId) : tables.listeners;
   const below = tables.bandsBelowSchroederHz;
   return (
@@ -95,6 +98,7 @@ export function NoiseTablesView({ tables, units, listenerId, onPlace }: NoiseTab
         <section key={listener.listenerId} className="space-y-1" data-testid="listener-path">
           <BandTable caption={`At listener ${listener.name}`} heading={`At listener ${listener.name}`} rows={listener.rows} units={units} governingHz={listener.governingHz} belowSchroederHz={below} testId="listener-path-table" />
           <ListenerRatings table={listener} />
+          {listenerAction?.(listener)}
         </section>
       ))}
       {below.length > 0 && <p className="text-[11px] text-graphite-500">* Below the room&apos;s Schroeder frequency ({tables.schroederHz.toFixed(0)} Hz).</p>}

@@ -1,5 +1,5 @@
 // A run's segment schedule (its main path, start to end) as CSV, and back.
-// Text cells that a spreadsheet would read as a formula get a leading single quote; numbers stay numbers.
+// Written by csvText (lib/csv): text cells a spreadsheet would read as a formula get a leading single quote; numbers stay numbers.
 // Rows are numbered as a spreadsheet shows them: the header is row 1.
 import Papa from 'papaparse';
 import { nodePositions, type Lining, type PlanDocument, type Section } from './document';
@@ -9,6 +9,7 @@ import { buildRunTree, mainPathOf, type ChildLink } from './run-tree';
 import { MAX_SEGMENT_LENGTH_M, MIN_SECTION_M } from './schema';
 import { MAX_LINING_THICKNESS_M, MAX_RUN_SEGMENTS, MAX_SECTION_DIMENSION_M } from '@/lib/acoustic';
 import { planLabels } from './labels/names';
+import { csvText } from '@/lib/csv/csv-text';
 
 export const SCHEDULE_COLUMNS = ['order', 'from_m', 'length_m', 'shape', 'diameter_mm', 'width_mm', 'height_mm', 'lining_thickness_mm', 'lining_absorption', 'segment_id', 'segment'] as const;
 export type ScheduleColumn = (typeof SCHEDULE_COLUMNS)[number];
@@ -52,7 +53,7 @@ export function scheduleToCsv(doc: PlanDocument, runId: string, metresPerPixel: 
       labels.segments[link.segment.id] ?? '',
     ];
   });
-  return Papa.unparse({ fields: [...SCHEDULE_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' });
+  return csvText(SCHEDULE_COLUMNS, data);
 }
 
 type Cells = Partial<Record<ScheduleColumn, string>>;

@@ -1,11 +1,13 @@
 'use client';
 
-import { POSITION_STEP_M } from '@/lib/analysis/answer-precision';
+import { csvFileName } from '@/lib/csv/file-name';
+import { reflectionPlace, reflectionsCsv, resonancesCsv } from '@/lib/plans/exports';
 import type { RunResult } from '@/lib/plans/results';
 import { formatSpeed, type UnitSystem } from '@/lib/plan/units';
 import { EchoChart } from '../results/echo-chart';
 import { ReflectionTable } from '../results/reflection-table';
 import { ResonanceTable } from '../results/resonance-table';
+import { DownloadCsvButton } from '../results/download-csv-button';
 
 interface ResultsPanelProps {
   result: RunResult | null;
@@ -18,31 +20,30 @@ interface ResultsPanelProps {
   /** Stable labels of the plan's points, for naming where each reflection happens. */
   nodeLabels?: Readonly<Record<string, string>>;
   unitSystem?: UnitSystem;
+  /** The plan's name, for the downloaded files' names. */
+  planName?: string;
 }
 
-/** Within this distance, m, a reflection is at the path point: both arrive rounded to 0.1 mm, each on its own. */
-const SAME_POINT_M = 1.5 * POSITION_STEP_M;
-
-function Section({ title, children }: { title: string; children: React.ReactNode }) {
+function Section({ title, action, children }: { title: string; action?: React.ReactNode; children: React.ReactNode }) {
   return (
     <section className="space-y-2" aria-label={title}>
-      <h3 className="text-xs font-semibold uppercase tracking-wider text-graphite-500">{title}</h3>
+      <div className="flex items-center justify-between gap-2">
+        <h3 className="text-xs font-semibold uppercase tracking-wider text-graphite-500">{title}</h3>
+        {action}
+      </div>
       {children}
     </section>
   );
 }
 
 // The chosen run's results: cut-off and warnings, resonances, reflections, echo chart.
-export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition, nodeLabels, unitSystem = 'si' }: ResultsPanelProps) {
+export function ResultsPanel({ result, loading, stale, error, selectedOrder, onSelectOrder, formatPosition, nodeLabels, unitSystem = 'si', planName = 'plan' }: ResultsPanelProps) {
   if (error) return <p role="alert" className="text-sm text-risk-ink">The results could not be computed: {error}</p>;
   if (!result) return <p className="text-sm text-graphite-500">{loading ? 'Computing…' : 'Draw a run to see its resonances here: pick Draw (D), click at the fan end, then at each bend.'}</p>;
   if (result.problem) return <p role="status" className="rounded border border-risk bg-risk-soft p-2 text-sm text-risk-ink"><span className="font-semibold">Cannot analyse {result.name}: </span>{result.problem}</p>;
   const analysis = result.analysis!;
-  const placeName = (atM: number, kind: string): string | null => {
-    if (!nodeLabels || result.path.length === 0) return null;
-    const nodeId = kind === 'start' ? result.path[0].fromNodeId : result.path.find((piece) => Math.abs(piece.endM - atM) < SAME_POINT_M)?.toNodeId;
-    return nodeId ? nodeLabels[nodeId] ?? null : null;
-  };
+  const placeName = (atM: number, kind: string): string | null => (nodeLabels ? reflectionPlace(result.path, nodeLabels, atM, kind) : null);
+  const fileName = (kind: string) => csvFileName([planName, result.name], kind);
   return (
     <div className={`space-y-5 ${stale ? 'opacity-60' : ''}`} aria-busy={stale}>
       <dl className="num grid grid-cols-2 gap-x-3 gap-y-1 text-sm" aria-label="Run summary">
@@ -63,7 +64,9 @@ export function ResultsPanel({ result, loading, stale, error, selectedOrder, onS
           <li>Broadband (resonances overlap or Q under 5, nothing to dodge): {analysis.broadbandRangesHz.map(([lowHz, highHz]) => `${lowHz.toFixed(0)}–${highHz.toFixed(0)} Hz`).join(', ')}.</li>
         )}
       </ul>
-      <Section title="Resonances">
+      <Section title="Resonances" action={analysis.resonances.length > 0 && (
+        <DownloadCsvButton what="the resonances" fileName={fileName('resonances')} csv={() => resonancesCsv(result, unitSystem)} />
+      )}>
         <ResonanceTable resonances={analysis.resonances} nearFanTone={result.nearFanTone} selectedOrder={selectedOrder} onSelect={onSelectOrder} />
         <p className="text-xs text-graphite-500">
           Listed from {analysis.minHz.toFixed(0)} to {analysis.maxHz.toFixed(0)} Hz; orders count from the run’s lowest resonance
@@ -71,7 +74,9 @@ export function ResultsPanel({ result, loading, stale, error, selectedOrder, onS
           {' '}Select a row to draw its pressure envelope on the plan (A antinode, N node).
         </p>
       </Section>
-      <Section title="Reflections">
+      <Section title="Reflections" action={analysis.reflections.length > 0 && (analysis.reflections[0]?.bands.length ?? 0) > 0 && (
+        <DownloadCsvButton what="the reflections" fileName={fileName('reflections')} csv={() => reflectionsCsv(result, nodeLabels ?? {}, unitSystem)} />
+      )}>
         <ReflectionTable reflections={analysis.reflections} formatPosition={formatPosition} placeName={placeName} />
       </Section>
       <Section title="Echo chart">

@@ -6,14 +6,21 @@ import type { PlanDocument } from '@/lib/plan/document';
 import type { PlanLabels } from '@/lib/plan/labels';
 import { OUTLET_MOUNTING_WORDS, outletReflectionLosses } from '@/lib/plan/outlet-reflection-loss';
 import { formatLength, type UnitSystem } from '@/lib/plan/units';
+import { csvFileName } from '@/lib/csv/file-name';
+import { endReflectionLossCsv } from '@/lib/plans/exports';
+import { DownloadCsvButton } from './download-csv-button';
 import { signedFixed } from '@/lib/signed-number';
 
 // The end reflection loss at each outlet of the chosen run, by octave band, worked from the drawing as it is now.
-export function OutletReflectionLossTable({ document, runId, labels, unitSystem }: { document: PlanDocument; runId: string; labels: PlanLabels; unitSystem: UnitSystem }) {
+export function OutletReflectionLossTable({ document, runId, labels, unitSystem, planName = 'plan' }: { document: PlanDocument; runId: string; labels: PlanLabels; unitSystem: UnitSystem; planName?: string }) {
   const outlets = useMemo(() => outletReflectionLosses(document, runId, labels), [document, runId, labels]);
+  const runName = document.runs.find((run) => run.id === runId)?.name ?? 'run';
   return (
     <section className="space-y-2" aria-label="End reflection loss at the outlets">
-      <h3 className="text-xs font-semibold uppercase tracking-wider text-graphite-500">End reflection loss at the outlets</h3>
+      <div className="flex items-center justify-between gap-2">
+        <h3 className="text-xs font-semibold uppercase tracking-wider text-graphite-500">End reflection loss at the outlets</h3>
+        {outlets.length > 0 && <DownloadCsvButton what="the end reflection loss" fileName={csvFileName([planName, runName], 'end-reflection-loss')} csv={() => endReflectionLossCsv(outlets, unitSystem)} />}
+      </div>
       {outlets.length === 0 ? <p className="text-sm text-graphite-500">This run has no outlet: no end is open or feeds a room.</p> : (
         <div className="overflow-x-auto">
           <table className="w-full text-xs" aria-label="End reflection loss by octave band">

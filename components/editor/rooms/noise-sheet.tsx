@@ -4,10 +4,13 @@ import { useEffect } from 'react';
 import type { NoiseTables } from '@/lib/plans/noise-path/path-tables';
 import type { UnitSystem } from '@/lib/plan/units';
 import { NoiseTablesView } from '@/components/noise/noise-tables';
+import { csvFileName } from '@/lib/csv/file-name';
+import { listenerPathCsv } from '@/lib/plans/exports';
+import { DownloadCsvButton } from '../results/download-csv-button';
 
 // The room's noise path tables on a sheet over the canvas (the canvas keeps its size, so nothing under
 // the pointer moves), wide enough for an element column and eight band columns that never wrap.
-export function NoiseSheet({ roomName, tables, unitSystem, onClose, onPlace }: { roomName: string; tables: NoiseTables; unitSystem: UnitSystem; onClose: () => void; onPlace?: (place: { segmentId: string | null; nodeId: string | null } | null) => void }) {
+export function NoiseSheet({ planName, roomName, tables, unitSystem, onClose, onPlace }: { planName: string; roomName: string; tables: NoiseTables; unitSystem: UnitSystem; onClose: () => void; onPlace?: (place: { segmentId: string | null; nodeId: string | null } | null) => void }) {
   useEffect(() => {
     const close = (event: KeyboardEvent) => { if (event.key === 'Escape') onClose(); };
     window.addEventListener('keydown', close);
@@ -20,7 +23,10 @@ export function NoiseSheet({ roomName, tables, unitSystem, onClose, onPlace }: {
         <button type="button" className="btn-quiet ml-auto px-2 py-0.5 text-xs" onClick={onClose}>Close the tables</button>
       </div>
       <p className="mb-2 text-xs text-graphite-500">Point at an element to see where it lies on the plan.</p>
-      <NoiseTablesView tables={tables} units={unitSystem} onPlace={onPlace} />
+      <NoiseTablesView tables={tables} units={unitSystem} onPlace={onPlace} listenerAction={(listener) => (
+        <DownloadCsvButton what={`the path table at listener ${listener.name}`} fileName={csvFileName([planName, roomName, listener.name], 'noise-path')}
+          csv={() => listenerPathCsv(tables, listener.listenerId, unitSystem)} />
+      )} />
     </section>
   );
 }

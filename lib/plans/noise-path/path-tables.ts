@@ -18,6 +18,10 @@ export interface PathRow {
   label: string;
   /** The same words with imperial lengths, where the row has a length in it. */
   labelImperial?: string;
+  /** What the row is, in a word or two ("Duct", "Room correction"); absent in tables frozen before it. */
+  element?: string;
+  /** Where on the plan the row belongs, in the plan's labels ("A2", "A2/A3 elbow", "Outlet A3 end"); absent in tables frozen before it. */
+  source?: string;
   valuesDb: number[];
   total?: boolean;
 }
@@ -77,19 +81,20 @@ function twoWays(words: (units: UnitSystem) => string): Pick<PathRow, 'label' | 
 
 function outletTable(outlet: RoomNoise['outlets'][number]): OutletTable {
   const rows: PathRow[] = [];
+  const fanSource = `Fan of ${outlet.runName}`;
   if (outlet.fanSpeed) {
     const { ratedRpm, worstRpm, changeDb } = outlet.fanSpeed;
-    rows.push({ role: 'fan', label: `Fan sound power as given, at ${ratedRpm} rpm (dB re 1 pW)`, valuesDb: outlet.fanSoundPowerDb });
-    rows.push({ role: 'fan-speed', label: `Fan at ${worstRpm} rpm, the top of its range: 50 log(${worstRpm}/${ratedRpm}) by the fan laws`, valuesDb: OCTAVE_BANDS_HZ.map(() => changeDb) });
-    rows.push({ role: 'fan', label: `Fan sound power at ${worstRpm} rpm (dB re 1 pW)`, valuesDb: outlet.startPowerDb, total: true });
+    rows.push({ role: 'fan', element: 'Fan', source: fanSource, label: `Fan sound power as given, at ${ratedRpm} rpm (dB re 1 pW)`, valuesDb: outlet.fanSoundPowerDb });
+    rows.push({ role: 'fan-speed', element: 'Fan speed', source: fanSource, label: `Fan at ${worstRpm} rpm, the top of its range: 50 log(${worstRpm}/${ratedRpm}) by the fan laws`, valuesDb: OCTAVE_BANDS_HZ.map(() => changeDb) });
+    rows.push({ role: 'fan', element: 'Fan', source: fanSource, label: `Fan sound power at ${worstRpm} rpm (dB re 1 pW)`, valuesDb: outlet.startPowerDb, total: true });
   } else {
-    rows.push({ role: 'fan', label: 'Fan sound power (dB re 1 pW)', valuesDb: outlet.fanSoundPowerDb, total: true });
+    rows.push({ role: 'fan', element: 'Fan', source: fanSource, label: 'Fan sound power (dB re 1 pW)', valuesDb: outlet.fanSoundPowerDb, total: true });
   }
   outlet.steps.forEach((step, index) => {
     const source = outlet.sources[index];
-    rows.push({ role: 'step', ...twoWays((units) => `${ELEMENT_WORDS[step.kind] ?? step.kind}: ${source ? sourceWords(source, units) : ''} (loss)`), valuesDb: step.lossDb.map((loss) => -loss), segmentId: source?.segmentId ?? null, nodeId: source?.nodeId ?? null });
+    rows.push({ role: 'step', element: ELEMENT_WORDS[step.kind] ?? step.kind, source: source ? source.place ?? source.label : '', ...twoWays((units) => `${ELEMENT_WORDS[step.kind] ?? step.kind}: ${source ? sourceWords(source, units) : ''} (loss)`), valuesDb: step.lossDb.map((loss) => -loss), segmentId: source?.segmentId ?? null, nodeId: source?.nodeId ?? null });
   });
-  rows.push({ role: 'into-room', label: 'Sound power into the room (dB re 1 pW)', valuesDb: outlet.powerIntoRoomDb, total: true });
+  rows.push({ role: 'into-room', element: 'Into the room', source: outlet.label, label: 'Sound power into the room (dB re 1 pW)', valuesDb: outlet.powerIntoRoomDb, total: true });
   return { outletId: outlet.outletId, label: outlet.label, runName: outlet.runName, rows };
 }
 
@@ -99,12 +104,12 @@ function listenerTable(noise: RoomNoise, listener: RoomNoise['listeners'][number
   const rows: PathRow[] = listener.contributions.flatMap((part): PathRow[] => {
     const from = labels.get(part.outletId) ?? 'Outlet';
     // the method is stated once above the tables (correctionWords)
-    const correction: PathRow = { role: 'correction', ...twoWays((units) => `${several ? `${from}, ` : 'Outlet '}${formatLength(part.distanceM, units, 'run')} away: room correction (Lp − Lw)`), valuesDb: part.roomCorrectionDb };
-    return several ? [correction, { role: 'contribution', label: `${from}: level at ${listener.name}`, valuesDb: part.levelDb }] : [correction];
+    const correction: PathRow = { role: 'correction', element: 'Room correction', source: `${from} to ${listener.name}`, ...twoWays((units) => `${several ? `${from}, ` : 'Outlet '}${formatLength(part.distanceM, units, 'run')} away: room correction (Lp − Lw)`), valuesDb: part.roomCorrectionDb };
+    return several ? [correction, { role: 'contribution', element: 'Outlet level', source: `${from} at ${listener.name}`, label: `${from}: level at ${listener.name}`, valuesDb: part.levelDb }] : [correction];
   });
-  rows.push({ role: 'listener', label: `Level at ${listener.name}${several ? ', energy sum of the outlets' : ''} (dB re 20 µPa)`, valuesDb: listener.levelDb, total: true });
-  rows.push({ role: 'criterion', label: `Criterion curve, NC-${noise.criterionNc}`, valuesDb: noise.criterionDb });
-  rows.push({ role: 'margin', label: 'Margin (criterion − level; negative is above)', valuesDb: listener.marginDb, total: true });
+  rows.push({ role: 'listener', element: 'Level', source: listener.name, label: `Level at ${listener.name}${several ? ', energy sum of the outlets' : ''} (dB re 20 µPa)`, valuesDb: listener.levelDb, total: true });
+  rows.push({ role: 'criterion', element: 'Criterion', source: '', label: `Criterion curve, NC-${noise.criterionNc}`, valuesDb: noise.criterionDb });
+  rows.push({ role: 'margin', element: 'Margin', source: listener.name, label: 'Margin (criterion − level; negative is above)', valuesDb: listener.marginDb, total: true });
   return { listenerId: listener.listenerId, name: listener.name, rows, nc: listener.nc, nr: listener.nr, dba: listener.dba, governingHz: listener.governingHz };
 }
 

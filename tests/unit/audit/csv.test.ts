@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { auditCsv, neutraliseCell } from '@/lib/audit/csv';
+import { auditCsv } from '@/lib/audit/csv';
+import { neutraliseCell } from '@/lib/csv';
 
 describe('audit CSV', () => {
   it('prefixes an apostrophe to every cell a spreadsheet would read as a formula', () => {
