@@ -1,12 +1,12 @@
 // One listener's noise path table as CSV: every outlet's path from its fan (fan power, each element's
 // loss as a negative number, the power into the room), then the listener's own rows (room correction
 // per outlet, their energy sum, the criterion curve and the margin), as the noise path tables show
-// them. Each row says which table it belongs to, its words (lengths in the reader's units), what it
+// them, and last the listener's ratings in words (their band cells empty). Each row says which table it belongs to, its words (lengths in the reader's units), what it
 // is, where on the plan, whether it is a total, and its value in dB for each octave band 63 Hz to 8 kHz.
 import { OCTAVE_BANDS_HZ } from '@/lib/acoustic';
 import { csvNumber, csvText, type CsvCell } from '@/lib/csv/csv-text';
 import type { UnitSystem } from '@/lib/plan/units';
-import { rowWords, type NoiseTables, type PathRow } from '@/lib/plans/noise-path/path-tables';
+import { ratingWords, rowWords, type NoiseTables, type PathRow } from '@/lib/plans/noise-path/path-tables';
 import { bandHeader } from './band-header';
 
 /** Two decimals of a dB: the tables show one. */
@@ -30,6 +30,7 @@ export function listenerPathCsv(tables: NoiseTables, listenerId: string, units: 
   const rows = [
     ...tables.outlets.flatMap((outlet) => outlet.rows.map((row) => rowCells(`Path to ${outlet.label}`, row, units))),
     ...listener.rows.map((row) => rowCells(`At listener ${listener.name}`, row, units)),
+    [`At listener ${listener.name}`, ratingWords(listener), 'Ratings', listener.name, 'no', ...OCTAVE_BANDS_HZ.map(() => null)],
   ];
   return csvText(listenerPathCsvHeader(units), rows);
 }

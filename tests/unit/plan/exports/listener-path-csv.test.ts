@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { OCTAVE_BANDS_HZ } from '@/lib/acoustic';
 import { DEMO_METRES_PER_PIXEL } from '@/lib/plans/demo/recital-plan';
 import { listenerPathCsv } from '@/lib/plans/exports';
-import { noiseTables, rowWords } from '@/lib/plans/noise-path/path-tables';
+import { noiseTables, ratingWords, rowWords } from '@/lib/plans/noise-path/path-tables';
 import { roomNoise } from '@/lib/plans/noise-path/room-noise';
 import { expectClose } from '../../acoustic/tolerance';
 import { demoDocument, numberCell, readCsv } from './exports-fixture';
@@ -28,7 +28,10 @@ describe('listener path table CSV', () => {
       ...tables.outlets.flatMap((outlet) => outlet.rows.map((row) => ({ table: `Path to ${outlet.label}`, row }))),
       ...listener.rows.map((row) => ({ table: `At listener ${listener.name}`, row })),
     ];
-    expect(rows).toHaveLength(expected.length);
+    expect(rows).toHaveLength(expected.length + 1);
+    const ratings = rows.at(-1)!;
+    expect([ratings.Element, ratings['Row (lengths in m and mm)']]).toEqual(['Ratings', ratingWords(listener)]);
+    expect(bandColumns.map((column) => ratings[column])).toEqual(bandColumns.map(() => ''));
     expected.forEach(({ table, row }, index) => {
       const cells = rows[index];
       expect(cells.Table).toBe(table);
@@ -40,9 +43,9 @@ describe('listener path table CSV', () => {
     });
     // the duct rows name their segment on the plan; the listener's last rows are the criterion and the margin
     expect(rows.filter((cells) => cells.Element === 'Duct').map((cells) => cells['Source on the plan'])).toEqual(['A1', 'A2', 'A3', 'A1', 'A2', 'A4', 'A5']);
-    const [criterion, margin] = rows.slice(-2);
+    const [criterion, margin] = rows.slice(-3, -1);
     expect([criterion.Element, margin.Element]).toEqual(['Criterion', 'Margin']);
-    const level = rows.at(-3)!;
+    const level = rows.at(-4)!;
     expect(level.Element).toBe('Level');
     bandColumns.forEach((column) => expectClose(numberCell(margin[column]), numberCell(criterion[column]) - numberCell(level[column]), 0.011, `margin ${column}`));
   });
