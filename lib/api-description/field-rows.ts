@@ -50,12 +50,18 @@ export function typeWords(input: JsonSchema, resolve: Resolve): string {
   return 'any';
 }
 
+/** A limit as shown to people: a negative one with the minus sign "−" (as lib/signed-number.ts does). */
+function shown(value: number): string {
+  return String(value).replace(/^-/, '\u2212');
+}
+
 export function limitWords(input: JsonSchema, resolve: Resolve): string {
   const schema = resolved(input, resolve);
   const parts: string[] = [];
   const number = (key: string) => (typeof schema[key] === 'number' ? (schema[key] as number) : undefined);
-  const lower = number('minimum') !== undefined ? `≥ ${number('minimum')}` : number('exclusiveMinimum') !== undefined ? `> ${number('exclusiveMinimum')}` : null;
-  const upper = number('maximum') !== undefined && number('maximum')! < Number.MAX_SAFE_INTEGER ? `≤ ${number('maximum')}` : number('exclusiveMaximum') !== undefined ? `< ${number('exclusiveMaximum')}` : null;
+  const bound = (sign: string, key: string) => (number(key) !== undefined ? `${sign} ${shown(number(key)!)}` : null);
+  const lower = bound('≥', 'minimum') ?? bound('>', 'exclusiveMinimum');
+  const upper = (number('maximum') !== undefined && number('maximum')! < Number.MAX_SAFE_INTEGER ? bound('≤', 'maximum') : null) ?? bound('<', 'exclusiveMaximum');
   if (lower) parts.push(lower);
   if (upper) parts.push(upper);
   if (number('minLength') !== undefined || number('maxLength') !== undefined) parts.push(`${number('minLength') ?? 0}–${number('maxLength') ?? '…'} characters`);

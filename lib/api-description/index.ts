@@ -23,6 +23,14 @@ export const API_OPERATIONS: readonly ApiOperation[] = [
   ...ANALYSIS_OPERATIONS, ...PLAN_OPERATIONS, ...REVISION_OPERATIONS, ...COMMENT_OPERATIONS, ...TEAM_OPERATIONS, ...ACCOUNT_OPERATIONS, ...SERVICE_OPERATIONS,
 ];
 
+const built = new Map<string, OpenApiDocument>();
+
+/** The document for the app at serverUrl; built once per address, since it changes only with a release. */
 export function apiDocument(serverUrl = publicOrigin()): OpenApiDocument {
-  return buildApiDocument(API_OPERATIONS, serverUrl, API_VERSION);
+  let document = built.get(serverUrl);
+  if (!document) {
+    document = buildApiDocument(API_OPERATIONS, serverUrl, API_VERSION);
+    built.set(serverUrl, document);
+  }
+  return document;
 }

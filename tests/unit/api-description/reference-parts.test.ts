@@ -15,12 +15,14 @@ describe('fieldRows', () => {
     const schema = z.object({
       name: z.string().min(1).max(80).describe('What to call it'),
       lengthM: z.number().positive().max(500).optional(),
+      temperatureC: z.number().min(-40).max(60),
       end: z.discriminatedUnion('kind', [z.object({ kind: z.literal('closed') }), z.object({ kind: z.literal('open'), flange: z.enum(['flanged', 'unflanged']) })]),
       segments: z.array(z.object({ teamId: z.uuid() })).min(1),
     });
     expect(fieldRows(jsonSchemaOf(schema), noRefs)).toEqual([
       { name: 'name', type: 'string', required: true, limits: '1–80 characters', description: 'What to call it' },
       { name: 'lengthM', type: 'number', required: false, limits: '> 0, ≤ 500', description: '' },
+      { name: 'temperatureC', type: 'number', required: true, limits: '≥ \u221240, ≤ 60', description: '' },
       { name: 'end', type: '"closed" | "open" (flange)', required: true, limits: '', description: '' },
       { name: 'segments', type: 'array of object', required: true, limits: '1–… items', description: '' },
       { name: 'segments[].teamId', type: 'id (UUID)', required: true, limits: '', description: '' },
