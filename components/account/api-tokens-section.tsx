@@ -1,6 +1,7 @@
 'use client';
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import Link from 'next/link';
 import { useState } from 'react';
 import type { TokenView } from '@/lib/auth/api-tokens';
 import { ROLE_LABELS, type Role } from '@/lib/permissions';
@@ -107,7 +108,7 @@ export function ApiTokensSection({ teams }: { teams: TeamChoice[] }) {
   return (
     <section className="panel space-y-3 p-6" aria-labelledby="tokens-title">
       <h2 id="tokens-title" className="font-semibold">API tokens</h2>
-      <p className="text-sm text-graphite-500">Scripts use a token to call the API as you, in one team, with the role you give it, until it expires or you revoke it.</p>
+      <p className="text-sm text-graphite-500">Scripts use a token to call the API as you, in one team, with the role you give it, until it expires or you revoke it. The <Link href="/account/api" className="underline">API reference</Link> lists every route with an example call.</p>
       <Providers>
         <CreateToken teams={teams} />
         <TokenList />

@@ -40,6 +40,9 @@ export function AccountMenu({ name, email }: { name: string; email: string }) {
           <Link role="menuitem" href="/account" className="block px-3 py-2 hover:bg-paper-sunk focus:bg-paper-sunk" onClick={() => setOpen(false)}>
             Account
           </Link>
+          <Link role="menuitem" href="/account/api" className="block px-3 py-2 hover:bg-paper-sunk focus:bg-paper-sunk" onClick={() => setOpen(false)}>
+            API reference
+          </Link>
           <button role="menuitem" type="button" className="block w-full px-3 py-2 text-left hover:bg-paper-sunk focus:bg-paper-sunk" onClick={signOut}>
             Sign out
           </button>

@@ -24,7 +24,7 @@ export {
 export { validateRun } from './validate-run';
 export { inputError } from './input-error';
 export { bladePassHz } from './blade-pass';
-export { OCTAVE_BANDS_HZ } from './constants';
+export { MIN_SECTION_DIMENSION_M, OCTAVE_BANDS_HZ, UNFLANGED_END_CORRECTION_PER_RADIUS } from './constants';
 export {
   MIN_AIR_TEMPERATURE_C, MAX_AIR_TEMPERATURE_C, MAX_SEGMENT_LENGTH_M, MAX_RUN_LENGTH_M, MAX_RUN_SEGMENTS, MAX_BRANCH_DEPTH,
   MAX_SECTION_DIMENSION_M, MAX_LINING_THICKNESS_M, MAX_ANALYSIS_HZ, MAX_HZ_PER_CUTOFF, MAX_RESONANCES, MAX_ECHOES,

@@ -28,3 +28,6 @@ export type SignUpInput = z.input<typeof signUpSchema>;
 export const signUpConfirmSchema = z.object({
   token: text({ error: 'The confirmation link is incomplete.' }).trim().min(1, 'The confirmation link is incomplete.').max(200, 'The confirmation link is not valid.'),
 });
+
+// Switching the team a session works in (PUT /api/v1/sessions/current).
+export const switchTeamSchema = z.object({ teamId: z.uuid('teamId must be a team id') });

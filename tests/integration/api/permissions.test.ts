@@ -21,6 +21,7 @@ const EXPECTED_ACCESS: Record<string, string> = {
   'POST /api/v1/analyze': 'analysis.run',
   'GET /api/v1/health': 'public',
   'GET /api/v1/ready': 'public',
+  'GET /api/v1/openapi.json': 'public',
   'GET /api/v1/me': 'signed-in',
   'PUT /api/v1/me/preferences': 'signed-in',
   'GET /api/v1/me/tokens': 'signed-in',

@@ -1,5 +1,5 @@
-import { z } from 'zod';
 import { signOut, switchTeam } from '@/lib/auth/accounts';
+import { switchTeamSchema } from '@/lib/auth/schemas';
 import { json, route } from '@/lib/http/route';
 
 export const DELETE = route({ access: 'signed-in' }, async ({ actor }) => {
@@ -9,7 +9,7 @@ export const DELETE = route({ access: 'signed-in' }, async ({ actor }) => {
 
 // Switch the team this session works in.
 export const PUT = route({ access: 'signed-in', maxBodyBytes: 1024 }, async ({ actor, readJson }) => {
-  const { teamId } = await readJson(z.object({ teamId: z.uuid('teamId must be a team id') }));
+  const { teamId } = await readJson(switchTeamSchema);
   await switchTeam(actor!.sessionId, actor!.user.id, teamId);
   return json({ activeTeamId: teamId });
 });
