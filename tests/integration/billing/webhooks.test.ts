@@ -34,7 +34,7 @@ async function deliver(delivery: { payload: string; signature?: string }, then: 
 /** The job the webhook queued for this event, as the worker would get it on a given try. */
 async function queuedJob(eventIdSent: string, retryCount: number): Promise<Parameters<typeof applyBillingEventJob>[0]> {
   const [rows] = await sequelize.query(
-    `select j.id, j.data from pgboss.job j join billing_events e on e.id::text = j.data->>'billingEventId' where j.name = 'apply-billing-event' and e."providerEventId" = $1`,
+    `select id, data from pgboss.job where name = 'apply-billing-event' and data->'event'->>'id' = $1`,
     { bind: [eventIdSent] },
   );
   const [job] = rows as { id: string; data: JobData['apply-billing-event'] }[];
