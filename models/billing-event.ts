@@ -4,9 +4,10 @@ import {
 import { sequelize } from '@/lib/db';
 import type { Team } from './team';
 
-// applied: changed the team's billing; ignored: a kind we do not act on;
-// refused: bad signature, replay, or no team matched.
-export type BillingEventOutcome = 'applied' | 'ignored' | 'refused';
+// queued: verified and recorded, waiting for its job; applied: changed the team's billing;
+// ignored: a kind we do not act on, or no team matched; refused: signed but malformed;
+// failed: its job gave up (the payment service could not be asked on any try).
+export type BillingEventOutcome = 'queued' | 'applied' | 'ignored' | 'refused' | 'failed';
 
 export class BillingEvent extends Model<InferAttributes<BillingEvent>, InferCreationAttributes<BillingEvent>> {
   declare id: CreationOptional<string>;

@@ -20,6 +20,8 @@ export ANTINODE_DIST_DIR=.next-test
 
 step "Building the app for the browser tests"
 build_app test-build.log
+# Webhooks are applied by the job worker.
+start_jobs_worker test
 
 step "Keeping both cores busy (two loops, at most an hour)"
 BURNERS=()
@@ -27,7 +29,7 @@ for _ in 1 2; do
   timeout 3600 node -e 'for (;;) {}' &
   BURNERS+=($!)
 done
-trap 'kill "${BURNERS[@]}" 2>/dev/null' EXIT
+trap 'kill "${BURNERS[@]}" 2>/dev/null; stop_pid_file "$DATA_DIR/jobs-test.pid" "the job worker (test)"' EXIT
 
 step "Billing browser tests, $REPEATS times in a row"
 node node_modules/@playwright/test/cli.js test tests/e2e/team-billing.spec.ts --repeat-each "$REPEATS" || {

@@ -5,15 +5,16 @@
 //   shape: a signed event that is not JSON or lacks what its type needs → 400, recorded once in
 //     billing_events under its id (or the payload's hash), since only the service can sign it;
 //   its id: an event already received → 200 "duplicate", nothing applied twice;
-// then it is applied by re-reading the subscription from the service (apply-event.ts). If the
-// service cannot be asked, 503 and nothing is recorded, so the service sends it again.
+// then it is recorded as "queued" together with its apply-billing-event job, in one transaction,
+// and answered 200 at once; the job worker applies it by re-reading the subscription from the
+// service (apply-event-job.ts), trying again with backoff while the service cannot be asked.
 import { createHash } from 'node:crypto';
 import Stripe from 'stripe';
 import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
+import { sendJob } from '@/lib/jobs/queue';
 import { BillingEvent } from '@/models';
-import { applyBillingEvent, type EventResult } from './apply-event';
 import { parseEvent } from './event-shape';
 import { countRefusal, type RefusalKind } from './refusals';
 import { webhookSecret } from './stripe';
@@ -62,20 +63,21 @@ async function refuseMalformed(payload: string, reason: string, id: string | nul
   throw new AppError('bad_input', `The event was refused: ${reason}.`);
 }
 
-export async function receiveWebhook(payload: string, signature: string | null, now = new Date()): Promise<EventResult> {
+export interface WebhookReceipt { outcome: 'queued' | 'duplicate'; reason: string }
+
+export async function receiveWebhook(payload: string, signature: string | null, now = new Date()): Promise<WebhookReceipt> {
   await verify(payload, signature, Math.floor(now.getTime() / 1000));
   const parsed = parseEvent(payload);
   if (!parsed.ok) return refuseMalformed(payload, parsed.reason, parsed.id, parsed.type);
   const { event } = parsed;
   try {
-    return await sequelize.transaction(async (transaction) => {
-      const logged = await BillingEvent.create({ providerEventId: event.id, type: event.type, teamId: null, outcome: 'ignored' }, { transaction });
-      const result = await applyBillingEvent(event, transaction);
-      await logged.update({ teamId: result.teamId, outcome: result.outcome === 'applied' ? 'applied' : 'ignored', reason: result.reason.slice(0, 500) }, { transaction });
-      return result;
+    await sequelize.transaction(async (transaction) => {
+      const logged = await BillingEvent.create({ providerEventId: event.id, type: event.type, teamId: null, outcome: 'queued' }, { transaction });
+      await sendJob('apply-billing-event', { billingEventId: logged.id, event }, { transaction });
     });
+    return { outcome: 'queued', reason: `${event.id} will be applied by the job worker` };
   } catch (error) {
-    if (error instanceof UniqueConstraintError) return { outcome: 'duplicate', teamId: null, reason: `${event.id} was already received` };
+    if (error instanceof UniqueConstraintError) return { outcome: 'duplicate', reason: `${event.id} was already received` };
     throw error;
   }
 }

@@ -2,6 +2,7 @@
 import type PgBoss from 'pg-boss';
 import { passwordResetMailJob } from '@/lib/account/recovery';
 import { signUpMailJob } from '@/lib/auth/sign-up';
+import { applyBillingEventJob } from '@/lib/billing/apply-event-job';
 import { analysePlanJob } from './analyse-plan';
 import type { JobData, JobName } from './names';
 import { renderScheduleJob } from './render-schedule';
@@ -13,6 +14,7 @@ export const JOB_HANDLERS: { [N in JobName]: (job: PgBoss.JobWithMetadata<JobDat
   'send-mail': sendMailJob,
   'sign-up-mail': signUpMailJob,
   'password-reset-mail': passwordResetMailJob,
+  'apply-billing-event': applyBillingEventJob,
 };
 
 /** Registers every handler with the queue: one job at a time per kind, looking for new ones every `pollS` seconds. */

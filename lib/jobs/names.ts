@@ -1,4 +1,5 @@
 // The kinds of background job, what each carries, and how each is retried.
+import type { BillingEventIn } from '@/lib/billing/event-shape';
 import type { MailMessage } from '@/lib/mail/send';
 
 export interface JobData {
@@ -12,6 +13,8 @@ export interface JobData {
   'sign-up-mail': { name: string; email: string; teamName: string; passwordHash: string; requestedAt: string };
   /** A password reset asked for: look the address up, then queue the link if it has an account. */
   'password-reset-mail': { email: string; requestedAt: string };
+  /** A payment-service event, verified and recorded as received: apply it to its team. */
+  'apply-billing-event': { billingEventId: string; event: BillingEventIn };
 }
 
 export type JobName = keyof JobData;
@@ -29,4 +32,6 @@ export const JOB_QUEUES: Record<JobName, { retryLimit: number; retryDelay: numbe
   'send-mail': { retryLimit: 7, retryDelay: 15, retryBackoff: true, expireInSeconds: 60 },
   'sign-up-mail': { retryLimit: 4, retryDelay: 10, retryBackoff: true, expireInSeconds: 60 },
   'password-reset-mail': { retryLimit: 4, retryDelay: 10, retryBackoff: true, expireInSeconds: 60 },
+  // the payment service away for a while: waits of 10–20 s, doubling each try, up to about 3 hours in all
+  'apply-billing-event': { retryLimit: 10, retryDelay: 10, retryBackoff: true, expireInSeconds: 60 },
 };

@@ -7,18 +7,21 @@ import { DELETE as cancel } from '@/app/api/v1/team/billing/subscription/route';
 import { paymentService } from '@/lib/billing/stripe';
 import { sequelize } from '@/lib/db';
 import { TeamBilling } from '@/models';
+import { workWaitingJobs } from '../helpers/jobs';
 import { createTestTeam } from '../helpers/people';
 import { call } from '../helpers/routes';
 import { signedDelivery } from '../helpers/webhooks';
 
 afterAll(async () => { await sequelize.close(); });
 
-// Delivers what the payment service would send about a subscription, as it is now.
+// Delivers what the payment service would send about a subscription, as it is now, and works its job.
 async function webhookFor(subscriptionId: string, type: string): Promise<number> {
   const subscription = await paymentService().subscriptions.retrieve(subscriptionId);
   const { payload, signature } = signedDelivery({ id: `evt_${subscriptionId}_${type}_${Date.now()}`, type, data: { object: subscription } });
   const request = new Request('http://localhost/api/v1/billing/webhook', { method: 'POST', headers: { host: 'localhost', 'stripe-signature': signature }, body: payload });
-  return (await webhook(request, { params: Promise.resolve({}) })).status;
+  const { status } = await webhook(request, { params: Promise.resolve({}) });
+  await workWaitingJobs(['apply-billing-event']);
+  return status;
 }
 
 describe('seats', () => {

@@ -1,25 +1,48 @@
 // Payment webhooks, delivered by hand against teams with real subscriptions in the local
 // payment fake (their own webhooks held back). Signature scheme and tolerance: the payment
 // service's webhook documentation (HMAC-SHA256 over "timestamp.payload", 5 minutes by default);
-// refusing stamps from the future as well as the past is common practice, no source.
+// refusing stamps from the future as well as the past is common practice, no source. A verified
+// event is recorded and answered at once; its job applies it (worked here in the test's process).
 import { createHash } from 'node:crypto';
-import { afterAll, describe, expect, it } from 'vitest';
+import Stripe from 'stripe';
+import { afterAll, describe, expect, it, vi } from 'vitest';
 import { POST as webhook } from '@/app/api/v1/billing/webhook/route';
 import { GET as listProjects, POST as createProject } from '@/app/api/v1/projects/route';
+import { applyBillingEventJob } from '@/lib/billing/apply-event-job';
+import { paymentService } from '@/lib/billing/stripe';
 import { sequelize } from '@/lib/db';
+import type { JobData } from '@/lib/jobs/names';
 import { AuditEvent, BillingEvent, BillingRefusal, TeamBilling } from '@/models';
+import { workWaitingJobs } from '../helpers/jobs';
 import { call } from '../helpers/routes';
 import { fakeControl, setQuantity, subscribedTeam } from '../helpers/payment-fake';
 import { eventId, invoiceEvent, signedDelivery, signedPayload, subscriptionEvent } from '../helpers/webhooks';
 
 afterAll(async () => { await sequelize.close(); });
 
-async function deliver(delivery: { payload: string; signature?: string }): Promise<{ status: number; body: unknown }> {
+/** Delivers, then works the apply-billing-event jobs waiting (as the job worker would); `queue` leaves them waiting. */
+async function deliver(delivery: { payload: string; signature?: string }, then: 'apply' | 'queue' = 'apply'): Promise<{ status: number; body: unknown }> {
   const headers: Record<string, string> = { host: 'localhost', 'content-type': 'application/json' };
   if (delivery.signature) headers['stripe-signature'] = delivery.signature;
   const request = new Request('http://localhost/api/v1/billing/webhook', { method: 'POST', headers, body: delivery.payload });
   const response = await webhook(request, { params: Promise.resolve({}) });
-  return { status: response.status, body: await response.json() };
+  const answer = { status: response.status, body: await response.json() };
+  if (then === 'apply') await workWaitingJobs(['apply-billing-event']);
+  return answer;
+}
+
+/** The job the webhook queued for this event, as the worker would get it on a given try. */
+async function queuedJob(eventIdSent: string, retryCount: number): Promise<Parameters<typeof applyBillingEventJob>[0]> {
+  const [rows] = await sequelize.query(
+    `select id, data from pgboss.job where name = 'apply-billing-event' and data->'event'->>'id' = $1`,
+    { bind: [eventIdSent] },
+  );
+  const [job] = rows as { id: string; data: JobData['apply-billing-event'] }[];
+  return { id: job!.id, data: job!.data, retryCount, retryLimit: 10 };
+}
+
+function serviceAway(): void {
+  vi.spyOn(paymentService().subscriptions, 'retrieve').mockRejectedValueOnce(new Stripe.errors.StripeConnectionError({ message: 'connect ECONNREFUSED 127.0.0.1' }));
 }
 
 async function refusalCount(kind: string): Promise<number> {
@@ -30,8 +53,10 @@ describe('payment webhooks', () => {
   it('a signed event brings the team in line with the subscription the service holds', async () => {
     const team = await subscribedTeam('hook-ok', 2);
     await setQuantity(team, 6);
-    const answer = await deliver(signedDelivery(subscriptionEvent('customer.subscription.updated', team.customerId, 6, { subscription: team.subscriptionId })));
-    expect(answer).toMatchObject({ status: 200, body: { outcome: 'applied' } });
+    const event = subscriptionEvent('customer.subscription.updated', team.customerId, 6, { subscription: team.subscriptionId });
+    const answer = await deliver(signedDelivery(event));
+    expect(answer).toMatchObject({ status: 200, body: { outcome: 'queued' } });
+    expect(await BillingEvent.findOne({ where: { providerEventId: String(event.id) } })).toMatchObject({ outcome: 'applied', teamId: team.team.id });
     expect(await TeamBilling.findByPk(team.team.id)).toMatchObject({ paidSeats: 6, state: 'active' });
     expect(await AuditEvent.findOne({ where: { teamId: team.team.id, action: 'billing.seats_changed' } })).toMatchObject({ actorName: 'Payment service', subject: '2 → 6 paid seats' });
   });
@@ -80,7 +105,7 @@ describe('payment webhooks', () => {
     await setQuantity(team, 4);
     const event = subscriptionEvent('customer.subscription.updated', team.customerId, 4, { subscription: team.subscriptionId });
     const delivery = signedDelivery(event);
-    expect(await deliver(delivery)).toMatchObject({ status: 200, body: { outcome: 'applied' } });
+    expect(await deliver(delivery)).toMatchObject({ status: 200, body: { outcome: 'queued' } });
     expect(await deliver(delivery)).toMatchObject({ status: 200, body: { outcome: 'duplicate' } });
     expect(await deliver(signedDelivery(event))).toMatchObject({ status: 200, body: { outcome: 'duplicate' } });
     expect(await BillingEvent.count({ where: { providerEventId: String(event.id) } })).toBe(1);
@@ -151,7 +176,37 @@ describe('payment webhooks', () => {
   });
 
   it('an event for a customer no team has is received but changes nothing', async () => {
-    const answer = await deliver(signedDelivery({ ...subscriptionEvent('customer.subscription.updated', 'cus_nobody', 50), id: eventId() }));
-    expect(answer).toMatchObject({ status: 200, body: { outcome: 'ignored' } });
+    const event = { ...subscriptionEvent('customer.subscription.updated', 'cus_nobody', 50), id: eventId() };
+    expect(await deliver(signedDelivery(event))).toMatchObject({ status: 200, body: { outcome: 'queued' } });
+    expect(await BillingEvent.findOne({ where: { providerEventId: event.id } })).toMatchObject({ outcome: 'ignored', reason: 'no team has customer cus_nobody' });
+  });
+
+  it('while the payment service cannot be asked, the event waits in its job and is applied once on a later try', async () => {
+    const team = await subscribedTeam('hook-away', 2);
+    await setQuantity(team, 8);
+    const event = subscriptionEvent('customer.subscription.updated', team.customerId, 8, { subscription: team.subscriptionId });
+    // The answer does not wait for the service: the delivery is taken as received.
+    expect(await deliver(signedDelivery(event), 'queue')).toMatchObject({ status: 200, body: { outcome: 'queued' } });
+    serviceAway();
+    await expect(workWaitingJobs(['apply-billing-event'])).rejects.toThrow(/could not be asked about subscription/);
+    expect(await BillingEvent.findOne({ where: { providerEventId: String(event.id) } })).toMatchObject({ outcome: 'queued' });
+    expect(await TeamBilling.findByPk(team.team.id)).toMatchObject({ paidSeats: 2 });
+    // Its retry (the queue waits 10 s, doubling; run here at once), then the same job again, as after a lost worker.
+    const retry = await queuedJob(String(event.id), 1);
+    expect(await applyBillingEventJob(retry)).toMatchObject({ outcome: 'applied' });
+    expect(await applyBillingEventJob(retry)).toMatchObject({ outcome: 'duplicate' });
+    expect(await TeamBilling.findByPk(team.team.id)).toMatchObject({ paidSeats: 8 });
+    expect(await AuditEvent.count({ where: { teamId: team.team.id, action: 'billing.seats_changed' } })).toBe(1);
+  });
+
+  it('an event whose last try fails is recorded as failed, saying why', async () => {
+    const team = await subscribedTeam('hook-gave-up', 2);
+    const event = subscriptionEvent('customer.subscription.updated', team.customerId, 3, { subscription: team.subscriptionId });
+    await deliver(signedDelivery(event), 'queue');
+    const lastTry = await queuedJob(String(event.id), 10);
+    serviceAway();
+    await expect(applyBillingEventJob(lastTry)).rejects.toThrow(/could not be asked/);
+    expect(await BillingEvent.findOne({ where: { providerEventId: String(event.id) } })).toMatchObject({ outcome: 'failed', reason: expect.stringMatching(/^not applied after 11 tries: The payment service could not be asked/) });
+    await workWaitingJobs(['apply-billing-event']).catch(() => undefined); // leave no job of this test waiting for the others
   });
 });
