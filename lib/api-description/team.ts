@@ -97,8 +97,8 @@ export const TEAM_OPERATIONS: ApiOperation[] = [
   },
   {
     method: 'POST', path: '/api/v1/billing/webhook', area: 'Team', access: 'public', summary: 'Payment service events (called by the payment service)',
-    description: 'Trusted only through its signature; events are stored once under their id and make the team read its subscription again.',
+    description: 'Trusted only through its signature; events are stored once under their id and answered at once; the job worker then makes the team read its subscription again, retrying while the payment service cannot be asked.',
     body: { kind: 'text', description: 'The event as the payment service signed it.', header: { name: 'Stripe-Signature', description: 'The payment service\'s signature of the body and its time stamp (at most 5 minutes off).' } },
-    responses: { 200: { description: 'Received.', fields: { received: 'true', outcome: 'applied, duplicate or ignored' } } },
+    responses: { 200: { description: 'Received.', fields: { received: 'true', outcome: 'queued (to be applied by the job worker) or duplicate (already received)' } } },
   },
 ];
