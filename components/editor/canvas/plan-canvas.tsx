@@ -10,7 +10,10 @@ import { withOutletAtItsEnd } from '@/lib/plan/rooms/outlet-link';
 import type { Selection } from '@/lib/plan/editor-state';
 import type { Point } from '@/lib/plan/geometry';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
+import { DxfLines } from './dxf-lines';
 import { GridShape } from './grid-shape';
+import type { PlanBackground } from './plan-background';
+import { useDxfDrawing } from './use-dxf-drawing';
 import { ModeOverlay } from './mode-overlay';
 import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
@@ -36,7 +39,7 @@ export interface PlanCanvasProps {
   document: PlanDocument;
   widthPx: number;
   heightPx: number;
-  background: { url: string; widthPx: number; heightPx: number } | null;
+  background: PlanBackground | null;
   /** The drawing grid: step and origin, plan pixels. */
   grid: { spacingPx: number; origin: Point | null };
   metresPerPixel: number;
@@ -77,6 +80,7 @@ function sectionWords(section: Section, system: UnitSystem): string {
   return section.shape === 'round' ? `Ø ${size(section.diameterM)}` : `${size(section.widthM).replace(/ (mm|in)$/, '')} × ${size(section.heightM)}`;
 }
 const ignoreRoomDrag = () => {};
+const NO_LAYERS: ReadonlySet<string> = new Set();
 
 function targetOf(event: Konva.KonvaEventObject<MouseEvent>): CanvasTarget {
   const id = event.target.id();
@@ -108,7 +112,8 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   // viewport size it was last laid out for, and whether the person has panned or zoomed since
   // the fit (then a resize keeps the centre instead).
   const fitted = useRef({ key: '', area: openingArea(doc, props.metresPerPixel, background), widthPx, heightPx, movedSinceFit: false });
-  const image = useImage(background?.url ?? null);
+  const image = useImage(background?.kind === 'image' ? background.url : null);
+  const dxf = useDxfDrawing(background?.kind === 'dxf' ? background.url : null);
   // A vertex being dragged: it and the segments touching it are drawn on their own layer, so
   // each move redraws a handful of shapes instead of the whole plan.
   const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number; moved: boolean } | null>(null);
@@ -293,6 +298,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       <Layer listening={false}>
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
+        {dxf.drawing && <DxfLines drawing={dxf.drawing} hiddenLayers={background?.hiddenLayers ?? NO_LAYERS} />}
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.grid.spacingPx} origin={props.grid.origin} scale={view.scale} />
       </Layer>
       <Layer>
