@@ -298,8 +298,9 @@ export default function PlanCanvas(props: PlanCanvasProps) {
       <Layer listening={false}>
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
-        {dxf.drawing && <DxfLines drawing={dxf.drawing} hiddenLayers={background?.hiddenLayers ?? NO_LAYERS} />}
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.grid.spacingPx} origin={props.grid.origin} scale={view.scale} />
+        {/* over the grid: a DXF's lines are thin and would vanish under a grid line they lie on */}
+        {dxf.drawing && <DxfLines drawing={dxf.drawing} hiddenLayers={background?.hiddenLayers ?? NO_LAYERS} />}
       </Layer>
       <Layer>
         {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (
