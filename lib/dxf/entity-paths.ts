@@ -13,12 +13,12 @@ function finite(point: { x?: number; y?: number } | undefined): point is Point {
 
 /** Vertices with bulges (group 42) joined by straight pieces or arcs; closed adds the piece back to the first. */
 function bulgedPath(vertices: { x: number; y: number; bulge?: number }[], closed: boolean): Point[] {
-  const points = vertices.filter(finite);
+  const points: { x: number; y: number; bulge?: number }[] = vertices.filter(finite);
   if (points.length < 2) return [];
   const path: Point[] = [{ x: points[0]!.x, y: points[0]!.y }];
   const count = closed ? points.length : points.length - 1;
   for (let index = 0; index < count; index += 1) {
-    const from = vertices[index]!;
+    const from = points[index]!;
     const to = points[(index + 1) % points.length]!;
     const piece = from.bulge ? bulgePoints(from, to, from.bulge) : [from, to];
     for (const point of piece.slice(1)) path.push({ x: point.x, y: point.y });

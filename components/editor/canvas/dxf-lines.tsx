@@ -32,11 +32,13 @@ function strokePath(path2d: Path2D) {
   };
 }
 
-export const DxfLines = memo(function DxfLines({ drawing, hiddenLayers }: { drawing: DxfDrawing; hiddenLayers: ReadonlySet<string> }) {
-  const layers = useMemo(() => drawing.layers.map((layer) => ({ name: layer.name, sceneFunc: strokePath(layerPath(layer)) })), [drawing]);
+/** Without a list of hidden layers (a frozen revision's view), the layers off or frozen in the file are not drawn. */
+export const DxfLines = memo(function DxfLines({ drawing, hiddenLayers }: { drawing: DxfDrawing; hiddenLayers?: ReadonlySet<string> }) {
+  const layers = useMemo(() => drawing.layers.map((layer) => ({ name: layer.name, offInFile: layer.offInFile, sceneFunc: strokePath(layerPath(layer)) })), [drawing]);
+  const hidden = (layer: { name: string; offInFile: boolean }) => (hiddenLayers ? hiddenLayers.has(layer.name) : layer.offInFile);
   return (
     <>
-      {layers.filter((layer) => !hiddenLayers.has(layer.name)).map((layer) => (
+      {layers.filter((layer) => !hidden(layer)).map((layer) => (
         <Shape key={layer.name} name="dxf-layer" layerName={layer.name} sceneFunc={layer.sceneFunc} listening={false} perfectDrawEnabled={false} />
       ))}
     </>

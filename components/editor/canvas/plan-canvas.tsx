@@ -80,7 +80,6 @@ function sectionWords(section: Section, system: UnitSystem): string {
   return section.shape === 'round' ? `Ø ${size(section.diameterM)}` : `${size(section.widthM).replace(/ (mm|in)$/, '')} × ${size(section.heightM)}`;
 }
 const ignoreRoomDrag = () => {};
-const NO_LAYERS: ReadonlySet<string> = new Set();
 
 function targetOf(event: Konva.KonvaEventObject<MouseEvent>): CanvasTarget {
   const id = event.target.id();
@@ -300,7 +299,7 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.grid.spacingPx} origin={props.grid.origin} scale={view.scale} />
         {/* over the grid: a DXF's lines are thin and would vanish under a grid line they lie on */}
-        {dxf.drawing && <DxfLines drawing={dxf.drawing} hiddenLayers={background?.hiddenLayers ?? NO_LAYERS} />}
+        {dxf.drawing && <DxfLines drawing={dxf.drawing} hiddenLayers={background?.hiddenLayers} />}
       </Layer>
       <Layer>
         {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (
