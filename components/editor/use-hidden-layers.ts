@@ -20,22 +20,27 @@ function read(key: string): string[] | null {
   }
 }
 
+function offInFile(drawing: DxfDrawing | null): string[] {
+  return drawing ? drawing.layers.filter((layer) => layer.offInFile).map((layer) => layer.name) : [];
+}
+
 export function useHiddenLayers(planId: string, url: string | null, drawing: DxfDrawing | null): { hidden: ReadonlySet<string>; toggle: (name: string) => void } {
   const [hidden, setHidden] = useState<string[] | null>(null);
   useEffect(() => {
     if (!url || !drawing) { setHidden(null); return; }
-    setHidden(read(storageKey(planId, url)) ?? drawing.layers.filter((layer) => layer.offInFile).map((layer) => layer.name));
+    setHidden(read(storageKey(planId, url)) ?? offInFile(drawing));
   }, [planId, url, drawing]);
   const toggle = useCallback((name: string) => {
     setHidden((current) => {
-      const list = current ?? [];
+      const list = current ?? offInFile(drawing);
       const next = list.includes(name) ? list.filter((other) => other !== name) : [...list, name];
       if (url) {
         try { window.localStorage.setItem(storageKey(planId, url), JSON.stringify(next)); } catch { /* private mode: kept for this visit only */ }
       }
       return next;
     });
-  }, [planId, url]);
-  const set = useMemo(() => new Set(hidden ?? []), [hidden]);
+  }, [planId, url, drawing]);
+  // Until the saved choice is read, the file's own: no layer off in the file flashes on.
+  const set = useMemo(() => new Set(hidden ?? offInFile(drawing)), [hidden, drawing]);
   return { hidden: set, toggle };
 }
