@@ -1,5 +1,6 @@
 // `npm run bench`: runs every registered benchmark in turn. Add a new one by appending to BENCHES.
 import { runAcousticBench } from './acoustic.bench';
+import { runDxfBench } from './dxf.bench';
 import { runNoisePathBench } from './noise-path.bench';
 import { runRoomBench } from './room.bench';
 import { runSearchBench } from './search.bench';
@@ -9,6 +10,7 @@ const BENCHES: Array<{ name: string; run: () => void | Promise<void> }> = [
   { name: 'resonance search', run: runSearchBench },
   { name: 'room', run: runRoomBench },
   { name: 'noise path', run: runNoisePathBench },
+  { name: 'DXF drawing', run: runDxfBench },
 ];
 
 async function main(): Promise<void> {

@@ -31,6 +31,7 @@ SERVER_PID=$!
 trap 'kill $SERVER_PID 2>/dev/null; stop_pid_file "$DATA_DIR/jobs-bench.pid" "the job worker (bench)"' EXIT
 wait_for_health "http://127.0.0.1:$BENCH_PORT/api/v1/health" "$SERVER_PID"
 ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/editor/run.ts || fail "the editor benchmark failed"
+ANTINODE_BENCH_URL="http://localhost:$BENCH_PORT" node node_modules/tsx/dist/cli.mjs bench/editor/dxf.ts || fail "the DXF drawing benchmark failed"
 
 step "Load on loopback (concurrency 8, an oversized analysis in flight)"
 ANTINODE_BENCH_URL="http://127.0.0.1:$BENCH_PORT" ANTINODE_BENCH_SERVER_PID="$SERVER_PID" node node_modules/tsx/dist/cli.mjs bench/load/run.ts || fail "the load benchmark failed"

@@ -4,12 +4,24 @@ import { useRouter } from 'next/navigation';
 import { useRef, useState } from 'react';
 import { apiFetch } from '@/components/api-fetch';
 import type { ErrorBody } from '@/lib/errors';
+import type { StoredDrawing } from '@/lib/uploads/data';
 
 type Message = { ok: boolean; text: string; undo?: { uploadId: string | null } };
+type Uploaded = Pick<StoredDrawing, 'id' | 'dxf'>;
 
-// Upload (or replace) the plan drawing: PNG, JPEG, WebP or the first page of a PDF, up to 20 MB.
+/** What the person reads after an upload: for a DXF, whether its units set the scale. */
+function uploadedWords(fileName: string, upload: Uploaded): string {
+  const dxf = upload.dxf;
+  if (!dxf) return `${fileName} is the plan drawing now.`;
+  const layers = `${dxf.layerNames.length} layer${dxf.layerNames.length === 1 ? '' : 's'}`;
+  return dxf.metresPerPixel
+    ? `${fileName} is the plan drawing now (${layers}), at true size: the file is in ${dxf.unitsName}, so the scale is set from it.`
+    : `${fileName} is the plan drawing now (${layers}). It states no units: set the scale from two points (K).`;
+}
+
+// Upload (or replace) the plan drawing: PNG, JPEG, WebP, the first page of a PDF, or a DXF, up to 20 MB.
 // After an upload, Undo puts back the drawing the plan had before (or the blank grid).
-export function BackgroundUpload({ planId, backgroundId }: { planId: string; backgroundId: string | null }) {
+export function BackgroundUpload({ planId, backgroundId, onUploaded }: { planId: string; backgroundId: string | null; onUploaded?: (upload: Uploaded) => void }) {
   const router = useRouter();
   const input = useRef<HTMLInputElement>(null);
   const [busy, setBusy] = useState(false);
@@ -37,7 +49,9 @@ export function BackgroundUpload({ planId, backgroundId }: { planId: string; bac
         setMessage({ ok: false, text: error?.message ?? `The upload failed (${response.status}).` });
         return;
       }
-      setMessage({ ok: true, text: `${file.name} is the plan drawing now.`, undo: { uploadId: backgroundId } });
+      const { upload: stored } = (await response.json()) as { upload: Uploaded };
+      setMessage({ ok: true, text: uploadedWords(file.name, stored), undo: { uploadId: backgroundId } });
+      onUploaded?.(stored);
       router.refresh();
     } catch {
       setMessage({ ok: false, text: 'The server could not be reached; nothing changed.' });
@@ -49,7 +63,7 @@ export function BackgroundUpload({ planId, backgroundId }: { planId: string; bac
 
   return (
     <div className="relative flex items-center gap-2">
-      <input ref={input} type="file" accept="image/png,image/jpeg,image/webp,application/pdf" className="sr-only" id="background-file" aria-label="Plan drawing file"
+      <input ref={input} type="file" accept="image/png,image/jpeg,image/webp,application/pdf,.dxf,image/vnd.dxf" className="sr-only" id="background-file" aria-label="Plan drawing file"
         onChange={(event) => { const file = event.target.files?.[0]; if (file) void upload(file); }} />
       <label htmlFor="background-file" className={`btn-quiet cursor-pointer whitespace-nowrap ${busy ? 'opacity-50' : ''}`}>{busy ? 'Uploading…' : hasBackground ? 'Replace drawing' : 'Upload drawing'}</label>
       {message && (

@@ -13,6 +13,10 @@ import { PlanRevisionActions } from '@/components/revisions/plan-revision-action
 import { UnitSystemToggle } from '@/components/shell/unit-system-toggle';
 import type { RevisionSummary } from '@/lib/revisions/types';
 import { BackgroundUpload } from './background-upload';
+import { planBackgroundOf } from './canvas/plan-background';
+import { useDxfDrawing } from './canvas/use-dxf-drawing';
+import { DrawingLayersPanel } from './drawing-layers-panel';
+import { useHiddenLayers } from './use-hidden-layers';
 import { ConflictDialog } from './dialogs/conflict-dialog';
 import { HelpOverlay } from './dialogs/help-overlay';
 import { ScaleDialog } from './dialogs/scale-dialog';
@@ -133,9 +137,15 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
   const nodeTermination = selectedNode && nodeRun ? nodeRun.terminations[selectedNode.id] : undefined;
   const panelRun = (selectedSegment && runOfSegment(doc, selectedSegment.id)) || nodeRun || (activeRunId ? findRun(doc, activeRunId) ?? null : null);
 
-  const background = useMemo(() => (plan.background && plan.background.widthPx && plan.background.heightPx
-    ? { url: `/api/v1/uploads/${plan.background.id}`, widthPx: plan.background.widthPx, heightPx: plan.background.heightPx }
-    : null), [plan.background]);
+  const drawing = useMemo(() => planBackgroundOf(plan.background), [plan.background]);
+  const dxf = useDxfDrawing(drawing?.kind === 'dxf' ? drawing.url : null);
+  const layers = useHiddenLayers(plan.id, drawing?.kind === 'dxf' ? drawing.url : null, dxf.drawing);
+  const background = useMemo(() => (drawing ? { ...drawing, hiddenLayers: layers.hidden } : null), [drawing, layers.hidden]);
+  // A DXF whose units are stated sets the scale from the file (one undo step, saved like a scale set by hand).
+  const onUploaded = useCallback((upload: { dxf?: { metresPerPixel: number | null } }) => {
+    const metresPerPixel = upload.dxf?.metresPerPixel;
+    if (metresPerPixel && metresPerPixel !== modelRef.current.metresPerPixel) dispatch({ type: 'set-scale', metresPerPixel });
+  }, []);
 
   const openRoom = openRoomId ? doc.rooms.find((room) => room.id === openRoomId) ?? null : null;
   const openRoomResult = risks.data?.rooms.find((room) => room.roomId === openRoomId) ?? null;
@@ -161,7 +171,7 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
             <>
               <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'undo' })} disabled={model.history.past.length === 0} title="Undo (Ctrl+Z)" aria-label="Undo"><span aria-hidden="true" className="xl:hidden">↶</span><span aria-hidden="true" className="hidden xl:inline">Undo</span></button>
               <button type="button" className="btn-quiet whitespace-nowrap" onClick={() => dispatch({ type: 'redo' })} disabled={model.history.future.length === 0} title="Redo (Ctrl+Shift+Z)" aria-label="Redo"><span aria-hidden="true" className="xl:hidden">↷</span><span aria-hidden="true" className="hidden xl:inline">Redo</span></button>
-              <BackgroundUpload planId={plan.id} backgroundId={plan.background?.id ?? null} />
+              <BackgroundUpload planId={plan.id} backgroundId={plan.background?.id ?? null} onUploaded={onUploaded} />
             </>
           )}
           <UnitSystemToggle unitSystem={unitSystem} />
@@ -249,6 +259,8 @@ function PlanEditorBody({ plan, editable, unitSystem, canEvaluate = editable, re
                 ))}
               </div>
               {sideTab === 'comments' ? <CommentsPanel place={{ document: doc, metresPerPixel: model.metresPerPixel, unitSystem, labels }} /> : (<>
+              {dxf.drawing && <DrawingLayersPanel drawing={dxf.drawing} hidden={layers.hidden} onToggle={layers.toggle} />}
+              {dxf.error && <p role="alert" className="text-sm text-risk-ink">{dxf.error}</p>}
               {doc.runs.length > 1 && (
                 <div>
                   <label htmlFor="run-picker" className="block text-xs font-medium text-graphite-700">Results for</label>

@@ -8,13 +8,14 @@ import { useElementSize } from '@/components/editor/use-element-size';
 import type { CanvasPointer } from '@/components/editor/canvas/plan-canvas';
 import type { PlanDocument } from '@/lib/plan/document';
 import { EMPTY_SELECTION } from '@/lib/plan/editor-state';
+import type { PlanBackground } from '@/components/editor/canvas/plan-background';
 
 const PlanCanvas = dynamic(() => import('@/components/editor/canvas/plan-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-500">Loading the plan…</p> });
 
 interface FrozenCanvasProps {
   document: PlanDocument;
   metresPerPixel: number;
-  background: { url: string; widthPx: number; heightPx: number } | null;
+  background: PlanBackground | null;
 }
 
 const NO_POINTS: never[] = [];

@@ -11,6 +11,7 @@ import type { RiskRow } from '@/lib/revisions/types';
 import { FrozenCanvas } from './frozen-canvas';
 import { ReviewTable } from './review-table';
 import type { RowDecisionState } from './row-decision';
+import type { PlanBackground } from '@/components/editor/canvas/plan-background';
 
 interface RevisionWorkspaceProps {
   planId: string;
@@ -20,7 +21,7 @@ interface RevisionWorkspaceProps {
   /** The frozen labels (null for revisions frozen before labels existed: derived from the document). */
   labels: PlanLabels | null;
   unitSystem: UnitSystem;
-  background: { url: string; widthPx: number; heightPx: number } | null;
+  background: PlanBackground | null;
   runs: RunResult[];
   risks: readonly RiskRow[];
   decisions: Record<string, RowDecisionState>;

@@ -16,4 +16,5 @@ export const COMPUTE_TIME_LIMIT_MS = {
   'plan-analysis': Number(process.env.ANTINODE_PLAN_TIME_LIMIT_MS ?? 15000),
   'plan-envelopes': Number(process.env.ANTINODE_PLAN_TIME_LIMIT_MS ?? 15000),
   'treatment-options': Number(process.env.ANTINODE_TREATMENT_TIME_LIMIT_MS ?? 10000),
+  'dxf-drawing': Number(process.env.ANTINODE_DXF_TIME_LIMIT_MS ?? 20000),
 } as const;

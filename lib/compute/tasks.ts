@@ -1,11 +1,13 @@
 // The work that runs off the request thread, as plain data in and out: one duct run's analysis (the
 // answer's JSON text, with the pressure envelopes asked for), the analysis of a plan version, the
-// envelopes asked for of a plan version's resonances, and the candidate treatments of one flag. Pure:
+// envelopes asked for of a plan version's resonances, the candidate treatments of one flag, and a DXF
+// drawing read into the plan's paths. Pure:
 // the worker threads run these; errors come back as plain data so their kind survives the thread boundary.
 import { analyzeRun, type RunInput } from '@/lib/acoustic';
 import { NO_ENVELOPES, type EnvelopeRequest } from '@/lib/analysis/envelope-request';
 import { roundedRunAnalysis } from '@/lib/analysis/round-answer';
 import { withEnvelopesAsked } from '@/lib/analysis/select-envelopes';
+import { readDxf } from '@/lib/dxf/read';
 import { AppError, type ErrorCode } from '@/lib/errors';
 import type { PlanDocument } from '@/lib/plan/document';
 import { PlanError } from '@/lib/plan/errors';
@@ -19,7 +21,8 @@ export type ComputeTask =
   | { kind: 'analyze-run'; input: unknown; envelopes?: EnvelopeRequest }
   | { kind: 'plan-analysis'; document: PlanDocument; metresPerPixel: number }
   | { kind: 'plan-envelopes'; document: PlanDocument; metresPerPixel: number; runId: string | null; envelopes: EnvelopeRequest }
-  | { kind: 'treatment-options'; document: PlanDocument; metresPerPixel: number; analysis: PlanAnalysis; target: RiskTarget; flagId: string };
+  | { kind: 'treatment-options'; document: PlanDocument; metresPerPixel: number; analysis: PlanAnalysis; target: RiskTarget; flagId: string }
+  | { kind: 'dxf-drawing'; bytes: Uint8Array; fileName: string };
 
 export interface TaskError { name: string; message: string; code?: ErrorCode; field?: string }
 export type TaskOutcome = { ok: true; value: unknown } | { ok: false; error: TaskError };
@@ -36,6 +39,8 @@ function perform(task: ComputeTask): unknown {
       return planRunEnvelopes(task.document, task.metresPerPixel, task.runId, task.envelopes);
     case 'treatment-options':
       return treatmentOptionsFromAnalysis(task.document, task.metresPerPixel, task.analysis, task.target, task.flagId);
+    case 'dxf-drawing':
+      return readDxf(task.bytes, task.fileName);
   }
 }
 

@@ -11,11 +11,11 @@ import type { DecisionView } from '@/lib/reviews/data';
 import { DECISION_LABELS } from '@/lib/reviews/decisions';
 import { describeSection, describeTermination } from './describe';
 import { scheduleDocumentNumber } from './document-number';
-import { planFigure, type ScheduleFigure, type ScheduleImage } from './figure';
+import { planFigure, type ScheduleDrawing, type ScheduleFigure, type ScheduleImage } from './figure';
 import { roomVerdicts, type RoomVerdict } from './in-brief';
 import { reflectionKindWords } from '@/lib/plan/reflection-words';
 
-export { planFigure, type ScheduleFigure, type ScheduleImage };
+export { planFigure, type ScheduleDrawing, type ScheduleFigure, type ScheduleImage };
 
 /** Who issues the schedule: the practice's name and logo from the team settings. */
 export interface SchedulePractice { name: string; logo: ScheduleImage | null }
@@ -154,7 +154,7 @@ function historyRows(history: readonly RevisionSummary[], upTo: number): Schedul
 }
 
 export function scheduleContent(input: {
-  revision: RevisionView; decisions: readonly DecisionView[]; image: ScheduleImage | null; issuedBy: string | null; date: Date;
+  revision: RevisionView; decisions: readonly DecisionView[]; image: ScheduleDrawing | null; issuedBy: string | null; date: Date;
   practice: SchedulePractice; history: readonly RevisionSummary[];
 }): ScheduleContent {
   const { revision } = input;

@@ -17,8 +17,10 @@ import { assertId } from '@/lib/ids';
 import { sendJob } from '@/lib/jobs/queue';
 import { Schedule, Upload } from '@/models';
 import type { ScheduleStatus } from '@/models/schedule';
-import { scheduleContent, type ScheduleImage } from './content';
+import { scheduleContent, type ScheduleDrawing } from './content';
+import { drawingPaths } from './drawing-paths';
 import { renderSchedulePdf } from './render';
+import { isDxfDrawingType, type DxfDrawing } from '@/lib/dxf/drawing';
 
 export interface ScheduleSummary {
   id: string; revisionId: string; status: ScheduleStatus;
@@ -44,11 +46,12 @@ function toSummary(row: Schedule, revision: { planName: string; number: number }
   };
 }
 
-async function planImage(revision: RevisionView): Promise<ScheduleImage | null> {
+async function planImage(revision: RevisionView): Promise<ScheduleDrawing | null> {
   if (!revision.background) return null;
   const upload = await Upload.findOne({ where: { id: revision.background.id, teamId: revision.teamId } });
   if (!upload) return null;
   try {
+    if (isDxfDrawingType(upload.contentType)) return drawingPaths(JSON.parse(new TextDecoder().decode(await getObject(upload.storageKey))) as DxfDrawing);
     return await printImage(await getObject(upload.storageKey), upload.contentType);
   } catch (error) {
     // A drawing stored before uploads were bounded may be over the pixel cap: the plan prints on a blank sheet and says so.

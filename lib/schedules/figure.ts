@@ -9,9 +9,12 @@ import { roomPointPx, roomRectPx } from '@/lib/plan/rooms/room-input';
 import { roomListeners, roomOutlets } from '@/lib/plan/rooms/room-places';
 import type { RevisionView } from '@/lib/revisions/types';
 import { describeSize } from './describe';
+import type { ScheduleLinesDrawing } from './drawing-paths';
 import { boxEdges, placeBox, type Box, type LineSegment, type Obstacles } from './label-place';
 
 export interface ScheduleImage { data: Buffer; format: 'png' | 'jpg' }
+/** The plan's drawing for print: an image, or a DXF's paths. */
+export type ScheduleDrawing = ScheduleImage | ScheduleLinesDrawing;
 export interface ScheduleLine extends LineSegment { segmentId: string; treated: boolean }
 export interface ScheduleRoomOutline { x: number; y: number; widthPx: number; heightPx: number; name: string }
 export type FigureLabelKind = 'run' | 'segment' | 'room' | 'outlet' | 'listener' | 'treatment';
@@ -22,7 +25,7 @@ export interface ScheduleFigure {
   metresPerPixel: number; widthPx: number; heightPx: number; originX: number; originY: number;
   /** Points per plan pixel on the page. */
   scale: number;
-  image: ScheduleImage | null;
+  image: ScheduleDrawing | null;
   /** The plan has a drawing, but it could not be decoded for printing (one stored before drawings were bounded). */
   drawingLeftOut: boolean;
   lines: ScheduleLine[]; rooms: ScheduleRoomOutline[]; marks: FigureMark[]; labels: FigureLabel[]; treatments: FigureTreatment[];
@@ -64,7 +67,7 @@ function treatmentPlaces(doc: PlanDocument, labels: PlanLabels): { tag: string; 
   });
 }
 
-export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerPixel' | 'background' | 'extras'>, image: ScheduleImage | null): ScheduleFigure {
+export function planFigure(revision: Pick<RevisionView, 'document' | 'metresPerPixel' | 'background' | 'extras'>, image: ScheduleDrawing | null): ScheduleFigure {
   const doc = revision.document;
   const mpp = revision.metresPerPixel;
   const labels = revision.extras.labels ?? planLabels(doc);

@@ -14,7 +14,7 @@ test('a non-image upload, an oversized file and a bad CSV row each get a clear m
 
   // Named like a PNG, but it is text.
   await page.locator('#background-file').setInputFiles({ name: 'plan.png', mimeType: 'image/png', buffer: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"/>') });
-  await expect(page.getByTestId('upload-message')).toContainText('is not a PNG, JPEG, WebP or PDF file');
+  await expect(page.getByTestId('upload-message')).toContainText('is not a PNG, JPEG, WebP, PDF or DXF file');
 
   // A real PNG signature padded past 20 MB.
   const big = Buffer.alloc(21 * 1024 * 1024);

@@ -10,7 +10,10 @@ import { withOutletAtItsEnd } from '@/lib/plan/rooms/outlet-link';
 import type { Selection } from '@/lib/plan/editor-state';
 import type { Point } from '@/lib/plan/geometry';
 import type { MainPathPiece } from '@/lib/plan/to-run-input';
+import { DxfLines } from './dxf-lines';
 import { GridShape } from './grid-shape';
+import type { PlanBackground } from './plan-background';
+import { useDxfDrawing } from './use-dxf-drawing';
 import { ModeOverlay } from './mode-overlay';
 import { RoomShape } from './room-shape';
 import { NodeDot } from './node-dot';
@@ -36,7 +39,7 @@ export interface PlanCanvasProps {
   document: PlanDocument;
   widthPx: number;
   heightPx: number;
-  background: { url: string; widthPx: number; heightPx: number } | null;
+  background: PlanBackground | null;
   /** The drawing grid: step and origin, plan pixels. */
   grid: { spacingPx: number; origin: Point | null };
   metresPerPixel: number;
@@ -108,7 +111,8 @@ export default function PlanCanvas(props: PlanCanvasProps) {
   // viewport size it was last laid out for, and whether the person has panned or zoomed since
   // the fit (then a resize keeps the centre instead).
   const fitted = useRef({ key: '', area: openingArea(doc, props.metresPerPixel, background), widthPx, heightPx, movedSinceFit: false });
-  const image = useImage(background?.url ?? null);
+  const image = useImage(background?.kind === 'image' ? background.url : null);
+  const dxf = useDxfDrawing(background?.kind === 'dxf' ? background.url : null);
   // A vertex being dragged: it and the segments touching it are drawn on their own layer, so
   // each move redraws a handful of shapes instead of the whole plan.
   const [drag, setDrag] = useState<{ nodeId: string; x: number; y: number; moved: boolean } | null>(null);
@@ -294,6 +298,8 @@ export default function PlanCanvas(props: PlanCanvasProps) {
         <Rect x={0} y={0} width={contentWidth} height={contentHeight} fill="#ffffff" />
         {image && <KonvaImage image={image} x={0} y={0} width={contentWidth} height={contentHeight} opacity={0.85} />}
         <GridShape widthPx={contentWidth} heightPx={contentHeight} spacingPx={props.grid.spacingPx} origin={props.grid.origin} scale={view.scale} />
+        {/* over the grid: a DXF's lines are thin and would vanish under a grid line they lie on */}
+        {dxf.drawing && <DxfLines drawing={dxf.drawing} hiddenLayers={background?.hiddenLayers} />}
       </Layer>
       <Layer>
         {doc.rooms.map((room) => (room.id === draggedRoomId ? null : (

@@ -2,7 +2,7 @@
 // over it; each segment's label and size, the run names, outlets, listeners and the chosen treatments
 // (tagged T1, T2 …) marked where they go, every word placed clear of the lines; a scale bar, a key and
 // the list of treatments under it.
-import { Image, Svg, Line, Circle, Rect, Text, View } from '@react-pdf/renderer';
+import { Image, Svg, Line, Circle, Path, Rect, Text, View } from '@react-pdf/renderer';
 import type { ScheduleContent } from '../content';
 import { LABEL_FONT_PT, type FigureLabel } from '../figure';
 import { scaleBarFor } from '../scale-bar';
@@ -11,6 +11,7 @@ import { Table } from './table';
 import { INK, RUN_LINE, TREATED, styles } from './styles';
 
 const ROOM_LINE = '#5d626b';
+const DRAWING_LINE = '#8a8f98';
 const LABEL_COLOUR: Record<FigureLabel['kind'], string> = { run: RUN_LINE, segment: INK, room: ROOM_LINE, outlet: ROOM_LINE, listener: ROOM_LINE, treatment: '#ffffff' };
 
 export function PlanFigure({ content }: { content: ScheduleContent }) {
@@ -26,11 +27,15 @@ export function PlanFigure({ content }: { content: ScheduleContent }) {
         Duct runs as frozen in revision {content.revisionNumber}, each segment with its label and size in mm (Ø round, width × height rectangular).
         {' '}Scale as set on the plan: {(figure.metresPerPixel * 1000).toFixed(1)} mm per drawing pixel; the area shown is
         {' '}{(figure.widthPx * figure.metresPerPixel).toFixed(1)} m × {(figure.heightPx * figure.metresPerPixel).toFixed(1)} m.
+        {figure.image?.format === 'lines' ? ` The drawing is drawn from the DXF file’s layers ${figure.image.layers.map((layer) => layer.name).join(', ')}.` : ''}
         {figure.image ? '' : figure.drawingLeftOut ? ' The plan’s drawing could not be read for printing (one stored before drawings were bounded may be too large: upload it again), so the runs are shown on a blank sheet.' : ' No drawing image is attached to this plan, so the runs are shown on a blank sheet.'}
       </Text>
       <View style={{ width, height, borderWidth: 0.5, borderColor: '#cfd1d4', position: 'relative' }}>
-        {figure.image && <Image src={figure.image} style={{ position: 'absolute', top: 0, left: 0, width, height, opacity: 0.8 }} />}
+        {figure.image && figure.image.format !== 'lines' && <Image src={figure.image} style={{ position: 'absolute', top: 0, left: 0, width, height, opacity: 0.8 }} />}
         <Svg width={width} height={height} viewBox={`${figure.originX} ${figure.originY} ${figure.widthPx} ${figure.heightPx}`} style={{ position: 'absolute', top: 0, left: 0 }}>
+          {figure.image?.format === 'lines' && figure.image.layers.map((layer) => (
+            <Path key={`drawing-${layer.name}`} d={layer.d} fill="none" stroke={DRAWING_LINE} strokeWidth={px(0.4)} />
+          ))}
           {figure.rooms.map((room, index) => (
             <Rect key={`room-${index}`} x={room.x} y={room.y} width={room.widthPx} height={room.heightPx} fill="none" stroke={ROOM_LINE} strokeWidth={px(0.8)} strokeDasharray={`${px(4)} ${px(2.5)}`} />
           ))}

@@ -57,7 +57,7 @@ describe('plan backgrounds', () => {
     const uploadsBefore = await Upload.count({ where: { teamId: team.team.id } });
     const answer = await upload('plan.png', new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg"></svg>'), 'image/png');
     expect(answer.status).toBe(400);
-    expect(answer.body.error).toMatchObject({ field: 'file', message: expect.stringContaining('is not a PNG, JPEG, WebP or PDF') });
+    expect(answer.body.error).toMatchObject({ field: 'file', message: expect.stringContaining('is not a PNG, JPEG, WebP, PDF or DXF file') });
     expect((await Plan.findByPk(planId))?.backgroundUploadId).toBe(before?.backgroundUploadId);
     expect(await Upload.count({ where: { teamId: team.team.id } })).toBe(uploadsBefore);
   });

@@ -12,6 +12,7 @@ import { setPlanBackground } from '@/lib/plans/data';
 import { createProject } from '@/lib/projects/data';
 import { storePlanBackground } from '@/lib/uploads/data';
 import { declaredPng, tinyPng } from '../helpers/files';
+import { sampleFloorPlan } from '../../helpers/dxf-sample';
 import { putObject } from '@/lib/storage/object-store';
 import { MAX_PRINTED_SIDE_PX } from '@/lib/uploads/pixel-limits';
 import { Upload } from '@/models';
@@ -126,5 +127,21 @@ describe('treatment schedule', () => {
     expect(text).not.toContain('No drawing image is attached');
     // The embedded image is the drawing at its own size (PDF 1.7, ISO 32000-1, 8.9.5: an image XObject's /Width and /Height).
     expect(Buffer.from(bytes).toString('latin1')).toMatch(/\/Width 1600\s*\/Height 1200|\/Height 1200[\s\S]{0,200}\/Width 1600|\/Width 1600[\s\S]{0,200}\/Height 1200/);
+  });
+});
+
+describe('treatment schedule with a DXF drawing', () => {
+  it('draws the DXF’s layers switched on in the file as lines under the runs, and names them', async () => {
+    const project = await createProject(t.team.id, t.members.acoustician.id, { name: 'Mill Yard Rehearsal Rooms', site: '' });
+    const dxfPlanId = await planWithRuns(t, project.id, 1, 'Level 2 supply');
+    const upload = await storePlanBackground(t.team.id, t.members.acoustician.id, 'level-2.dxf', new TextEncoder().encode(sampleFloorPlan('mm')));
+    await setPlanBackground(t.team.id, { id: t.members.acoustician.id, name: t.members.acoustician.name }, dxfPlanId, upload.id);
+    const revision = await submitted(t, dxfPlanId);
+    const { bytes } = await previewSchedule(t.team.id, revision.id);
+    const { text } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
+    // the column grid is off in the file (a negative colour number, AutoCAD DXF Reference LAYER group 62): not printed
+    expect(text.replace(/\s+/g, ' ')).toContain('The drawing is drawn from the DXF file’s layers Doors, Walls.');
+    expect(text).not.toContain('No drawing image is attached');
+    expect(text).not.toContain('could not be read for printing');
   });
 });

@@ -35,7 +35,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
       {active.length === 0 ? (
         <EmptyState title="No plans in this project">
           {mayEdit
-            ? 'Add a plan above. Then upload the architect’s drawing (PNG, JPEG, WebP or PDF) or keep the blank grid, set the scale from two points, and draw the first duct run from the fan.'
+            ? 'Add a plan above. Then upload the architect’s drawing (PNG, JPEG, WebP, PDF or DXF) or keep the blank grid, set the scale from two points, and draw the first duct run from the fan.'
             : 'When an acoustician adds a plan, it appears here.'}
         </EmptyState>
       ) : (

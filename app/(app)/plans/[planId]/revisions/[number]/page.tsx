@@ -14,6 +14,7 @@ import { revisionsPath, schedulePath } from '@/lib/revisions/links';
 import { isReviewOutcome, OUTCOME_MEANINGS } from '@/lib/revisions/states';
 import { listDecisions, raisedQueries, reviewTally } from '@/lib/reviews/data';
 import { listMembers } from '@/lib/team/members';
+import { planBackgroundOf } from '@/components/editor/canvas/plan-background';
 
 export const metadata: Metadata = { title: 'Revision' };
 
@@ -28,8 +29,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
   ]);
   const role = team.role;
   const canReview = can(role, 'review.write') && revision.state === 'waiting';
-  const background = revision.background?.widthPx && revision.background.heightPx
-    ? { url: `/api/v1/uploads/${revision.background.id}`, widthPx: revision.background.widthPx, heightPx: revision.background.heightPx } : null;
+  const background = planBackgroundOf(revision.background);
   return (
     <div className="space-y-6">
       <nav aria-label="Breadcrumb" className="text-sm text-graphite-500">

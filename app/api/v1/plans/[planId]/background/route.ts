@@ -3,21 +3,21 @@ import { AppError } from '@/lib/errors';
 import { json, route } from '@/lib/http/route';
 import { getPlan, setPlanBackground } from '@/lib/plans/data';
 import { planBackgroundSchema } from '@/lib/plans/schemas';
-import { MAX_UPLOAD_BYTES, requirePlanDrawing, storePlanBackground } from '@/lib/uploads/data';
+import { MAX_UPLOAD_BYTES, UPLOAD_TOO_LARGE, requirePlanDrawing, storePlanBackground } from '@/lib/uploads/data';
 
 type Params = { planId: string };
 
-const TOO_LARGE = 'The file is over 20 MB. Export the plan at a lower resolution.';
 // The file plus room for the multipart framing around it.
 const MAX_UPLOAD_BODY_BYTES = MAX_UPLOAD_BYTES + 64 * 1024;
 
-// Upload a plan background: PNG, JPEG or WebP up to 20 MB, or a PDF whose first page is used.
-export const POST = route<Params>({ access: 'plan.edit', maxBodyBytes: MAX_UPLOAD_BODY_BYTES, tooLarge: { message: TOO_LARGE, field: 'file' } }, async ({ team, actor, params, readForm }) => {
+// Upload a plan background: PNG, JPEG or WebP up to 20 MB, a PDF whose first page is used, or an ASCII DXF
+// (the answer's upload.dxf then gives the scale its units state, for the editor to take, and its layers).
+export const POST = route<Params>({ access: 'plan.edit', maxBodyBytes: MAX_UPLOAD_BODY_BYTES, tooLarge: { message: UPLOAD_TOO_LARGE, field: 'file' } }, async ({ team, actor, params, readForm }) => {
   await getPlan(team!.teamId, params.planId);
   const form = await readForm('file');
   const file = form.get('file');
   if (!(file instanceof File)) throw new AppError('bad_input', 'Choose a file to upload.', { field: 'file' });
-  if (file.size > MAX_UPLOAD_BYTES) throw new AppError('too_large', TOO_LARGE, { field: 'file' });
+  if (file.size > MAX_UPLOAD_BYTES) throw new AppError('too_large', UPLOAD_TOO_LARGE, { field: 'file' });
   const upload = await storePlanBackground(team!.teamId, actor!.user.id, file.name, new Uint8Array(await file.arrayBuffer()));
   await setPlanBackground(team!.teamId, auditActorOf(actor!), params.planId, upload.id);
   return json({ upload }, 201);
