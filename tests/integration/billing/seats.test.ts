@@ -6,10 +6,11 @@ import { PUT as seats } from '@/app/api/v1/team/billing/seats/route';
 import { DELETE as cancel } from '@/app/api/v1/team/billing/subscription/route';
 import { paymentService } from '@/lib/billing/stripe';
 import { sequelize } from '@/lib/db';
-import { TeamBilling } from '@/models';
+import { BillingEvent, TeamBilling } from '@/models';
 import { workWaitingJobs } from '../helpers/jobs';
 import { createTestTeam } from '../helpers/people';
 import { call } from '../helpers/routes';
+import { until } from '../helpers/until';
 import { signedDelivery } from '../helpers/webhooks';
 
 afterAll(async () => { await sequelize.close(); });
@@ -21,6 +22,9 @@ async function webhookFor(subscriptionId: string, type: string): Promise<number>
   const request = new Request('http://localhost/api/v1/billing/webhook', { method: 'POST', headers: { host: 'localhost', 'stripe-signature': signature }, body: payload });
   const { status } = await webhook(request, { params: Promise.resolve({}) });
   await workWaitingJobs(['apply-billing-event']);
+  // Another test file's process may have taken the job: wait until the event is applied there.
+  const eventIdSent = (JSON.parse(payload) as { id: string }).id;
+  await until(`event ${eventIdSent} applied`, async () => (await BillingEvent.findOne({ where: { providerEventId: eventIdSent } }))?.outcome !== 'queued', 20_000);
   return status;
 }
 
