@@ -18,6 +18,7 @@ export ANTINODE_DIST_DIR=.next-test
 # The test machine is shared with other work: the compute threads run at the normal priority here
 # (in service they run below the server's own thread; lib/compute/limits.ts).
 export ANTINODE_COMPUTE_NICE="${ANTINODE_COMPUTE_NICE:-0}"
+export ANTINODE_JOBS_NICE="${ANTINODE_JOBS_NICE:-0}"
 
 step "Unit tests"
 node node_modules/vitest/vitest.mjs run --project unit || fail "unit tests failed"

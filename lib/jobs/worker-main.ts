@@ -1,6 +1,7 @@
 // The job worker: a process beside the web server (npm start and the tests start it, npm run stop
 // stops it) that works the background jobs. On SIGTERM it takes no new job, lets the running ones
 // finish, then exits. Bundled into .compute/jobs-worker.mjs (scripts/build-worker.ts).
+import os from 'node:os';
 import { closeComputePool } from '@/lib/compute/pool';
 import { sequelize } from '@/lib/db';
 import { workAllQueues } from './handlers';
@@ -8,6 +9,17 @@ import { jobQueue, stopJobQueue } from './queue';
 
 /** How often an idle worker looks for new jobs, s. */
 const POLL_S = 1;
+/**
+ * Nice value of the worker (0 normal, 19 lowest; ANTINODE_JOBS_NICE): on a machine it shares with a
+ * web instance, rendering gives way to answering requests. Threads started later inherit it.
+ */
+const JOBS_NICE = Number(process.env.ANTINODE_JOBS_NICE ?? 10);
+
+try {
+  os.setPriority(0, JOBS_NICE);
+} catch {
+  // Not permitted on this system: the worker runs at the normal priority.
+}
 
 async function main(): Promise<void> {
   const boss = await jobQueue('worker');
