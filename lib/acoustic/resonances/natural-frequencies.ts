@@ -7,17 +7,22 @@
 // pass along the chain gives D and D'. The logarithmic derivative D'/D is deflated by the zeros already
 // found near the probe (Maehly: subtract 1/(f - z_i)), so the Newton prediction
 // f - 1/(D'/D - sum 1/(f - z_i)) points at the nearest zero not yet found. A prediction within the
-// probe's claim window is refined by Newton's method (newton-refine.ts: plain first, fastest from a
-// good seed since known zeros left and right balance; on the deflated function when it lands on a
-// known zero, which cannot return to one). Each new zero is deflated from the same probe's ratio at
-// no extra cost and the probe predicts again, so a close pair or a cluster of branch modes is found
-// from one probe: no missed or doubled modes.
+// probe's claim window (or further back, over ground the earlier probes covered: a zero their
+// predictions overshot) is refined by Newton's method on the deflated function (newton-refine.ts), which
+// cannot return to a known zero. Each new zero is deflated from the same probe's ratio at no extra cost
+// and the probe predicts again, so a close pair or a cluster of branch modes is found from one probe.
+//
+// What it promises: every zero damped less than the run's mean mode spacing (fi < c / 2L, a modal
+// overlap 2 fi / spacing under 2: modes that stand apart as peaks) is found, once. More damped zeros
+// are reported when a probe's prediction reaches them, which it does less surely the more they overlap.
+// Checked against an independent count of the zeros (the argument principle) and the mathjs oracle over
+// 500 random supply runs (tests/unit/acoustic/oracle/zero-count.test.ts).
 //
 // The local mode spacing is the mean gap of the last few zeros (bounded to a quarter and three times
 // the run's mean spacing c / (2 L)), so the probes follow the density of modes as it changes along
-// frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs two
-// probes and two or three Newton steps, each one pass along the chain, so an analysis costs about
-// (segments x resonances) work.
+// frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about two
+// probes and four Newton steps (bench/search.bench.ts prints the count), each one pass along the chain,
+// so an analysis costs about (segments x resonances) work.
 
 import type { NetworkEvaluator } from '../network/evaluator';
 import { refineZero, type RefineBounds } from './newton-refine';
@@ -39,6 +44,12 @@ export interface NaturalFrequencySearch {
 const PROBES_PER_SPACING = 2;
 /** A probe claims a predicted zero whose real part lies within this many probe steps of it. */
 const CLAIM_WINDOW_STEPS = 0.75;
+/**
+ * A prediction that points back, over ground the earlier probes covered, is claimed from further away: it
+ * means a zero those probes' predictions overshot (an isolated mode between two probes, or the second of
+ * a close pair), and a zero already known there is deflated, so it cannot be one of those.
+ */
+const BACKWARD_CLAIM_STEPS = 2;
 /** Zeros found from one probe at most (a cluster of close modes). */
 const MAX_CLAIMS_PER_PROBE = 8;
 /** Longest Newton step, in probe steps. */
@@ -147,17 +158,13 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         const stepIm = deflatedIm / ratioNorm;
         const predictedRe = probeRe + stepRe;
         const predictedIm = probeIm + stepIm;
-        if (Math.abs(stepRe) > claimWindowHz) break;
+        if (stepRe > claimWindowHz || -stepRe > BACKWARD_CLAIM_STEPS * stepHz) break;
         if (predictedIm < -stepHz || predictedIm > MAX_DAMPING_RATIO * predictedRe) break;
         const seedIm = Math.max(0, predictedIm);
         const seedStep = Math.hypot(stepRe, stepIm);
-        // Plain Newton first (fastest from a good seed); Maehly's deflation when it lands on a known zero.
-        bounds.deflationWindowHz = 0;
-        let zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds);
-        if (zero === null || found.contains(zero.frequencyHz, zero.dampingHz)) {
-          bounds.deflationWindowHz = REFINEMENT_DEFLATION_STEPS * stepHz;
-          zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds);
-        }
+        // Newton's method on D deflated by the zeros known near the probe (Maehly), so it cannot land on one of them.
+        bounds.deflationWindowHz = REFINEMENT_DEFLATION_STEPS * stepHz;
+        const zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds);
         if (zero === null || found.contains(zero.frequencyHz, zero.dampingHz)) break;
         found.add(zero.frequencyHz, zero.dampingHz);
         track.add(zero.frequencyHz, zero.dampingHz);

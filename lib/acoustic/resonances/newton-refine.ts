@@ -6,7 +6,12 @@ import type { NetworkEvaluator } from '../network/evaluator';
 import type { NaturalFrequency } from './natural-frequencies';
 import type { ZeroList } from './zero-list';
 
-const MAX_NEWTON_ITERATIONS = 24;
+const MAX_NEWTON_ITERATIONS = 40;
+/**
+ * Near a close pair of zeros Newton's steps first shrink only linearly (by about half each step, as at a
+ * double zero) until they are inside the pair; a seed is abandoned only when its steps shrink slower than this.
+ */
+const LINEAR_STEP_RATIO = 0.75;
 /** Target error of a refined zero, Hz, relative to its frequency (1e-8 Hz at 1 kHz). */
 const CONVERGED_RELATIVE = 1e-11;
 const CONVERGED_FLOOR_HZ = 1e-8;
@@ -69,7 +74,7 @@ export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: 
       return { frequencyHz: zRe, dampingHz: zIm };
     }
     // Near a simple zero Newton's steps shrink quadratically; a seed whose steps stop shrinking is abandoned.
-    if (iteration >= 6 && stepSize > 0.5 * previousStepSize) return null;
+    if (iteration >= 6 && stepSize > LINEAR_STEP_RATIO * previousStepSize) return null;
     previousStepSize = stepSize;
   }
   return null;

@@ -51,3 +51,33 @@ export const runArbitrary: fc.Arbitrary<RunInput> = fc.record({
   minHz: fc.constant(20),
   maxHz: fc.double({ min: 60, max: 300, noNaN: true }),
 });
+
+const openEnd = fc.record({ kind: fc.constant('open' as const), flange: fc.constantFrom('flanged' as const, 'unflanged' as const) });
+
+/** A supply run: the section changes at every joint, and side branches end at open outlets (now and then closed). */
+const supplySegment: fc.Arbitrary<Segment> = fc
+  .tuple(
+    fc.double({ min: 0.2, max: 4, noNaN: true }),
+    sectionArbitrary,
+    fc.option(
+      fc.array(
+        fc.record({
+          segments: fc.array(fc.record({ lengthM: fc.double({ min: 0.1, max: 2, noNaN: true }), section: sectionArbitrary }), { minLength: 1, maxLength: 2 }),
+          end: fc.oneof({ arbitrary: openEnd, weight: 4 }, { arbitrary: terminationArbitrary, weight: 1 }),
+        }) as fc.Arbitrary<Branch>,
+        { minLength: 1, maxLength: 2 },
+      ),
+      { freq: 2 },
+    ),
+  )
+  .map(([lengthM, section, branches]) => (branches ? { lengthM, section, branches } : { lengthM, section }));
+
+export const supplyRunArbitrary: fc.Arbitrary<RunInput> = fc.record({
+  walls: wallArbitrary,
+  segments: fc.array(supplySegment, { minLength: 2, maxLength: 8 }),
+  start: terminationArbitrary,
+  end: fc.oneof({ arbitrary: openEnd, weight: 3 }, { arbitrary: terminationArbitrary, weight: 1 }),
+  temperatureC: fc.double({ min: -20, max: 40, noNaN: true }),
+  minHz: fc.constant(20),
+  maxHz: fc.double({ min: 80, max: 300, noNaN: true }),
+});
