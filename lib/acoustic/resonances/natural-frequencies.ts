@@ -50,6 +50,10 @@ const CLAIM_WINDOW_STEPS = 0.75;
  * a close pair), and a zero already known there is deflated, so it cannot be one of those.
  */
 const BACKWARD_CLAIM_STEPS = 2;
+/** Newton steps a refinement may take before steps that stop shrinking abandon it (broad modes may wander first). */
+const PATIENT_ITERATIONS = 6;
+/** A backward prediction is a long shot: its refinement is abandoned as soon as its steps stop shrinking. */
+const BACKWARD_PATIENT_ITERATIONS = 2;
 /** Zeros found from one probe at most (a cluster of close modes). */
 const MAX_CLAIMS_PER_PROBE = 8;
 /** Longest Newton step, in probe steps. */
@@ -123,6 +127,7 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
     floorImHz: -modeSpacingHz / 2,
     maxDampingRatio: MAX_DAMPING_RATIO,
     deflationWindowHz: 0,
+    patientIterations: PATIENT_ITERATIONS,
   };
   let probeRe = Math.max(minHz / 2, minHz - modeSpacingHz / PROBES_PER_SPACING);
   for (;;) {
@@ -164,6 +169,7 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         const seedStep = Math.hypot(stepRe, stepIm);
         // Newton's method on D deflated by the zeros known near the probe (Maehly), so it cannot land on one of them.
         bounds.deflationWindowHz = REFINEMENT_DEFLATION_STEPS * stepHz;
+        bounds.patientIterations = stepRe < -claimWindowHz ? BACKWARD_PATIENT_ITERATIONS : PATIENT_ITERATIONS;
         const zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds);
         if (zero === null || found.contains(zero.frequencyHz, zero.dampingHz)) break;
         found.add(zero.frequencyHz, zero.dampingHz);

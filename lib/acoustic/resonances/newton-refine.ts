@@ -31,6 +31,8 @@ export interface RefineBounds {
   maxDampingRatio: number;
   /** Known zeros within this distance (real part) are deflated. */
   deflationWindowHz: number;
+  /** From this iteration on, a seed whose steps stop shrinking is abandoned. */
+  patientIterations: number;
 }
 
 /** Refined zero from (seedRe, seedIm); previousStepHz is the size of the step that produced the seed. Null if it fails or leaves bounds. */
@@ -74,7 +76,7 @@ export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: 
       return { frequencyHz: zRe, dampingHz: zIm };
     }
     // Near a simple zero Newton's steps shrink quadratically; a seed whose steps stop shrinking is abandoned.
-    if (iteration >= 6 && stepSize > LINEAR_STEP_RATIO * previousStepSize) return null;
+    if (iteration >= bounds.patientIterations && stepSize > LINEAR_STEP_RATIO * previousStepSize) return null;
     previousStepSize = stepSize;
   }
   return null;
