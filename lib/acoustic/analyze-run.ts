@@ -46,12 +46,18 @@ export function analyzeRun(input: RunInput): RunAnalysis {
     );
   }
   let resonances: Resonance[] = [];
+  const assumptions = runAssumptions(input);
   if (maxHz > minHz) {
     const endCorrectionsM = network.terminations.reduce((sum, termination) => sum + termination.lowFrequencyEndCorrectionM, 0);
     const modeSpacingHz = speedOfSoundMps / (2 * (network.totalLengthM + endCorrectionsM));
     const searchFromHz = Math.min(minHz, ORDER_SEARCH_FLOOR_SPACINGS * modeSpacingHz);
     const spacingHz = Math.min(modeSpacingHz, MAX_SPACING_OF_RANGE * (maxHz - searchFromHz));
     const zeros = findNaturalFrequencies(evaluator, { minHz: searchFromHz, maxHz, modeSpacingHz: spacingHz });
+    // What the search promises (natural-frequencies.ts): every zero damped less than the mean mode spacing c / 2L.
+    assumptions.push(
+      `Resonances: every one damped less than ${formatHz(speedOfSoundMps / (2 * network.totalLengthM))} (the mean mode spacing, so each stands apart as a peak) is listed; ` +
+        'more heavily damped, overlapping ones are listed where the search reaches them.',
+    );
     const hiddenBelow = zeros.filter((zero) => zero.frequencyHz < minHz).length;
     resonances = zeros.slice(hiddenBelow).map((zero, index) => {
       const damped = zero.dampingHz > UNDAMPED_FRACTION * zero.frequencyHz;
@@ -92,7 +98,7 @@ export function analyzeRun(input: RunInput): RunAnalysis {
     resonances,
     echoes,
     warnings,
-    assumptions: runAssumptions(input),
+    assumptions,
     broadbandRangesHz: broadbandRangesHz(resonances, resonances.map((resonance) => resonance.broadband)),
     minHz,
     maxHz,

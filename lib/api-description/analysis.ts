@@ -15,7 +15,7 @@ const RUN_ANALYSIS_FIELDS = {
   resonances: 'Each: order, frequencyHz, q, bandwidthHz, dampingHz, broadband, nodesM, antinodesM; pressureEnvelope only when asked for',
   echoes: 'The echo chart: delayS, amplitude, path',
   warnings: 'What to be careful of, in words',
-  assumptions: 'What the results assume (walls, lining, air, ends), in words',
+  assumptions: 'What the results assume (walls, lining, air, ends, which resonances are sure to be listed), in words',
   broadbandRangesHz: 'Ranges where the run responds broadly, [lowHz, highHz]',
   minHz: 'Bottom of the range analysed, Hz',
   maxHz: 'Top of the range analysed, Hz',
