@@ -117,8 +117,12 @@ describe('two web instances and a job worker on one database', () => {
     expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     expect(createHash('sha256').update(bytes).digest('hex')).toBe(issued.sha256);
     expect(download.headers.get('x-content-sha256')).toBe(issued.sha256);
-    // done once: one job for it, completed, and one "issued" line in the plan's activity
-    const [jobs] = await sequelize.query(`select state from pgboss.job where name = 'render-schedule' and data->>'scheduleId' = $1`, { bind: [schedule.id] });
+    // done once: one job for it, completed, and one "issued" line in the plan's activity. The job is marked
+    // completed just after its work commits the issued schedule, so the check waits for that mark (or a second job).
+    const jobs = await until('the render job marked completed', async () => {
+      const [rows] = (await sequelize.query(`select state from pgboss.job where name = 'render-schedule' and data->>'scheduleId' = $1`, { bind: [schedule.id] })) as [{ state: string }[], unknown];
+      return rows.length > 1 || rows[0]?.state === 'completed' ? rows : null;
+    }, 30_000);
     expect(jobs).toEqual([{ state: 'completed' }]);
     expect(await PlanActivity.count({ where: { teamId: t.team.id, planId, kind: 'schedule.issued' } })).toBe(1);
   });
