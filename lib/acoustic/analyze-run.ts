@@ -55,7 +55,8 @@ export function analyzeRun(input: RunInput): RunAnalysis {
     const zeros = findNaturalFrequencies(evaluator, { minHz: searchFromHz, maxHz, modeSpacingHz: spacingHz });
     // What the search promises (natural-frequencies.ts): every zero damped less than the mean mode spacing c / 2L.
     assumptions.push(
-      `Resonances: every one damped less than ${formatHz(speedOfSoundMps / (2 * network.totalLengthM))} (the mean mode spacing, so each stands apart as a peak) is listed; ` +
+      `Resonances: every one damped less than ${formatHz(speedOfSoundMps / (2 * network.totalLengthM))} (the mean mode spacing over all ${network.totalLengthM.toFixed(1)} m of duct, branches included, ` +
+        'so each stands apart as a peak) is listed; ' +
         'more heavily damped, overlapping ones are listed where the search reaches them.',
     );
     const hiddenBelow = zeros.filter((zero) => zero.frequencyHz < minHz).length;
