@@ -9,7 +9,7 @@ import { modeShape } from './resonances/mode-shape';
 import { attachLazyEnvelope } from './resonances/lazy-envelope';
 import { findNaturalFrequencies } from './resonances/natural-frequencies';
 import { broadbandFlags, broadbandRangesHz } from './resonances/broadband';
-import { flankingWarnings, runAssumptions } from './run-assumptions';
+import { flankingWarnings, resonanceListAssumption, runAssumptions } from './run-assumptions';
 import { lowestCutoffHz } from './run-cutoff';
 import type { Resonance, RunAnalysis, RunInput } from './types';
 import { validateRun } from './validate-run';
@@ -53,12 +53,7 @@ export function analyzeRun(input: RunInput): RunAnalysis {
     const searchFromHz = Math.min(minHz, ORDER_SEARCH_FLOOR_SPACINGS * modeSpacingHz);
     const spacingHz = Math.min(modeSpacingHz, MAX_SPACING_OF_RANGE * (maxHz - searchFromHz));
     const zeros = findNaturalFrequencies(evaluator, { minHz: searchFromHz, maxHz, modeSpacingHz: spacingHz });
-    // What the search promises (natural-frequencies.ts): every zero damped less than the mean mode spacing c / 2L.
-    assumptions.push(
-      `Resonances: every one damped less than ${formatHz(speedOfSoundMps / (2 * network.totalLengthM))} (the mean mode spacing over all ${network.totalLengthM.toFixed(1)} m of duct, branches included, ` +
-        'so each stands apart as a peak) is listed; ' +
-        'more heavily damped, overlapping ones are listed where the search reaches them.',
-    );
+    assumptions.push(resonanceListAssumption(network));
     const hiddenBelow = zeros.filter((zero) => zero.frequencyHz < minHz).length;
     resonances = zeros.slice(hiddenBelow).map((zero, index) => {
       const damped = zero.dampingHz > UNDAMPED_FRACTION * zero.frequencyHz;

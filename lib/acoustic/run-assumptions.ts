@@ -65,3 +65,15 @@ export function flankingWarnings(network: CompiledNetwork): string[] {
   if (branchCapped > 0) warnings.push(`${branchCapped} branch segment${branchCapped === 1 ? '' : 's'}: walls and lining limited to ${DUCT_FLANKING_CAP_DB} dB by flanking`);
   return warnings;
 }
+
+/**
+ * Which resonances the list is sure to hold: the search promises every one damped less than the mean
+ * mode spacing c / 2L over all the run's duct (resonances/natural-frequencies.ts).
+ */
+export function resonanceListAssumption(network: CompiledNetwork): string {
+  const spacingHz = network.speedOfSoundMps / (2 * network.totalLengthM);
+  return (
+    `Resonances: every one damped less than ${spacingHz.toFixed(1)} Hz (the mean mode spacing over all ${network.totalLengthM.toFixed(1)} m of duct, branches included, ` +
+    'so each stands apart as a peak) is listed; more heavily damped, overlapping ones are listed where the search reaches them.'
+  );
+}

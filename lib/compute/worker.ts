@@ -1,16 +1,12 @@
 // The entry of each worker thread in the compute pool (bundled by scripts/build-worker.ts).
-import os from 'node:os';
 import { COMPUTE_NICE } from './limits';
+import { lowerPriority } from './priority';
 import { runComputeTask, type ComputeTask, type TaskOutcome } from './tasks';
 import { CLOCK_UNKNOWN, currentThreadId, threadCpuMs } from './thread-clock';
 
 // On Linux each thread has its own nice value: the compute threads yield the processor to the
 // server's own thread (requests, health checks) and to the database whenever both want it.
-try {
-  os.setPriority(0, COMPUTE_NICE);
-} catch {
-  // Not permitted on this system: the threads run at the server's priority.
-}
+lowerPriority(COMPUTE_NICE);
 
 const THREAD_ID = currentThreadId();
 

@@ -1,8 +1,8 @@
 // The job worker: a process beside the web server (npm start and the tests start it, npm run stop
 // stops it) that works the background jobs. On SIGTERM it takes no new job, lets the running ones
 // finish, then exits. Bundled into .compute/jobs-worker.mjs (scripts/build-worker.ts).
-import os from 'node:os';
 import { closeComputePool } from '@/lib/compute/pool';
+import { lowerPriority } from '@/lib/compute/priority';
 import { sequelize } from '@/lib/db';
 import { workAllQueues } from './handlers';
 import { jobQueue, stopJobQueue } from './queue';
@@ -15,11 +15,7 @@ const POLL_S = 1;
  */
 const JOBS_NICE = Number(process.env.ANTINODE_JOBS_NICE ?? 10);
 
-try {
-  os.setPriority(0, JOBS_NICE);
-} catch {
-  // Not permitted on this system: the worker runs at the normal priority.
-}
+lowerPriority(JOBS_NICE);
 
 async function main(): Promise<void> {
   const boss = await jobQueue('worker');

@@ -18,10 +18,10 @@
 // Checked against an independent count of the zeros (the argument principle) and the mathjs oracle over
 // 500 random supply runs (tests/unit/acoustic/oracle/zero-count.test.ts).
 //
-// The local mode spacing is the mean gap of the last few zeros (bounded to a quarter and three times
+// The local mode spacing is the mean gap of the last few zeros (bounded to a quarter and twice
 // the run's mean spacing c / (2 L)), so the probes follow the density of modes as it changes along
 // frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about two
-// probes and four Newton steps (bench/search.bench.ts prints the count), each one pass along the chain,
+// probes and six Newton steps (some on predictions that lead nowhere) (bench/search.bench.ts prints the count), each one pass along the chain,
 // so an analysis costs about (segments x resonances) work.
 
 import type { NetworkEvaluator } from '../network/evaluator';
