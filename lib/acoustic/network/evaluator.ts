@@ -167,7 +167,14 @@ export class NetworkEvaluator {
     band: 0, weights: this.bandWeights.value, weightSlopes: this.bandWeights.slope,
   };
 
+  private preparedRe = NaN;
+  private preparedIm = NaN;
+
   private prepareFrequency(frequencyRe: number, frequencyIm: number): void {
+    // The mode shapes run each branch on its own at one frequency: prepare once for them all.
+    if (frequencyRe === this.preparedRe && frequencyIm === this.preparedIm) return;
+    this.preparedRe = frequencyRe;
+    this.preparedIm = frequencyIm;
     const wavenumberPerHz = (2 * Math.PI) / this.network.speedOfSoundMps;
     const wave = this.wave;
     wave.freeRe = wavenumberPerHz * frequencyRe;

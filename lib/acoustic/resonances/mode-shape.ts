@@ -45,6 +45,10 @@ function pushExtrema(list: number[], firstX: number, period: number, lengthM: nu
 }
 
 const trig = new Float64Array(4);
+// Read once: under module loaders that turn imports into getters, each read of an import is a call.
+const bandCount = BAND_COUNT;
+const curveValue = bandCurveValue;
+const cosSin = complexCosSin;
 const bandWeights = new BandCurveWeights();
 
 export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, sampler?: EnvelopeSampler): ModeShape {
@@ -73,7 +77,7 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, samp
     const impedance = network.segmentImpedance[segment];
     const loss = network.segmentKirchhoffPerSqrtHz[segment] * rootHz;
     const wavenumberRe = wavenumberPerHz * frequencyHz + loss;
-    const wavenumberIm = -loss - bandCurveValue(network.segmentBandNpPerM, network.segmentBandSlopes, segment * BAND_COUNT, bandWeights);
+    const wavenumberIm = -loss - curveValue(network.segmentBandNpPerM, network.segmentBandSlopes, segment * bandCount, bandWeights);
     // b = -j Zc U0
     const bRe = impedance * uIm;
     const bIm = -impedance * uRe;
@@ -92,7 +96,7 @@ export function modeShape(evaluator: NetworkEvaluator, frequencyHz: number, samp
     }
     sampler?.sampleSegment(offsetM, lengthM, wavenumberRe, wavenumberIm, pRe, pIm, bRe, bIm);
     // Carry the state to the segment's far end: [[cos, -j Zc sin], [-j sin / Zc, cos]]
-    complexCosSin(wavenumberRe * lengthM, wavenumberIm * lengthM, trig);
+    cosSin(wavenumberRe * lengthM, wavenumberIm * lengthM, trig);
     const cosRe = trig[0], cosIm = trig[1], sinRe = trig[2], sinIm = trig[3];
     const upperRe = impedance * sinIm;
     const upperIm = -impedance * sinRe;

@@ -30,6 +30,29 @@ describe('Q of a closed rectangular sheet-metal duct', () => {
     }
   });
 
+  it('a 60 m duct, whose broad modes overlap (damping about 2.5 mode spacings): every one from 21 to 139 Hz is listed, each at its n c / 2L', () => {
+    // Same physics, f_n = n c / 2L and fi = f / 2Q = c alpha / 2 pi: about 7 Hz of damping below 63 Hz against a
+    // spacing of 2.9 Hz. The modes stand far above the real axis, as a row; the search must still reach each one.
+    const longM = 60;
+    const spacingHz = c / (2 * longM);
+    const analysis = analyzeRun({ segments: [{ lengthM: longM / 2, section }, { lengthM: longM / 2, section }], start: { kind: 'closed' }, end: { kind: 'closed' }, minHz: 20, maxHz: 140 });
+    const inside = analysis.resonances.filter((resonance) => resonance.frequencyHz > 21 && resonance.frequencyHz < 139);
+    const firstOrder = Math.ceil(21 / spacingHz);
+    const lastOrder = Math.floor(139 / spacingHz);
+    expect(inside.length).toBe(lastOrder - firstOrder + 1);
+    inside.forEach((resonance, index) => {
+      expect(resonance.frequencyHz / ((firstOrder + index) * spacingHz)).toBeCloseTo(1, 2);
+      expect(resonance.dampingHz).toBeGreaterThan(spacingHz);
+    });
+    const air = airProperties(20);
+    const near125 = inside.reduce((best, resonance) => (Math.abs(resonance.frequencyHz - 125) < Math.abs(best.frequencyHz - 125) ? resonance : best));
+    const wallNp = unlinedDuctAttenuationDbPerM(section, [125])[0] / DB_PER_NEPER;
+    const airNp = kirchhoffAttenuationNpPerM(near125.frequencyHz, 4 * sideM, sideM * sideM, air);
+    const expectedQ = (Math.PI * near125.frequencyHz) / (c * (wallNp + airNp));
+    expect(near125.q).toBeGreaterThan(expectedQ * 0.95);
+    expect(near125.q).toBeLessThan(expectedQ * 1.05);
+  });
+
   it('rigid walls keep the air-only (Kirchhoff) Q, some 100 times higher', () => {
     const rigid = analyzeRun({ segments: [{ lengthM, section }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxHz: 140, walls: { kind: 'rigid' } });
     const sheet = analyzeRun({ segments: [{ lengthM, section }], start: { kind: 'closed' }, end: { kind: 'closed' }, maxHz: 140 });
