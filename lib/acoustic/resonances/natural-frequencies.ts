@@ -50,6 +50,14 @@ const CLAIM_WINDOW_STEPS = 0.75;
  * a close pair), and a zero already known there is deflated, so it cannot be one of those.
  */
 const BACKWARD_CLAIM_STEPS = 2;
+/**
+ * A backward prediction is refined only if deflating the known zeros within this many steps of the probe
+ * (not only those within PREDICTION_DEFLATION_STEPS) leaves it where it was (within BACKWARD_CHECK_SHIFT of
+ * its length): one that moves was pulled back by known zeros just outside the prediction's deflation
+ * window, not by a zero the earlier probes overshot. The check costs no evaluation.
+ */
+const BACKWARD_CHECK_DEFLATION_STEPS = 4;
+const BACKWARD_CHECK_SHIFT = 0.5;
 /** Newton steps a refinement may take before steps that stop shrinking abandon it (broad modes may wander first). */
 const PATIENT_ITERATIONS = 6;
 /** A backward prediction is a long shot: its refinement is abandoned as soon as its steps stop shrinking. */
@@ -115,6 +123,17 @@ class ZeroTrack {
   }
 }
 
+/** Whether the probe's Newton step (stepRe, stepIm) stays put when the known zeros within windowHz are deflated from its D'/D. */
+function survivesWiderDeflation(found: ZeroList, probeRe: number, probeIm: number, ratioRe: number, ratioIm: number, stepRe: number, stepIm: number, windowHz: number): boolean {
+  // A probe on a known zero cannot tell: the prediction is refined, as it would be without the check.
+  if (!found.deflate(probeRe, probeIm, ratioRe, ratioIm, windowHz)) return true;
+  const wideNorm = found.ratioRe * found.ratioRe + found.ratioIm * found.ratioIm;
+  if (wideNorm === 0) return true;
+  const wideStepRe = -found.ratioRe / wideNorm;
+  const wideStepIm = found.ratioIm / wideNorm;
+  return Math.hypot(wideStepRe - stepRe, wideStepIm - stepIm) <= BACKWARD_CHECK_SHIFT * Math.hypot(stepRe, stepIm);
+}
+
 /** All natural frequencies with real part in [minHz, maxHz] and Q >= 1, ascending. */
 export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: NaturalFrequencySearch): NaturalFrequency[] {
   const { minHz, maxHz, modeSpacingHz } = search;
@@ -165,11 +184,13 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         const predictedIm = probeIm + stepIm;
         if (stepRe > claimWindowHz || -stepRe > BACKWARD_CLAIM_STEPS * stepHz) break;
         if (predictedIm < -stepHz || predictedIm > MAX_DAMPING_RATIO * predictedRe) break;
+        const backward = stepRe < -claimWindowHz;
+        if (backward && !survivesWiderDeflation(found, probeRe, probeIm, ratioRe, ratioIm, stepRe, stepIm, BACKWARD_CHECK_DEFLATION_STEPS * stepHz)) break;
         const seedIm = Math.max(0, predictedIm);
         const seedStep = Math.hypot(stepRe, stepIm);
         // Newton's method on D deflated by the zeros known near the probe (Maehly), so it cannot land on one of them.
         bounds.deflationWindowHz = REFINEMENT_DEFLATION_STEPS * stepHz;
-        bounds.patientIterations = stepRe < -claimWindowHz ? BACKWARD_PATIENT_ITERATIONS : PATIENT_ITERATIONS;
+        bounds.patientIterations = backward ? BACKWARD_PATIENT_ITERATIONS : PATIENT_ITERATIONS;
         const zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds);
         if (zero === null || found.contains(zero.frequencyHz, zero.dampingHz)) break;
         found.add(zero.frequencyHz, zero.dampingHz);
