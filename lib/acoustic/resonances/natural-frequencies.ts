@@ -8,8 +8,10 @@
 // found near the probe (Maehly: subtract 1/(f - z_i)), so the Newton prediction
 // f - 1/(D'/D - sum 1/(f - z_i)) points at the nearest zero not yet found. A prediction within the
 // probe's claim window (or further back, over ground the earlier probes covered: a zero their
-// predictions overshot) is refined by Newton's method on the deflated function (newton-refine.ts), which
-// cannot return to a known zero. Each new zero is deflated from the same probe's ratio at no extra cost
+// predictions overshot, if it still points there once the known zeros further around are deflated too)
+// is refined by Newton's method on the deflated function (newton-refine.ts, with two-point steps that
+// carry the other zeros' background, the probe's sample the first of them), which cannot return to a
+// known zero. Each new zero is deflated from the same probe's ratio at no extra cost
 // and the probe predicts again, so a close pair or a cluster of branch modes is found from one probe.
 //
 // What it promises: every zero damped less than the run's mean mode spacing (fi < c / 2L, a modal
@@ -21,11 +23,12 @@
 // The local mode spacing is the mean gap of the last few zeros (bounded to a quarter and twice
 // the run's mean spacing c / (2 L)), so the probes follow the density of modes as it changes along
 // frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about 2.3
-// probes and 4 to 5 Newton steps, and 1.5 to 5 more on predictions that lead nowhere, the most on long
-// sheet-metal runs (bench/search.bench.ts prints the count), each one pass along the chain, so an analysis costs about (segments x resonances) work.
+// probes and 3.5 to 5 refinement steps, and 0.5 to 3 more on predictions that lead nowhere, the most on
+// long sheet-metal runs (bench/search.bench.ts prints the count), each one pass along the chain, so an analysis costs about (segments x resonances) work.
 
 import type { NetworkEvaluator } from '../network/evaluator';
 import { refineZero, type RefineBounds } from './newton-refine';
+import { RatioSample } from './ratio-sample';
 import { ZeroList } from './zero-list';
 
 export interface NaturalFrequency {
@@ -148,6 +151,7 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
     deflationWindowHz: 0,
     patientIterations: PATIENT_ITERATIONS,
   };
+  const probeSample = new RatioSample();
   let probeRe = Math.max(minHz / 2, minHz - modeSpacingHz / PROBES_PER_SPACING);
   for (;;) {
     const stepHz = track.spacingHz() / PROBES_PER_SPACING;
@@ -191,7 +195,10 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         // Newton's method on D deflated by the zeros known near the probe (Maehly), so it cannot land on one of them.
         bounds.deflationWindowHz = REFINEMENT_DEFLATION_STEPS * stepHz;
         bounds.patientIterations = backward ? BACKWARD_PATIENT_ITERATIONS : PATIENT_ITERATIONS;
-        const zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds);
+        // The probe's ratio, deflated as the refinement deflates, is the first sample of its two-point steps.
+        probeSample.held = found.deflate(probeRe, probeIm, ratioRe, ratioIm, bounds.deflationWindowHz);
+        if (probeSample.held) probeSample.set(probeRe, probeIm, found.ratioRe, found.ratioIm, found.deflatedFirst, found.deflatedLast);
+        const zero = refineZero(evaluator, predictedRe, seedIm, seedStep, found, bounds, probeSample);
         if (zero === null || found.contains(zero.frequencyHz, zero.dampingHz)) break;
         found.add(zero.frequencyHz, zero.dampingHz);
         track.add(zero.frequencyHz, zero.dampingHz);

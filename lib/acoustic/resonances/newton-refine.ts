@@ -3,8 +3,12 @@
 // Press et al., Numerical Recipes, 3rd ed., section 9.5). Stops once the error left, estimated from the
 // shrinking of the steps in the quadratic regime, is below the target. Where D is smooth and far from any
 // single zero, Newton crawls by nearly the same step again and again; there the steps are lengthened.
+// From the second sample on (the probe's counts as the first), the step goes to the zero of a model that
+// also carries the other zeros' background (two-point-step.ts) wherever that agrees with Newton's.
 import type { NetworkEvaluator } from '../network/evaluator';
 import type { NaturalFrequency } from './natural-frequencies';
+import { RatioSample } from './ratio-sample';
+import { twoPointZero } from './two-point-step';
 import type { ZeroList } from './zero-list';
 
 const MAX_NEWTON_ITERATIONS = 40;
@@ -39,6 +43,12 @@ const REPEAT_MIN_COSINE = 0.9;
 const REPEAT_GROWTH = 2;
 const REPEAT_MAX_GROWTH = 64;
 const REPEAT_MAX_STEPS = 4;
+/** The two-point model's zero is taken only within this many Newton steps of Newton's own prediction. */
+const TWO_POINT_TRUST = 1;
+
+const previousSample = new RatioSample();
+const currentSample = new RatioSample();
+const modelZero = new Float64Array(2);
 
 export interface RefineBounds {
   lowHz: number;
@@ -55,8 +65,13 @@ export interface RefineBounds {
   patientIterations: number;
 }
 
-/** Refined zero from (seedRe, seedIm); previousStepHz is the size of the step that produced the seed. Null if it fails or leaves bounds. */
-export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: number, previousStepHz: number, found: ZeroList, bounds: RefineBounds): NaturalFrequency | null {
+/**
+ * Refined zero from (seedRe, seedIm); previousStepHz is the size of the step that produced the seed, and
+ * probe (when held) the deflated D'/D it came from, deflated as the refinement deflates. Null if it fails or leaves bounds.
+ */
+export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: number, previousStepHz: number, found: ZeroList, bounds: RefineBounds, probe?: RatioSample): NaturalFrequency | null {
+  if (probe) previousSample.copy(probe);
+  else previousSample.held = false;
   let zRe = seedRe;
   let zIm = seedIm;
   let previousStepSize = previousStepHz;
@@ -82,6 +97,17 @@ export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: 
     if (ratioNorm === 0) return null;
     let stepRe = -deflatedRe / ratioNorm;
     let stepIm = deflatedIm / ratioNorm;
+    currentSample.set(zRe, zIm, deflatedRe, deflatedIm, found.deflatedFirst, found.deflatedLast);
+    const sameDeflation = previousSample.firstDeflated === currentSample.firstDeflated && previousSample.lastDeflated === currentSample.lastDeflated;
+    if (previousSample.held && sameDeflation && twoPointZero(previousSample, currentSample, modelZero)) {
+      const modelStepRe = modelZero[0] - zRe;
+      const modelStepIm = modelZero[1] - zIm;
+      if (Math.hypot(modelStepRe - stepRe, modelStepIm - stepIm) < TWO_POINT_TRUST * Math.hypot(stepRe, stepIm)) {
+        stepRe = modelStepRe;
+        stepIm = modelStepIm;
+      }
+    }
+    previousSample.copy(currentSample);
     const stepSize = Math.hypot(stepRe, stepIm);
     const cosine = (stepRe * previousStepRe + stepIm * previousStepIm) / (stepSize * previousStepSize);
     const repeats = iteration > 0 && cosine > REPEAT_MIN_COSINE && stepSize < REPEAT_SIZE_RATIO * previousStepSize && previousStepSize < REPEAT_SIZE_RATIO * stepSize;

@@ -14,6 +14,9 @@ export class ZeroList {
   /** The deflated ratio after deflate(). */
   ratioRe = 0;
   ratioIm = 0;
+  /** After deflate(): the positions of the first and last zero deflated (last < first when none). */
+  deflatedFirst = 0;
+  deflatedLast = -1;
 
   get length(): number {
     return this.count;
@@ -72,6 +75,7 @@ export class ZeroList {
     // Sorted: find the last zero at or below zRe + window, walk down to zRe - window.
     let index = this.count - 1;
     while (index >= 0 && this.re[index] > zRe + windowHz) index--;
+    const last = index;
     for (; index >= 0 && this.re[index] >= zRe - windowHz; index--) {
       const offsetRe = zRe - this.re[index];
       const offsetIm = zIm - this.im[index];
@@ -82,6 +86,8 @@ export class ZeroList {
     }
     this.ratioRe = deflatedRe;
     this.ratioIm = deflatedIm;
+    this.deflatedFirst = index + 1;
+    this.deflatedLast = last;
     return true;
   }
 
