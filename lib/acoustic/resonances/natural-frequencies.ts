@@ -23,7 +23,7 @@
 // The local mode spacing is the mean gap of the last few zeros (bounded to a quarter and twice
 // the run's mean spacing c / (2 L)), so the probes follow the density of modes as it changes along
 // frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about 2.3
-// probes and 3.5 to 5 refinement steps, and 0.5 to 3 more on predictions that lead nowhere, the most on
+// probes and 3 to 4.5 refinement steps, and 0.5 to 3 more on predictions that lead nowhere, the most on
 // long sheet-metal runs (bench/search.bench.ts prints the count), each one pass along the chain, so an analysis costs about (segments x resonances) work.
 
 import type { NetworkEvaluator } from '../network/evaluator';

@@ -24,6 +24,15 @@ function newtonFrom(at: Z, ratio: (f: Z) => Z): Z {
   return { re: at.re - step.re, im: at.im - step.im };
 }
 
+/** From a first sample and a second at its Newton prediction: the distances to the zero of the model's root and of Newton's next prediction. */
+function errorsFrom(first: Z, ratio: (f: Z) => Z, zero: Z): { model: number; newton: number } {
+  const second = newtonFrom(first, ratio);
+  const out = new Float64Array(2);
+  expect(twoPointZero(sample(first, ratio), sample(second, ratio), out)).toBe(true);
+  const newton = newtonFrom(second, ratio);
+  return { model: Math.hypot(out[0] - zero.re, out[1] - zero.im), newton: Math.hypot(newton.re - zero.re, newton.im - zero.im) };
+}
+
 describe('two-point step on the deflated logarithmic derivative', () => {
   const zero = { re: 100.3, im: 0.8 };
 
@@ -33,13 +42,9 @@ describe('two-point step on the deflated logarithmic derivative', () => {
       const pole = inverse({ re: f.re - zero.re, im: f.im - zero.im });
       return { re: pole.re + background.re, im: pole.im + background.im };
     };
-    const first = { re: 99.2, im: 0.3 };
-    const second = newtonFrom(first, ratio);
-    const out = new Float64Array(2);
-    expect(twoPointZero(sample(first, ratio), sample(second, ratio), out)).toBe(true);
-    expect(Math.hypot(out[0] - zero.re, out[1] - zero.im)).toBeLessThan(1e-9);
-    const newton = newtonFrom(second, ratio);
-    expect(Math.hypot(newton.re - zero.re, newton.im - zero.im)).toBeGreaterThan(1e-3);
+    const errors = errorsFrom({ re: 99.2, im: 0.3 }, ratio, zero);
+    expect(errors.model).toBeLessThan(1e-9);
+    expect(errors.newton).toBeGreaterThan(1e-3);
   });
 
   it('with a neighbouring zero as the background, lands closer than Newton from the same sample', () => {
@@ -49,13 +54,7 @@ describe('two-point step on the deflated logarithmic derivative', () => {
       const b = inverse({ re: f.re - neighbour.re, im: f.im - neighbour.im });
       return { re: a.re + b.re, im: a.im + b.im };
     };
-    const first = { re: 99.6, im: 0.5 };
-    const second = newtonFrom(first, ratio);
-    const out = new Float64Array(2);
-    expect(twoPointZero(sample(first, ratio), sample(second, ratio), out)).toBe(true);
-    const modelError = Math.hypot(out[0] - zero.re, out[1] - zero.im);
-    const newton = newtonFrom(second, ratio);
-    const newtonError = Math.hypot(newton.re - zero.re, newton.im - zero.im);
-    expect(modelError).toBeLessThan(newtonError / 2);
+    const errors = errorsFrom({ re: 99.6, im: 0.5 }, ratio, zero);
+    expect(errors.model).toBeLessThan(errors.newton / 2);
   });
 });
