@@ -11,8 +11,8 @@
 // predictions overshot, if it still points there once the known zeros further around are deflated too)
 // is refined by Newton's method on the deflated function (newton-refine.ts, with two-point steps that
 // carry the other zeros' background, the probe's sample the first of them), which cannot return to a
-// known zero. Each new zero is deflated from the same probe's ratio at no extra cost
-// and the probe predicts again, so a close pair or a cluster of branch modes is found from one probe.
+// known zero. Each new zero is deflated from the same probe's ratio at no extra cost and the probe
+// predicts again, so a close pair or a cluster of branch modes is found from one probe.
 //
 // What it promises: every zero damped less than the run's mean mode spacing (fi < c / 2L, a modal
 // overlap 2 fi / spacing under 2: modes that stand apart as peaks) is found, once. More damped zeros
@@ -24,7 +24,8 @@
 // the run's mean spacing c / (2 L)), so the probes follow the density of modes as it changes along
 // frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about 2.3
 // probes and 3 to 4.5 refinement steps, and 0.5 to 3 more on predictions that lead nowhere, the most on
-// long sheet-metal runs (bench/search.bench.ts prints the count), each one pass along the chain, so an analysis costs about (segments x resonances) work.
+// long sheet-metal runs (bench/search.bench.ts prints the count), each one pass along the chain, so an
+// analysis costs about (segments x resonances) work.
 
 import type { NetworkEvaluator } from '../network/evaluator';
 import { refineZero, type RefineBounds } from './newton-refine';
