@@ -3,8 +3,9 @@
 //
 // Method: a march of probes, two per local mode spacing, at the height (damping) of the zeros found
 // last: there the zeros' own terms dominate D'/D even when the modes are broad and overlap (on the
-// real axis a long lossy run's D'/D is nearly constant and shows no zero at all). At each probe one
-// pass along the chain gives D and D'. The logarithmic derivative D'/D is deflated by the zeros already
+// real axis a long lossy run's D'/D is nearly constant and shows no zero at all). Where broad modes of
+// low Q have lifted the probes above the promised height, a second probe looks from below. At each
+// probe one pass along the chain gives D and D'. The logarithmic derivative D'/D is deflated by the zeros already
 // found near the probe (Maehly: subtract 1/(f - z_i)), so the Newton prediction
 // f - 1/(D'/D - sum 1/(f - z_i)) points at the nearest zero not yet found. A prediction within the
 // probe's claim window (or further back, over ground the earlier probes covered: a zero their
@@ -22,11 +23,12 @@
 //
 // The local mode spacing is the mean gap of the last few zeros (bounded to a quarter and twice
 // the run's mean spacing c / (2 L)), so the probes follow the density of modes as it changes along
-// frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about 2.3
+// frequency (sections that change, branch modes): no fixed scan step to refine. A zero costs about 2.5
 // probes and 3 to 4.5 refinement steps, and 0.5 to 3 more on predictions that lead nowhere, the most on
 // long sheet-metal runs (bench/search.bench.ts prints the count), each one pass along the chain, so an
 // analysis costs about (segments x resonances) work.
 
+import { BROADBAND_Q } from '../constants';
 import type { NetworkEvaluator } from '../network/evaluator';
 import { refineZero, type RefineBounds } from './newton-refine';
 import { RatioSample } from './ratio-sample';
@@ -83,6 +85,13 @@ const SPACING_ZEROS = 4;
 /** Bounds of the local spacing, in mean spacings. */
 const MIN_SPACING_FRACTION = 0.25;
 const MAX_SPACING_FRACTION = 2;
+/**
+ * Probes lifted above the promised height (the mean mode spacing) by broad modes of low Q (under
+ * BROADBAND_Q: an open or absorbing end, say) could pass over a sharp mode beneath them. A second probe
+ * then looks from this fraction of the promised height, claims only predictions under it and refines
+ * them no higher. Broad modes of high Q (the overlapping modes of long sheet-metal runs) do not call for it.
+ */
+const LOW_PROBE_HEIGHT_FRACTION = 0.5;
 /** Zeros whose least damping gives the probes' height. */
 const HEIGHT_ZEROS = 3;
 /** Probes stay below this fraction of their real part. */
@@ -151,16 +160,15 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
     maxDampingRatio: MAX_DAMPING_RATIO,
     deflationWindowHz: 0,
     patientIterations: PATIENT_ITERATIONS,
+    maxDampingHz: Infinity,
   };
   const probeSample = new RatioSample();
   let probeRe = Math.max(minHz / 2, minHz - modeSpacingHz / PROBES_PER_SPACING);
-  for (;;) {
-    const stepHz = track.spacingHz() / PROBES_PER_SPACING;
-    if (probeRe - CLAIM_WINDOW_STEPS * stepHz > maxHz) break;
-    const probeIm = Math.min(track.heightHz(), MAX_PROBE_HEIGHT_RATIO * probeRe);
-    bounds.maxStepHz = MAX_NEWTON_STEP_IN_STEPS * stepHz;
-    bounds.floorImHz = -stepHz;
-    const claimWindowHz = CLAIM_WINDOW_STEPS * stepHz;
+  let stepHz = 0;
+  let claimWindowHz = 0;
+  /** One probe at (probeRe, probeIm): its prediction, and the zeros it claims (damped at most highestHz), refined. */
+  const probeAt = (probeIm: number, highestHz: number): void => {
+    bounds.maxDampingHz = highestHz;
     evaluator.characteristic(probeRe, probeIm, true);
     const valueNorm = evaluator.valueRe * evaluator.valueRe + evaluator.valueIm * evaluator.valueIm;
     if (valueNorm === 0) {
@@ -171,8 +179,7 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         found.add(zero.frequencyHz, zero.dampingHz);
         track.add(zero.frequencyHz, zero.dampingHz);
       }
-      probeRe += stepHz;
-      continue;
+      return;
     }
     const ratioRe = (evaluator.derivativeRe * evaluator.valueRe + evaluator.derivativeIm * evaluator.valueIm) / valueNorm;
     const ratioIm = (evaluator.derivativeIm * evaluator.valueRe - evaluator.derivativeRe * evaluator.valueIm) / valueNorm;
@@ -188,7 +195,7 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         const predictedRe = probeRe + stepRe;
         const predictedIm = probeIm + stepIm;
         if (stepRe > claimWindowHz || -stepRe > BACKWARD_CLAIM_STEPS * stepHz) break;
-        if (predictedIm < -stepHz || predictedIm > MAX_DAMPING_RATIO * predictedRe) break;
+        if (predictedIm < -stepHz || predictedIm > MAX_DAMPING_RATIO * predictedRe || predictedIm > highestHz) break;
         const backward = stepRe < -claimWindowHz;
         if (backward && !survivesWiderDeflation(found, probeRe, probeIm, ratioRe, ratioIm, stepRe, stepIm, BACKWARD_CHECK_DEFLATION_STEPS * stepHz)) break;
         const seedIm = Math.max(0, predictedIm);
@@ -211,6 +218,17 @@ export function findNaturalFrequencies(evaluator: NetworkEvaluator, search: Natu
         deflatedIm += offsetIm / offsetNorm;
       }
     }
+  };
+  for (;;) {
+    stepHz = track.spacingHz() / PROBES_PER_SPACING;
+    if (probeRe - CLAIM_WINDOW_STEPS * stepHz > maxHz) break;
+    const probeIm = Math.min(track.heightHz(), MAX_PROBE_HEIGHT_RATIO * probeRe);
+    bounds.maxStepHz = MAX_NEWTON_STEP_IN_STEPS * stepHz;
+    bounds.floorImHz = -stepHz;
+    claimWindowHz = CLAIM_WINDOW_STEPS * stepHz;
+    probeAt(probeIm, Infinity);
+    // Lifted above the promised height by broad modes of low Q (fi > fr / 2 Q): a second probe looks from below.
+    if (probeIm > modeSpacingHz && probeIm > probeRe / (2 * BROADBAND_Q)) probeAt(LOW_PROBE_HEIGHT_FRACTION * modeSpacingHz, modeSpacingHz);
     probeRe += stepHz;
   }
   return found

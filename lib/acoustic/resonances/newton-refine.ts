@@ -61,6 +61,8 @@ export interface RefineBounds {
   maxDampingRatio: number;
   /** Known zeros within this distance (real part) are deflated. */
   deflationWindowHz: number;
+  /** Highest damping allowed, Hz. */
+  maxDampingHz: number;
   /** From this iteration on, a seed whose steps stop shrinking is abandoned. */
   patientIterations: number;
 }
@@ -121,7 +123,7 @@ export function refineZero(evaluator: NetworkEvaluator, seedRe: number, seedIm: 
     stepIm *= scale;
     zRe += stepRe;
     zIm += stepIm;
-    if (zRe < bounds.lowHz || zRe > bounds.highHz || zIm > bounds.maxDampingRatio * zRe || zIm < bounds.floorImHz) return null;
+    if (zRe < bounds.lowHz || zRe > bounds.highHz || zIm > bounds.maxDampingRatio * zRe || zIm < bounds.floorImHz || zIm > bounds.maxDampingHz) return null;
     const toleranceHz = Math.max(CONVERGED_FLOOR_HZ, CONVERGED_RELATIVE * zRe);
     if (stepSize < toleranceHz) return { frequencyHz: zRe, dampingHz: zIm };
     // Quadratic regime: e_(n+1) ~ C e_n^2 with C ~ s_n / s_(n-1)^2, so the error left after this step is

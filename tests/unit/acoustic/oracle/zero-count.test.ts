@@ -7,7 +7,7 @@
 import fc from 'fast-check';
 import { complex, type Complex } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { analyzeRun } from '@/lib/acoustic';
+import { analyzeRun, type RunInput } from '@/lib/acoustic';
 import { compileNetwork } from '@/lib/acoustic/network/compile';
 import { NetworkEvaluator } from '@/lib/acoustic/network/evaluator';
 import { zerosInside } from './argument-principle';
@@ -86,4 +86,49 @@ describe('no missed or doubled modes on random supply runs (argument principle a
     expect(modesChecked).toBeGreaterThan(1000);
     console.log(`zero count: ${modesChecked} modes checked against the oracle; ${evaluations} evaluations of D along the contours`);
   }, 600_000); // thousands of oracle evaluations in mathjs: slow on a busy machine, never timed
+
+  it('a sharp mode beneath broad modes of low Q (both ends absorbing) is found, as the zero count says', () => {
+    // One of the random runs of another seed: the broad modes found first (Q about 1.1 and 1.6) lift the probes
+    // far above a sharp branch mode near 81.6 + 3.6j Hz, which a search along their line passed over.
+    const rect = (widthM: number, heightM: number) => ({ shape: 'rect' as const, widthM, heightM });
+    const round = (diameterM: number) => ({ shape: 'round' as const, diameterM });
+    const run: RunInput = {
+      walls: { kind: 'rigid' },
+      segments: [
+        { lengthM: 1.794, section: rect(0.494, 0.248) },
+        {
+          lengthM: 2.918,
+          section: rect(0.243, 0.412),
+          branches: [
+            { segments: [{ lengthM: 0.435, section: rect(0.099, 0.124) }], end: { kind: 'open', flange: 'unflanged' } },
+            { segments: [{ lengthM: 0.126, section: round(0.106) }, { lengthM: 1.373, section: round(0.227) }], end: { kind: 'open', flange: 'flanged' } },
+          ],
+        },
+        {
+          lengthM: 0.918,
+          section: round(0.463),
+          branches: [
+            { segments: [{ lengthM: 0.886, section: round(0.228) }, { lengthM: 0.236, section: rect(0.591, 0.067) }], end: { kind: 'anechoic' } },
+            { segments: [{ lengthM: 0.395, section: rect(0.42, 0.233) }], end: { kind: 'open', flange: 'unflanged' } },
+          ],
+        },
+      ],
+      start: { kind: 'anechoic' },
+      end: { kind: 'anechoic' },
+      temperatureC: 0,
+      minHz: 20,
+      maxHz: 105,
+    };
+    const analysis = analyzeRun(run);
+    const network = compileNetwork(run);
+    const evaluator = new NetworkEvaluator(network);
+    const spacingHz = network.speedOfSoundMps / (2 * network.totalLengthM);
+    const lowHz = 56;
+    const highHz = 94;
+    const corners = [{ re: lowHz, im: -spacingHz / 4 }, { re: highHz, im: -spacingHz / 4 }, { re: highHz, im: spacingHz }, { re: lowHz, im: spacingHz }];
+    const counted = Math.round(zerosInside(evaluator, corners, spacingHz / 16));
+    const inside = analysis.resonances.filter((resonance) => resonance.frequencyHz > lowHz && resonance.frequencyHz < highHz && resonance.dampingHz < spacingHz);
+    expect(counted).toBeGreaterThan(0);
+    expect(inside.length).toBe(counted);
+  });
 });
