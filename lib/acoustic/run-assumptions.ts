@@ -1,6 +1,7 @@
 // What a run's results assume, in words, for the results panel, the risk list and the schedule.
 import { DUCT_FLANKING_CAP_DB, DEFAULT_TEMPERATURE_C } from './constants';
 import type { CompiledNetwork } from './network/compile';
+import { PROMISED_DAMPING_SPACINGS } from './resonances/natural-frequencies';
 import type { RunInput, Segment, Termination, Wall } from './types';
 import { DEFAULT_WALL } from './walls/segment-attenuation';
 
@@ -67,13 +68,14 @@ export function flankingWarnings(network: CompiledNetwork): string[] {
 }
 
 /**
- * Which resonances the list is sure to hold: the search promises every one damped less than the mean
- * mode spacing c / 2L over all the run's duct (resonances/natural-frequencies.ts).
+ * Which resonances the list is sure to hold: the search promises every one damped less than half the
+ * mean mode spacing c / 2L over all the run's duct (resonances/natural-frequencies.ts).
  */
 export function resonanceListAssumption(network: CompiledNetwork): string {
   const spacingHz = network.speedOfSoundMps / (2 * network.totalLengthM);
+  const promisedHz = PROMISED_DAMPING_SPACINGS * spacingHz;
   return (
-    `Resonances: every one damped less than ${spacingHz.toFixed(1)} Hz (the mean mode spacing over all ${network.totalLengthM.toFixed(1)} m of duct, branches included, ` +
-    'so each stands apart as a peak) is listed; more heavily damped, overlapping ones are listed where the search reaches them.'
+    `Resonances: every one damped less than ${promisedHz.toFixed(1)} Hz (half the mean mode spacing over all ${network.totalLengthM.toFixed(1)} m of duct, branches included, ` +
+    'so each stands clear of its neighbours) is listed; more heavily damped, overlapping ones are listed where the search reaches them.'
   );
 }

@@ -8,7 +8,7 @@ import type { PlanRisks } from '../risks';
 import type { TreatmentOptions } from '../treatment-options';
 
 /** Raised whenever what an analysis holds changes, so stored analyses of older forms are recomputed. */
-export const ANALYSIS_FORMAT = 9;
+export const ANALYSIS_FORMAT = 10;
 
 /** How a chosen treatment stands on the plan as it is now. */
 export type TreatmentStanding =

@@ -1,4 +1,4 @@
-// The results say which resonances the search promises to list: every one damped less than the mean
+// The results say which resonances the search promises to list: every one damped less than half the mean
 // mode spacing c / 2L (a pipe's modes lie c / 2L apart: Kinsler & Frey, Fundamentals of Acoustics,
 // ch. 10; the promise itself is checked in tests/unit/acoustic/oracle/zero-count.test.ts).
 import { describe, expect, it } from 'vitest';
@@ -19,6 +19,6 @@ describe('the results state the search’s promise with the run’s own mode spa
     const spacingHz = speedOfSound(20) / (2 * 7);
     const line = analysis.assumptions.find((assumption) => assumption.startsWith('Resonances:'));
     expect(line).toBeDefined();
-    expect(line).toContain(`damped less than ${spacingHz.toFixed(1)} Hz (the mean mode spacing over all 7.0 m of duct`);
+    expect(line).toContain(`damped less than ${(spacingHz / 2).toFixed(1)} Hz (half the mean mode spacing over all 7.0 m of duct`);
   });
 });
